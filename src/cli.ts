@@ -1,0 +1,86 @@
+/**
+ * Headless entry: `npm run casefront -- <command> [file]`.
+ * Reads a JSON request from the file (or stdin), writes the JSON result to stdout;
+ * on bad input writes `{"error": {"code", "message", "field"?}}` and exits 1.
+ * Same engine as the app: it only parses, dispatches and words the messages.
+ */
+import { readFileSync } from 'node:fs';
+import { createI18n, errorMessage, warningMessage } from './i18n/i18n';
+import { caseDepth, temperatureForCaseDepth, timeForCaseDepth } from './physics/caseDepth';
+import { convertRequest } from './physics/conversions';
+import { equivalentTime } from './physics/equivalentTime';
+import type { InputError, Result, Warning } from './physics/result';
+
+type Command = (request: unknown) => Result<object>;
+
+/** Every command the CLI knows; later features register here. */
+export const COMMANDS: Record<string, Command> = {
+  depth: caseDepth,
+  time: timeForCaseDepth,
+  temperature: temperatureForCaseDepth,
+  convert: convertRequest,
+  'equivalent-time': equivalentTime,
+};
+
+const { t } = createI18n('en');
+
+interface CliError {
+  code: string;
+  message: string;
+  field?: string;
+}
+
+/** Adds the English sentence to every warning in a result, wherever it sits. */
+function wordWarnings(value: unknown): unknown {
+  if (Array.isArray(value)) return value.map(wordWarnings);
+  if (typeof value !== 'object' || value === null) return value;
+  const entries = Object.entries(value).map(([key, v]) =>
+    key === 'warnings' && Array.isArray(v)
+      ? [key, (v as Warning[]).map((w) => ({ ...w, message: warningMessage(t, w) }))]
+      : [key, wordWarnings(v)],
+  );
+  return Object.fromEntries(entries);
+}
+
+const inputError = (error: InputError): CliError => ({
+  code: error.code,
+  message: errorMessage(t, error),
+  ...(error.field === undefined ? {} : { field: error.field }),
+});
+
+/** Runs one command on the request text; returns what to print and the exit code. */
+export function runCli(args: readonly string[], readInput: (file?: string) => string): { output: object; exitCode: number } {
+  const [name, file] = args;
+  const command = name === undefined ? undefined : COMMANDS[name];
+  if (!command) {
+    const known = Object.keys(COMMANDS).join(', ');
+    return {
+      output: { error: { code: 'cli.unknownCommand', message: t('cli.unknownCommand', { name: name ?? '', known }) } },
+      exitCode: 1,
+    };
+  }
+  let text: string;
+  try {
+    text = readInput(file);
+  } catch {
+    return { output: { error: { code: 'cli.unreadable', message: t('cli.unreadable', { file: file ?? 'stdin' }) } }, exitCode: 1 };
+  }
+  let request: unknown;
+  try {
+    request = JSON.parse(text);
+  } catch {
+    return { output: { error: { code: 'cli.invalidJson', message: t('cli.invalidJson') } }, exitCode: 1 };
+  }
+  const result = command(request);
+  return result.ok
+    ? { output: wordWarnings(result.value) as object, exitCode: 0 }
+    : { output: { error: inputError(result.error) }, exitCode: 1 };
+}
+
+const readInput = (file?: string) => readFileSync(file === undefined || file === '-' ? 0 : file, 'utf8');
+
+if (process.argv[1] && /cli\.[tj]s$/.test(process.argv[1])) {
+  const { output, exitCode } = runCli(process.argv.slice(2), readInput);
+  process.stdout.write(`${JSON.stringify(output, null, 2)}\n`);
+  process.exitCode = exitCode;
+}

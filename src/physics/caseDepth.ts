@@ -1,0 +1,268 @@
+/**
+ * The case-depth calculators behind the CLI's `depth`, `time` and `temperature`
+ * commands and the app's first screen: validated requests in, typed results out.
+ * Depths in mm, time in h, temperature in °C, carbon in wt% at this boundary; SI inside.
+ */
+import {
+  atmosphereTemperatureWarning,
+  modelRangeWarning,
+  retainedAusteniteWarning,
+  saturationWarnings,
+} from './cautions';
+import { constantSurfaceDepth, constantSurfaceTime, diffusionLength } from './closedForm';
+import { effectiveDiffusivity, MODEL_IDS, type DiffusivityModelId } from './diffusivity';
+import { asQuenchedHardnessHrc } from './hardness';
+import { fail, ok, type Result, type Warning } from './result';
+import { brentRoot } from './rootFinding';
+import { harrisTotalCaseDepthMm } from './rulesOfThumb';
+import { alloyFactor, DEFAULT_ECD_THRESHOLD_PCT, totalCaseThresholdPct, type Composition } from './steel';
+import { celsiusToKelvin, SECONDS_PER_HOUR } from './units';
+import {
+  asFields,
+  checkCarbonPct,
+  checkDepthMm,
+  checkTemperatureC,
+  checkTimeH,
+  readChecked,
+  readComposition,
+  readModel,
+  readOptionalNumber,
+  type Fields,
+} from './validate';
+
+/** Temperatures searched when solving for temperature, °C. */
+export const TEMPERATURE_SEARCH_C = { min: 800, max: 1100 } as const;
+/** Step for the "±10 °C changes the depth by …" figure, °C. */
+export const SENSITIVITY_STEP_C = 10;
+
+/** The steel and the carbon levels that define a case, read once from a request. */
+export interface CaseSpec {
+  /** Surface carbon held during the cycle, wt% (after the alloy factor when given as a potential). */
+  surfaceCarbonPct: number;
+  /** Atmosphere carbon potential, wt%, when the request gave one (or it follows from surface and alloy factor). */
+  carbonPotentialPct: number;
+  coreCarbonPct: number;
+  thresholdCarbonPct: number;
+  model: DiffusivityModelId;
+  composition?: Composition;
+  /** Gunnarson alloy factor applied between potential and surface carbon (1 for plain carbon). */
+  alloyFactor: number;
+}
+
+export interface DepthFigures {
+  effectiveCaseDepthMm: number;
+  totalCaseDepthMm: number;
+  sqrtDtMm: number;
+  diffusivityM2PerS: number;
+}
+
+export interface CaseDepthResult extends DepthFigures {
+  temperatureC: number;
+  timeH: number;
+  surfaceCarbonPct: number;
+  carbonPotentialPct: number;
+  coreCarbonPct: number;
+  thresholdCarbonPct: number;
+  totalCaseThresholdPct: number;
+  alloyFactor: number;
+  model: DiffusivityModelId;
+  /** Harris (1943) total case depth: surface at saturation, time at temperature. */
+  harrisDepthMm: number;
+  /** Effective case depth under each diffusivity model, and their range. */
+  modelRangeMm: { min: number; max: number; byModel: Record<DiffusivityModelId, number> };
+  /** Effective case depth with the temperature 10 °C lower and higher. */
+  temperatureSensitivity: { stepC: number; minusMm: number; plusMm: number };
+  /** Indicative maximum as-quenched surface hardness, HRC. */
+  surfaceHardnessHrc: number;
+  warnings: Warning[];
+}
+
+export interface TimeResult extends CaseDepthResult {
+  targetDepthMm: number;
+  /** Time needed under each diffusivity model, and their range, h. */
+  modelRangeH: { min: number; max: number };
+}
+
+export interface TemperatureResult extends CaseDepthResult {
+  targetDepthMm: number;
+  /** Temperature needed under each diffusivity model, and their range, °C (absent when a model cannot reach it). */
+  modelRangeC?: { min: number; max: number };
+}
+
+/** Reads surface, core, threshold, model and composition, with their cross-checks. */
+export function readCaseSpec(fields: Fields): Result<CaseSpec> {
+  const model = readModel(fields);
+  if (!model.ok) return model;
+  const composition = readComposition(fields);
+  if (!composition.ok) return composition;
+  const factor = composition.value ? alloyFactor(composition.value) : 1;
+  const core = readChecked(fields, 'coreCarbonPct', checkCarbonPct);
+  if (!core.ok) return core;
+  const given = readOptionalNumber(fields, 'surfaceCarbonPct');
+  if (!given.ok) return given;
+  const potential = readOptionalNumber(fields, 'carbonPotentialPct');
+  if (!potential.ok) return potential;
+  if (given.value === undefined && potential.value === undefined) return fail('field.missing', 'surfaceCarbonPct');
+  const surfaceField = given.value === undefined ? 'carbonPotentialPct' : 'surfaceCarbonPct';
+  const potentialPct = potential.value ?? given.value! / factor;
+  const checkedPotential = checkCarbonPct(potentialPct, 'carbonPotentialPct');
+  if (!checkedPotential.ok) return checkedPotential;
+  const surface = checkCarbonPct(given.value ?? potentialPct * factor, surfaceField);
+  if (!surface.ok) return surface;
+  if (!(surface.value > core.value)) {
+    return fail('carbon.surfaceNotAboveCore', surfaceField, { surfacePct: surface.value, corePct: core.value });
+  }
+  const threshold = readOptionalNumber(fields, 'thresholdCarbonPct');
+  if (!threshold.ok) return threshold;
+  const thresholdPct = threshold.value ?? DEFAULT_ECD_THRESHOLD_PCT;
+  if (!(thresholdPct > core.value && thresholdPct < surface.value)) {
+    return fail('threshold.outsideProfile', 'thresholdCarbonPct', {
+      thresholdPct,
+      corePct: core.value,
+      surfacePct: surface.value,
+    });
+  }
+  return ok({
+    surfaceCarbonPct: surface.value,
+    carbonPotentialPct: potentialPct,
+    coreCarbonPct: core.value,
+    thresholdCarbonPct: thresholdPct,
+    model: model.value,
+    ...(composition.value ? { composition: composition.value } : {}),
+    alloyFactor: factor,
+  });
+}
+
+/** Effective and total case depth, √(Dt) and D for one model, temperature and time. */
+export function depthFigures(spec: CaseSpec, temperatureC: number, timeH: number, model = spec.model): DepthFigures {
+  const D = effectiveDiffusivity(model, celsiusToKelvin(temperatureC), spec.surfaceCarbonPct, spec.coreCarbonPct);
+  const timeS = timeH * SECONDS_PER_HOUR;
+  const totalThreshold = totalCaseThresholdPct(spec.coreCarbonPct);
+  const depthMm = (thresholdPct: number) =>
+    thresholdPct >= spec.surfaceCarbonPct
+      ? 0
+      : constantSurfaceDepth(timeS, D, spec.surfaceCarbonPct, spec.coreCarbonPct, thresholdPct) * 1e3;
+  return {
+    effectiveCaseDepthMm: depthMm(spec.thresholdCarbonPct),
+    totalCaseDepthMm: depthMm(totalThreshold),
+    sqrtDtMm: diffusionLength(D, timeS) * 1e3,
+    diffusivityM2PerS: D,
+  };
+}
+
+/** All figures for a valid spec at a temperature and time. */
+export function evaluateCaseDepth(spec: CaseSpec, temperatureC: number, timeH: number): CaseDepthResult {
+  const byModel = Object.fromEntries(
+    MODEL_IDS.map((id) => [id, depthFigures(spec, temperatureC, timeH, id).effectiveCaseDepthMm]),
+  ) as Record<DiffusivityModelId, number>;
+  const depths = Object.values(byModel);
+  const ecdAt = (tempC: number) => depthFigures(spec, tempC, timeH).effectiveCaseDepthMm;
+  const meanCarbonPct = (spec.surfaceCarbonPct + spec.coreCarbonPct) / 2;
+  return {
+    ...depthFigures(spec, temperatureC, timeH),
+    temperatureC,
+    timeH,
+    surfaceCarbonPct: spec.surfaceCarbonPct,
+    carbonPotentialPct: spec.carbonPotentialPct,
+    coreCarbonPct: spec.coreCarbonPct,
+    thresholdCarbonPct: spec.thresholdCarbonPct,
+    totalCaseThresholdPct: totalCaseThresholdPct(spec.coreCarbonPct),
+    alloyFactor: spec.alloyFactor,
+    model: spec.model,
+    harrisDepthMm: harrisTotalCaseDepthMm(timeH, temperatureC),
+    modelRangeMm: { min: Math.min(...depths), max: Math.max(...depths), byModel },
+    temperatureSensitivity: {
+      stepC: SENSITIVITY_STEP_C,
+      minusMm: ecdAt(temperatureC - SENSITIVITY_STEP_C),
+      plusMm: ecdAt(temperatureC + SENSITIVITY_STEP_C),
+    },
+    surfaceHardnessHrc: asQuenchedHardnessHrc(spec.surfaceCarbonPct),
+    warnings: [
+      ...saturationWarnings(temperatureC, spec.surfaceCarbonPct, spec.carbonPotentialPct),
+      ...atmosphereTemperatureWarning(temperatureC),
+      ...retainedAusteniteWarning(spec.surfaceCarbonPct),
+      ...modelRangeWarning(temperatureC, meanCarbonPct),
+    ],
+  };
+}
+
+/** `depth`: case depths after `timeH` at `temperatureC`. */
+export function caseDepth(request: unknown): Result<CaseDepthResult> {
+  const fields = asFields(request);
+  if (!fields.ok) return fields;
+  const temperature = readChecked(fields.value, 'temperatureC', checkTemperatureC);
+  if (!temperature.ok) return temperature;
+  const time = readChecked(fields.value, 'timeH', checkTimeH);
+  if (!time.ok) return time;
+  const spec = readCaseSpec(fields.value);
+  if (!spec.ok) return spec;
+  return ok(evaluateCaseDepth(spec.value, temperature.value, time.value));
+}
+
+/** Time at temperature for the effective case depth to reach `depthMm`, h. */
+export function timeForDepthH(spec: CaseSpec, temperatureC: number, depthMm: number, model = spec.model): number {
+  const D = effectiveDiffusivity(model, celsiusToKelvin(temperatureC), spec.surfaceCarbonPct, spec.coreCarbonPct);
+  const timeS = constantSurfaceTime(depthMm * 1e-3, D, spec.surfaceCarbonPct, spec.coreCarbonPct, spec.thresholdCarbonPct);
+  return timeS / SECONDS_PER_HOUR;
+}
+
+/** `time`: how long at `temperatureC` for an effective case depth of `targetDepthMm`. */
+export function timeForCaseDepth(request: unknown): Result<TimeResult> {
+  const fields = asFields(request);
+  if (!fields.ok) return fields;
+  const temperature = readChecked(fields.value, 'temperatureC', checkTemperatureC);
+  if (!temperature.ok) return temperature;
+  const target = readChecked(fields.value, 'targetDepthMm', checkDepthMm);
+  if (!target.ok) return target;
+  const spec = readCaseSpec(fields.value);
+  if (!spec.ok) return spec;
+  const timeH = timeForDepthH(spec.value, temperature.value, target.value);
+  const checkedTime = checkTimeH(timeH, 'targetDepthMm');
+  if (!checkedTime.ok) return checkedTime;
+  const times = MODEL_IDS.map((id) => timeForDepthH(spec.value, temperature.value, target.value, id));
+  return ok({
+    ...evaluateCaseDepth(spec.value, temperature.value, timeH),
+    targetDepthMm: target.value,
+    modelRangeH: { min: Math.min(...times), max: Math.max(...times) },
+  });
+}
+
+/**
+ * Temperature in 800–1100 °C at which `timeH` gives the effective case depth `depthMm`,
+ * by Brent's method on depth(T) − target (depth rises with T).
+ */
+export function temperatureForDepthC(
+  spec: CaseSpec,
+  timeH: number,
+  depthMm: number,
+  model = spec.model,
+): Result<number> {
+  const excess = (tempC: number) => depthFigures(spec, tempC, timeH, model).effectiveCaseDepthMm - depthMm;
+  const { min, max } = TEMPERATURE_SEARCH_C;
+  if (excess(max) < 0) return fail('solve.temperatureAboveRange', 'targetDepthMm', { minC: min, maxC: max });
+  if (excess(min) > 0) return fail('solve.temperatureBelowRange', 'targetDepthMm', { minC: min, maxC: max });
+  const root = brentRoot(excess, min, max, 1e-13);
+  return root ? ok(root.x) : fail('solve.noConvergence', 'targetDepthMm');
+}
+
+/** `temperature`: which temperature gives `targetDepthMm` in `timeH`. */
+export function temperatureForCaseDepth(request: unknown): Result<TemperatureResult> {
+  const fields = asFields(request);
+  if (!fields.ok) return fields;
+  const time = readChecked(fields.value, 'timeH', checkTimeH);
+  if (!time.ok) return time;
+  const target = readChecked(fields.value, 'targetDepthMm', checkDepthMm);
+  if (!target.ok) return target;
+  const spec = readCaseSpec(fields.value);
+  if (!spec.ok) return spec;
+  const temperature = temperatureForDepthC(spec.value, time.value, target.value);
+  if (!temperature.ok) return temperature;
+  const temps = MODEL_IDS.map((id) => temperatureForDepthC(spec.value, time.value, target.value, id))
+    .filter((r) => r.ok)
+    .map((r) => r.value);
+  return ok({
+    ...evaluateCaseDepth(spec.value, temperature.value, time.value),
+    targetDepthMm: target.value,
+    ...(temps.length === MODEL_IDS.length ? { modelRangeC: { min: Math.min(...temps), max: Math.max(...temps) } } : {}),
+  });
+}

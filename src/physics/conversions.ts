@@ -1,0 +1,49 @@
+/**
+ * The `convert` request: one value between units of a quantity, or into every unit
+ * of it. Hardness (HRC ↔ HV) is included and always marked approximate.
+ */
+import { hrcToHv, hvToHrc } from './hardness';
+import { fail, ok, type Result } from './result';
+import { convert, quantityOf, UNITS } from './units';
+import { asFields, readNumber } from './validate';
+
+export interface ConversionResult {
+  quantity: string;
+  value: number;
+  from: string;
+  /** The value in each requested unit. */
+  values: Record<string, number>;
+  /** True for hardness: ASTM E140 values from memory; use the standard's tables for acceptance. */
+  approximate: boolean;
+}
+
+const HARDNESS_UNITS = ['HRC', 'HV'] as const;
+
+function convertHardness(value: number, from: string, to: string): Result<number> {
+  if (from === to) return ok(value);
+  const out = from === 'HRC' ? hrcToHv(value) : hvToHrc(value);
+  return out === undefined ? fail('hardness.outOfTable', 'value', { value, unit: from }) : ok(out);
+}
+
+/** `convert`: request `{value, from, to?}`; without `to`, into every unit of the quantity. */
+export function convertRequest(request: unknown): Result<ConversionResult> {
+  const fields = asFields(request);
+  if (!fields.ok) return fields;
+  const value = readNumber(fields.value, 'value');
+  if (!value.ok) return value;
+  const from = String(fields.value.from ?? '');
+  const isHardness = (HARDNESS_UNITS as readonly string[]).includes(from);
+  const quantity = isHardness ? 'hardness' : quantityOf(from);
+  if (!quantity) return fail('unit.unknown', 'from', { unit: from });
+  const allUnits: readonly string[] = isHardness ? HARDNESS_UNITS : UNITS[quantity as keyof typeof UNITS];
+  const to = fields.value.to;
+  if (to !== undefined && !allUnits.includes(String(to))) return fail('unit.unknown', 'to', { unit: String(to) });
+  const targets = to === undefined ? allUnits : [String(to)];
+  const values: Record<string, number> = {};
+  for (const unit of targets) {
+    const out = isHardness ? convertHardness(value.value, from, unit) : convert(value.value, from, unit);
+    if (!out.ok) return out;
+    values[unit] = out.value;
+  }
+  return ok({ quantity, value: value.value, from, values, approximate: isHardness });
+}

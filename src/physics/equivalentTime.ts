@@ -1,0 +1,161 @@
+/**
+ * Equivalent time at the set temperature for a furnace's real temperature history.
+ * With D following Arrhenius, time at a varying T(t) is worth
+ * t_eq = ∫ D(T(t)) / D(T_set) dt at T_set (common practice for ramps and upsets).
+ * Below 727 °C (Fe–C eutectoid) there is no austenite, so that time counts as zero.
+ */
+import { DIFFUSIVITY_MODELS, type DiffusivityModelId } from './diffusivity';
+import { fail, ok, type Result } from './result';
+import { celsiusToKelvin } from './units';
+import {
+  asFields,
+  checkCarbonPct,
+  checkTemperatureC,
+  checkTimeH,
+  readChecked,
+  readModel,
+  readNumber,
+  readOptionalNumber,
+} from './validate';
+
+/** Fe–C eutectoid temperature, °C: austenite exists only above it (Fe–Fe₃C diagram). */
+export const EUTECTOID_TEMP_C = 727;
+/** Carbon at which D is evaluated when the request gives none: mid-case (common practice), wt%. */
+export const DEFAULT_HISTORY_CARBON_PCT = 0.5;
+/** Hottest reading accepted in a history, °C. */
+export const MAX_HISTORY_TEMP_C = 1150;
+/** Simpson intervals per linear piece of the history (D varies smoothly within a piece). */
+const SIMPSON_INTERVALS = 64;
+
+export interface HistoryPoint {
+  timeH: number;
+  temperatureC: number;
+}
+
+export interface EquivalentTimeResult {
+  setTemperatureC: number;
+  model: DiffusivityModelId;
+  carbonPct: number;
+  /** Clock time covered by the history, h. */
+  elapsedH: number;
+  /** Time at the set temperature with the same diffusion, h. */
+  equivalentTimeH: number;
+  /** Elapsed minus equivalent: the diffusion time lost to running cool (negative when running hot), h. */
+  lostTimeH: number;
+  /** Soak the recipe asks for at the set temperature, h, when given. */
+  requiredTimeH?: number;
+  /** Further time at the set temperature to reach the required soak, h (0 when already reached). */
+  extraTimeH?: number;
+}
+
+/** ∫ D(T)/D(T_set) dt over one linear piece from (t0, T0) to (t1, T1), in the unit of t. */
+function pieceEquivalent(
+  ratio: (tempC: number) => number,
+  t0: number,
+  temp0: number,
+  t1: number,
+  temp1: number,
+): number {
+  if (t1 <= t0) return 0;
+  const cut = EUTECTOID_TEMP_C;
+  if ((temp0 - cut) * (temp1 - cut) < 0) {
+    // Split where the piece crosses the eutectoid so Simpson never straddles the jump to zero.
+    const tc = t0 + ((cut - temp0) / (temp1 - temp0)) * (t1 - t0);
+    return pieceEquivalent(ratio, t0, temp0, tc, cut) + pieceEquivalent(ratio, tc, cut, t1, temp1);
+  }
+  if (Math.max(temp0, temp1) <= cut) return 0;
+  const n = SIMPSON_INTERVALS;
+  const h = (t1 - t0) / n;
+  let sum = 0;
+  for (let i = 0; i <= n; i++) {
+    const weight = i === 0 || i === n ? 1 : i % 2 === 1 ? 4 : 2;
+    sum += weight * ratio(temp0 + ((temp1 - temp0) * i) / n);
+  }
+  return (sum * h) / 3;
+}
+
+/** Equivalent time at `setTemperatureC` for a validated history, h. */
+export function equivalentTimeH(
+  history: readonly HistoryPoint[],
+  setTemperatureC: number,
+  model: DiffusivityModelId,
+  carbonPct: number,
+): number {
+  const diffusivity = DIFFUSIVITY_MODELS[model].diffusivity;
+  const reference = diffusivity(celsiusToKelvin(setTemperatureC), carbonPct);
+  const ratio = (tempC: number) =>
+    tempC <= EUTECTOID_TEMP_C ? 0 : diffusivity(celsiusToKelvin(tempC), carbonPct) / reference;
+  let total = 0;
+  for (let i = 1; i < history.length; i++) {
+    const a = history[i - 1]!;
+    const b = history[i]!;
+    total += pieceEquivalent(ratio, a.timeH, a.temperatureC, b.timeH, b.temperatureC);
+  }
+  return total;
+}
+
+function readHistory(raw: unknown): Result<HistoryPoint[]> {
+  if (!Array.isArray(raw) || raw.length < 2) return fail('history.tooShort', 'history', { min: 2 });
+  const points: HistoryPoint[] = [];
+  for (const [index, entry] of raw.entries()) {
+    const fields = asFields(entry);
+    if (!fields.ok) return fail('request.notObject', `history.${index}`);
+    const timeH = readNumber(fields.value, 'timeH');
+    if (!timeH.ok) return fail(timeH.error.code, `history.${index}.timeH`, timeH.error.params);
+    const tempC = readNumber(fields.value, 'temperatureC');
+    if (!tempC.ok) return fail(tempC.error.code, `history.${index}.temperatureC`, tempC.error.params);
+    const previous = points[points.length - 1];
+    if (timeH.value < 0 || (previous && timeH.value < previous.timeH)) {
+      return fail('history.notIncreasing', `history.${index}.timeH`, { index, value: timeH.value });
+    }
+    if (!(tempC.value >= 0 && tempC.value <= MAX_HISTORY_TEMP_C)) {
+      return fail('history.temperatureTooHigh', `history.${index}.temperatureC`, {
+        index,
+        value: tempC.value,
+        max: MAX_HISTORY_TEMP_C,
+      });
+    }
+    points.push({ timeH: timeH.value, temperatureC: tempC.value });
+  }
+  const elapsed = points[points.length - 1]!.timeH - points[0]!.timeH;
+  return elapsed > 0 ? ok(points) : fail('time.notPositive', 'history', { value: elapsed });
+}
+
+/**
+ * `equivalent-time`: request `{history: [{timeH, temperatureC}], setTemperatureC,
+ * requiredTimeH?, model?, carbonPct?}`; the history is piecewise linear between points.
+ */
+export function equivalentTime(request: unknown): Result<EquivalentTimeResult> {
+  const fields = asFields(request);
+  if (!fields.ok) return fields;
+  const history = readHistory(fields.value.history);
+  if (!history.ok) return history;
+  const setTemp = readChecked(fields.value, 'setTemperatureC', checkTemperatureC);
+  if (!setTemp.ok) return setTemp;
+  const model = readModel(fields.value);
+  if (!model.ok) return model;
+  const carbon = readOptionalNumber(fields.value, 'carbonPct');
+  if (!carbon.ok) return carbon;
+  const carbonPct = checkCarbonPct(carbon.value ?? DEFAULT_HISTORY_CARBON_PCT, 'carbonPct');
+  if (!carbonPct.ok) return carbonPct;
+  const required = readOptionalNumber(fields.value, 'requiredTimeH');
+  if (!required.ok) return required;
+  if (required.value !== undefined) {
+    const checked = checkTimeH(required.value, 'requiredTimeH');
+    if (!checked.ok) return checked;
+  }
+  const points = history.value;
+  const elapsedH = points[points.length - 1]!.timeH - points[0]!.timeH;
+  const eqH = equivalentTimeH(points, setTemp.value, model.value, carbonPct.value);
+  return ok({
+    setTemperatureC: setTemp.value,
+    model: model.value,
+    carbonPct: carbonPct.value,
+    elapsedH,
+    equivalentTimeH: eqH,
+    lostTimeH: elapsedH - eqH,
+    ...(required.value === undefined
+      ? {}
+      : { requiredTimeH: required.value, extraTimeH: Math.max(0, required.value - eqH) }),
+  });
+}

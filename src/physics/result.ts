@@ -1,0 +1,85 @@
+/**
+ * Typed results for everything that can receive user input.
+ *
+ * The physics layer never throws on user input: it returns `{ ok: false, error }`
+ * where `error.code` is also the translation key under `errors.` in every locale,
+ * and `params` fills the placeholders of that message.
+ */
+
+/** Every error code the physics layer can return (each is a key under `errors.` in the locales). */
+export const ERROR_CODES = [
+  'number.empty',
+  'number.invalid',
+  'field.missing',
+  'field.notNumber',
+  'request.notObject',
+  'time.notPositive',
+  'time.tooLong',
+  'temperature.outOfRange',
+  'temperature.belowAbsoluteZero',
+  'carbon.negative',
+  'carbon.aboveMax',
+  'carbon.surfaceNotAboveCore',
+  'threshold.outsideProfile',
+  'depth.notPositive',
+  'depth.tooDeep',
+  'model.unknown',
+  'composition.outOfRange',
+  'composition.unknownElement',
+  'beta.notPositive',
+  'solve.temperatureBelowRange',
+  'solve.temperatureAboveRange',
+  'solve.noConvergence',
+  'unit.unknown',
+  'quantity.unknown',
+  'hardness.outOfTable',
+  'history.tooShort',
+  'history.notIncreasing',
+  'history.temperatureTooHigh',
+] as const;
+
+export type ErrorCode = (typeof ERROR_CODES)[number];
+
+export type Params = Record<string, number | string>;
+
+export interface InputError {
+  /** Translation key under `errors.`; stable, part of the CLI's JSON output. */
+  code: ErrorCode;
+  /** Request field that caused it, when there is one (e.g. `timeH`). */
+  field?: string;
+  /** Values for the message placeholders. */
+  params?: Params;
+}
+
+export type Result<T> = { ok: true; value: T } | { ok: false; error: InputError };
+
+export const ok = <T>(value: T): Result<T> => ({ ok: true, value });
+
+export const fail = <T = never>(code: ErrorCode, field?: string, params?: Params): Result<T> => ({
+  ok: false,
+  error: {
+    code,
+    ...(field === undefined ? {} : { field }),
+    ...(params === undefined ? {} : { params }),
+  },
+});
+
+/** Cautions that do not stop a computation (each is a key under `warnings.` in the locales). */
+export const WARNING_CODES = [
+  'saturation.potentialAboveAcm',
+  'saturation.surfaceAboveAcm',
+  'safety.atmosphereBelowSafeTemperature',
+  'shape.throughCarburizing',
+  'hardness.retainedAustenite',
+  'model.outsideCalibratedRange',
+  'harris.assumesSaturation',
+] as const;
+
+export type WarningCode = (typeof WARNING_CODES)[number];
+
+export interface Warning {
+  code: WarningCode;
+  params?: Params;
+  /** Index of the recipe step it concerns, for cycle results. */
+  stepIndex?: number;
+}

@@ -103,12 +103,15 @@ export function readCaseSpec(fields: Fields): Result<CaseSpec> {
   const potential = readOptionalNumber(fields, 'carbonPotentialPct');
   if (!potential.ok) return potential;
   if (given.value === undefined && potential.value === undefined) return fail('field.missing', 'surfaceCarbonPct');
+  if (potential.value !== undefined) {
+    const checked = checkCarbonPct(potential.value, 'carbonPotentialPct');
+    if (!checked.ok) return checked;
+  }
   const surfaceField = given.value === undefined ? 'carbonPotentialPct' : 'surfaceCarbonPct';
-  const potentialPct = potential.value ?? given.value! / factor;
-  const checkedPotential = checkCarbonPct(potentialPct, 'carbonPotentialPct');
-  if (!checkedPotential.ok) return checkedPotential;
-  const surface = checkCarbonPct(given.value ?? potentialPct * factor, surfaceField);
+  const surface = checkCarbonPct(given.value ?? potential.value! * factor, surfaceField);
   if (!surface.ok) return surface;
+  // Without a stated potential, the one implied by the surface carbon feeds the soot caution.
+  const potentialPct = potential.value ?? surface.value / factor;
   if (!(surface.value > core.value)) {
     return fail('carbon.surfaceNotAboveCore', surfaceField, { surfacePct: surface.value, corePct: core.value });
   }

@@ -23,9 +23,11 @@ export function asFields(request: unknown): Result<Fields> {
 }
 
 /** A number given as a JSON number or as text (`"0,8"` accepted). */
+const isBlank = (raw: unknown) => raw === undefined || raw === null || (typeof raw === 'string' && raw.trim() === '');
+
 export function readNumber(fields: Fields, field: string): Result<number> {
   const raw = fields[field];
-  if (raw === undefined || raw === null || raw === '') return fail('field.missing', field);
+  if (isBlank(raw)) return fail('field.missing', field);
   if (typeof raw === 'number') return Number.isFinite(raw) ? ok(raw) : fail('field.notNumber', field);
   if (typeof raw === 'string') {
     const parsed = parseNumber(raw);
@@ -35,8 +37,7 @@ export function readNumber(fields: Fields, field: string): Result<number> {
 }
 
 export function readOptionalNumber(fields: Fields, field: string): Result<number | undefined> {
-  const raw = fields[field];
-  return raw === undefined || raw === null || raw === '' ? ok(undefined) : readNumber(fields, field);
+  return isBlank(fields[field]) ? ok(undefined) : readNumber(fields, field);
 }
 
 function inRange(value: number, field: string, min: number, max: number, code: ErrorCode): Result<number> {

@@ -9,6 +9,14 @@ const value = <T>(r: Result<T>): T => {
 };
 const K = (c: number) => c + 273.15;
 
+/** Independent reference: ∫ ratio(T(t)) dt over a linear ramp fromC → toC lasting durationH, by a 200 000-step midpoint rule. */
+function midpointRampIntegral(ratio: (tempC: number) => number, fromC: number, toC: number, durationH: number): number {
+  const n = 200_000;
+  let sum = 0;
+  for (let i = 0; i < n; i++) sum += ratio(fromC + ((toC - fromC) * (i + 0.5)) / n);
+  return (sum * durationH) / n;
+}
+
 describe('equivalent time t_eq = ∫ D(T(t))/D(T_set) dt', () => {
   it('a history at the set temperature is worth its clock time', () => {
     const r = value(equivalentTime({ history: [{ timeH: 0, temperatureC: 925 }, { timeH: 3, temperatureC: 925 }], setTemperatureC: 925 }));
@@ -31,9 +39,7 @@ describe('equivalent time t_eq = ∫ D(T(t))/D(T_set) dt', () => {
   it('a linear ramp matches an independent 200 000-step midpoint integration of the Arrhenius ratio', () => {
     // Wells–Batz–Mehl is a pure Arrhenius law, so the ratio depends on T only.
     const ratio = (c: number) => wellsBatzMehlDiffusivity(K(c), 0.5) / wellsBatzMehlDiffusivity(K(925), 0.5);
-    const n = 200_000;
-    let reference = 0;
-    for (let i = 0; i < n; i++) reference += ratio(850 + (75 * (i + 0.5)) / n) * (1.5 / n);
+    const reference = midpointRampIntegral(ratio, 850, 925, 1.5);
     const history = [
       { timeH: 0, temperatureC: 850 },
       { timeH: 1.5, temperatureC: 925 },
@@ -49,9 +55,7 @@ describe('equivalent time t_eq = ∫ D(T(t))/D(T_set) dt', () => {
     expect(value(equivalentTime({ history: cold, setTemperatureC: 925 })).equivalentTimeH).toBe(0);
     // A ramp 20 → 925 °C over 2 h only counts its part above 727 °C, by the same midpoint check.
     const ratio = (c: number) => (c <= 727 ? 0 : agrenDiffusivity(K(c), 0.5) / agrenDiffusivity(K(925), 0.5));
-    const n = 200_000;
-    let reference = 0;
-    for (let i = 0; i < n; i++) reference += ratio(20 + (905 * (i + 0.5)) / n) * (2 / n);
+    const reference = midpointRampIntegral(ratio, 20, 925, 2);
     const ramp = [
       { timeH: 0, temperatureC: 20 },
       { timeH: 2, temperatureC: 925 },

@@ -36,6 +36,9 @@ export const ERROR_CODES = [
   'history.tooShort',
   'history.notIncreasing',
   'history.temperatureTooHigh',
+  'calibration.tooFewJobs',
+  'calibration.noSensitivity',
+  'calibration.factorOutOfRange',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -10,6 +10,7 @@
  */
 import tQuantile from '@stdlib/stats-base-dists-t-quantile';
 import { fail, ok, type Result } from './result';
+import { DIFFUSIVITY_FACTOR_LIMITS } from './validate';
 
 export interface CalibrationSample {
   /** Job id, carried into the residuals. */
@@ -38,8 +39,6 @@ export interface CalibrationFit {
 
 /** Fewest lab results that give a factor with an interval (two degrees of freedom). */
 export const MIN_CALIBRATION_JOBS = 3;
-/** Factors outside this range mean a wrong record or a wrong model, not a furnace. */
-export const FACTOR_LIMITS = { min: 0.1, max: 10 } as const;
 
 const STEP = 1e-4;
 const MAX_ITERATIONS = 50;
@@ -47,8 +46,8 @@ const MAX_ITERATIONS = 50;
 export function fitDiffusivityFactor(samples: readonly CalibrationSample[]): Result<CalibrationFit> {
   const n = samples.length;
   if (n < MIN_CALIBRATION_JOBS) return fail('calibration.tooFewJobs', undefined, { min: MIN_CALIBRATION_JOBS, count: n });
-  const lnMin = Math.log(FACTOR_LIMITS.min);
-  const lnMax = Math.log(FACTOR_LIMITS.max);
+  const lnMin = Math.log(DIFFUSIVITY_FACTOR_LIMITS.min);
+  const lnMax = Math.log(DIFFUSIVITY_FACTOR_LIMITS.max);
   let theta = 0;
   let sumJ2 = 0;
   for (let iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
@@ -67,7 +66,7 @@ export function fitDiffusivityFactor(samples: readonly CalibrationSample[]): Res
   }
   const factor = Math.exp(theta);
   if (theta <= lnMin || theta >= lnMax) {
-    return fail('calibration.factorOutOfRange', undefined, { min: FACTOR_LIMITS.min, max: FACTOR_LIMITS.max });
+    return fail('calibration.factorOutOfRange', undefined, { min: DIFFUSIVITY_FACTOR_LIMITS.min, max: DIFFUSIVITY_FACTOR_LIMITS.max });
   }
   const residuals = samples.map((s) => {
     const predictedMm = s.predictEcdMm(factor);

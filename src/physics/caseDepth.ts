@@ -21,6 +21,7 @@ import {
   asFields,
   checkCarbonPct,
   checkDepthMm,
+  checkDiffusivityFactor,
   checkTemperatureC,
   checkTimeH,
   readChecked,
@@ -47,6 +48,8 @@ export interface CaseSpec {
   composition?: Composition;
   /** Gunnarson alloy factor applied between potential and surface carbon (1 for plain carbon). */
   alloyFactor: number;
+  /** Furnace calibration factor on D (1 when uncalibrated). */
+  diffusivityFactor: number;
 }
 
 export interface DepthFigures {
@@ -65,6 +68,7 @@ export interface CaseDepthResult extends DepthFigures {
   thresholdCarbonPct: number;
   totalCaseThresholdPct: number;
   alloyFactor: number;
+  diffusivityFactor: number;
   model: DiffusivityModelId;
   /** Harris (1943) total case depth: surface at saturation, time at temperature. */
   harrisDepthMm: number;
@@ -125,7 +129,12 @@ export function readCaseSpec(fields: Fields): Result<CaseSpec> {
       surfacePct: surface.value,
     });
   }
+  const factorField = readOptionalNumber(fields, 'diffusivityFactor');
+  if (!factorField.ok) return factorField;
+  const diffusivityFactor = checkDiffusivityFactor(factorField.value ?? 1, 'diffusivityFactor');
+  if (!diffusivityFactor.ok) return diffusivityFactor;
   return ok({
+    diffusivityFactor: diffusivityFactor.value,
     surfaceCarbonPct: surface.value,
     carbonPotentialPct: potentialPct,
     coreCarbonPct: core.value,
@@ -136,9 +145,15 @@ export function readCaseSpec(fields: Fields): Result<CaseSpec> {
   });
 }
 
+/** Effective constant D for a spec (model at mean carbon, times the furnace factor), m²/s. */
+function specDiffusivity(spec: CaseSpec, temperatureC: number, model: DiffusivityModelId): number {
+  const D = effectiveDiffusivity(model, celsiusToKelvin(temperatureC), spec.surfaceCarbonPct, spec.coreCarbonPct);
+  return spec.diffusivityFactor * D;
+}
+
 /** Effective and total case depth, √(Dt) and D for one model, temperature and time. */
 export function depthFigures(spec: CaseSpec, temperatureC: number, timeH: number, model = spec.model): DepthFigures {
-  const D = effectiveDiffusivity(model, celsiusToKelvin(temperatureC), spec.surfaceCarbonPct, spec.coreCarbonPct);
+  const D = specDiffusivity(spec, temperatureC, model);
   const timeS = timeH * SECONDS_PER_HOUR;
   const totalThreshold = totalCaseThresholdPct(spec.coreCarbonPct);
   const depthMm = (thresholdPct: number) =>
@@ -171,6 +186,7 @@ export function evaluateCaseDepth(spec: CaseSpec, temperatureC: number, timeH: n
     thresholdCarbonPct: spec.thresholdCarbonPct,
     totalCaseThresholdPct: totalCaseThresholdPct(spec.coreCarbonPct),
     alloyFactor: spec.alloyFactor,
+    diffusivityFactor: spec.diffusivityFactor,
     model: spec.model,
     harrisDepthMm: harrisTotalCaseDepthMm(timeH, temperatureC),
     modelRangeMm: { min: Math.min(...depths), max: Math.max(...depths), byModel },
@@ -204,7 +220,7 @@ export function caseDepth(request: unknown): Result<CaseDepthResult> {
 
 /** Time at temperature for the effective case depth to reach `depthMm`, h. */
 export function timeForDepthH(spec: CaseSpec, temperatureC: number, depthMm: number, model = spec.model): number {
-  const D = effectiveDiffusivity(model, celsiusToKelvin(temperatureC), spec.surfaceCarbonPct, spec.coreCarbonPct);
+  const D = specDiffusivity(spec, temperatureC, model);
   const timeS = constantSurfaceTime(depthMm * 1e-3, D, spec.surfaceCarbonPct, spec.coreCarbonPct, spec.thresholdCarbonPct);
   return timeS / SECONDS_PER_HOUR;
 }

@@ -27,6 +27,7 @@ export const ERROR_CODES = [
   'composition.outOfRange',
   'composition.unknownElement',
   'beta.notPositive',
+  'diffusivityFactor.outOfRange',
   'solve.temperatureBelowRange',
   'solve.temperatureAboveRange',
   'solve.noConvergence',

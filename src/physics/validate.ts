@@ -63,6 +63,14 @@ export function checkDepthMm(value: number, field: string): Result<number> {
   return value <= MAX_DEPTH_MM ? ok(value) : fail('depth.tooDeep', field, { value, max: MAX_DEPTH_MM });
 }
 
+/** Furnace calibration factor on D; beyond these a fit means a wrong record or model, not a furnace. */
+export const DIFFUSIVITY_FACTOR_LIMITS = { min: 0.1, max: 10 } as const;
+
+export function checkDiffusivityFactor(value: number, field: string): Result<number> {
+  const { min, max } = DIFFUSIVITY_FACTOR_LIMITS;
+  return inRange(value, field, min, max, 'diffusivityFactor.outOfRange');
+}
+
 export function checkBeta(value: number, field: string): Result<number> {
   return value > 0 ? ok(value) : fail('beta.notPositive', field, { value });
 }

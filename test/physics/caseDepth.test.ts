@@ -107,6 +107,14 @@ describe('properties', () => {
   });
 });
 
+describe('furnace calibration factor on D', () => {
+  it('a factor k scales the closed-form depth by √k', () => {
+    const plain = ecd(base);
+    expect(ecd({ ...base, diffusivityFactor: 1.21 }) / plain).toBeCloseTo(1.1, 12);
+    expect(value(caseDepth({ ...base, diffusivityFactor: 1.21 })).diffusivityFactor).toBe(1.21);
+  });
+});
+
 describe('temperature solve: nothing in 800–1100 °C reaches the target', () => {
   it('too deep for the time: says more time is needed', () => {
     const r = temperatureForCaseDepth({ ...base, timeH: 1, targetDepthMm: 3 });

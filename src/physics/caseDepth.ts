@@ -16,6 +16,7 @@ import { fail, ok, type Result, type Warning } from './result';
 import { brentRoot } from './rootFinding';
 import { harrisTotalCaseDepthMm } from './rulesOfThumb';
 import { alloyFactor, DEFAULT_ECD_THRESHOLD_PCT, totalCaseThresholdPct, type Composition } from './steel';
+import { depthBand, DEFAULT_TEMPERATURE_TOLERANCE_C, type DepthBand } from './uncertainty';
 import { celsiusToKelvin, SECONDS_PER_HOUR } from './units';
 import {
   asFields,
@@ -23,6 +24,7 @@ import {
   checkDepthMm,
   checkDiffusivityFactor,
   checkTemperatureC,
+  checkTemperatureTolerance,
   checkTimeH,
   readChecked,
   readComposition,
@@ -50,6 +52,8 @@ export interface CaseSpec {
   alloyFactor: number;
   /** Furnace calibration factor on D (1 when uncalibrated). */
   diffusivityFactor: number;
+  /** Furnace temperature tolerance for the uncertainty band, ±°C. */
+  temperatureToleranceC: number;
 }
 
 export interface DepthFigures {
@@ -76,6 +80,8 @@ export interface CaseDepthResult extends DepthFigures {
   modelRangeMm: { min: number; max: number; byModel: Record<DiffusivityModelId, number> };
   /** Effective case depth with the temperature 10 °C lower and higher. */
   temperatureSensitivity: { stepC: number; minusMm: number; plusMm: number };
+  /** Band on the effective case depth from model spread and furnace temperature tolerance. */
+  uncertaintyMm: DepthBand;
   /** Indicative maximum as-quenched surface hardness, HRC. */
   surfaceHardnessHrc: number;
   warnings: Warning[];
@@ -133,8 +139,13 @@ export function readCaseSpec(fields: Fields): Result<CaseSpec> {
   if (!factorField.ok) return factorField;
   const diffusivityFactor = checkDiffusivityFactor(factorField.value ?? 1, 'diffusivityFactor');
   if (!diffusivityFactor.ok) return diffusivityFactor;
+  const tolerance = readOptionalNumber(fields, 'temperatureToleranceC');
+  if (!tolerance.ok) return tolerance;
+  const toleranceC = checkTemperatureTolerance(tolerance.value ?? DEFAULT_TEMPERATURE_TOLERANCE_C, 'temperatureToleranceC');
+  if (!toleranceC.ok) return toleranceC;
   return ok({
     diffusivityFactor: diffusivityFactor.value,
+    temperatureToleranceC: toleranceC.value,
     surfaceCarbonPct: surface.value,
     carbonPotentialPct: potentialPct,
     coreCarbonPct: core.value,
@@ -195,6 +206,11 @@ export function evaluateCaseDepth(spec: CaseSpec, temperatureC: number, timeH: n
       minusMm: ecdAt(temperatureC - SENSITIVITY_STEP_C),
       plusMm: ecdAt(temperatureC + SENSITIVITY_STEP_C),
     },
+    uncertaintyMm: depthBand(
+      (c) => depthFigures(spec, temperatureC + c.tempOffsetC, timeH, c.model).effectiveCaseDepthMm,
+      spec.model,
+      { temperatureToleranceC: spec.temperatureToleranceC },
+    ),
     surfaceHardnessHrc: asQuenchedHardnessHrc(spec.surfaceCarbonPct),
     warnings: [
       ...saturationWarnings(temperatureC, spec.surfaceCarbonPct, spec.carbonPotentialPct),

@@ -28,6 +28,7 @@ export const ERROR_CODES = [
   'composition.unknownElement',
   'beta.notPositive',
   'diffusivityFactor.outOfRange',
+  'temperatureTolerance.outOfRange',
   'solve.temperatureBelowRange',
   'solve.temperatureAboveRange',
   'solve.noConvergence',

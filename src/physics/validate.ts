@@ -71,6 +71,13 @@ export function checkDiffusivityFactor(value: number, field: string): Result<num
   return inRange(value, field, min, max, 'diffusivityFactor.outOfRange');
 }
 
+/** Widest furnace temperature tolerance accepted for the uncertainty band, ±°C. */
+export const MAX_TEMPERATURE_TOLERANCE_C = 50;
+
+export function checkTemperatureTolerance(value: number, field: string): Result<number> {
+  return inRange(value, field, 0, MAX_TEMPERATURE_TOLERANCE_C, 'temperatureTolerance.outOfRange');
+}
+
 export function checkBeta(value: number, field: string): Result<number> {
   return value > 0 ? ok(value) : fail('beta.notPositive', field, { value });
 }

@@ -36,6 +36,11 @@ export const ERROR_CODES = [
   'history.tooShort',
   'history.notIncreasing',
   'history.temperatureTooHigh',
+  'steps.empty',
+  'steps.tooMany',
+  'shape.unknown',
+  'shape.sizeOutOfRange',
+  'threshold.notAboveCore',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -6,7 +6,7 @@
  */
 
 /** Cells at resolution 1 (measured: see the accuracy tests and the bench). */
-export const BASE_CELLS = 40;
+export const BASE_CELLS = 48;
 /** Ratio of the deepest to the surface cell width, the same at every resolution. */
 export const WIDTH_STRETCH = 20;
 

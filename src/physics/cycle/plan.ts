@@ -22,7 +22,11 @@ export const DOMAIN_DEPTHS = 6;
 export const MIN_DOMAIN_M = 1e-5;
 /** Time steps of a recipe step at resolution 1: a floor, plus a share by the step's diffusion. */
 export const MIN_TIME_STEPS = 4;
-export const SHARED_TIME_STEPS = 16;
+export const SHARED_TIME_STEPS = 24;
+/** Last over first time step within a recipe step: steps grow geometrically from a small start. */
+export const TIME_STEP_STRETCH = 10;
+/** Largest growth from one time step to the next; variable-step BDF2 is zero-stable below 1 + √2. */
+export const MAX_TIME_STEP_GROWTH = 2;
 
 export interface PlannedStep {
   durationS: number;
@@ -31,9 +35,9 @@ export interface PlannedStep {
   /** Carbon potential × alloy factor, wt%; null for no transfer. */
   effectivePotentialPct: number | null;
   betaMPerS: number;
-  /** The surface condition or the temperature jumps at the start: restart small and damped. */
-  jumps: boolean;
   timeSteps: number;
+  /** Ratio of each time step to the one before. */
+  growth: number;
 }
 
 export interface Plan {
@@ -45,7 +49,7 @@ export interface Plan {
   semiInfiniteDepthM: number;
 }
 
-function prepareStep(recipe: Recipe, index: number, factor: number): Omit<PlannedStep, 'jumps' | 'timeSteps'> {
+function prepareStep(recipe: Recipe, index: number, factor: number): Omit<PlannedStep, 'timeSteps' | 'growth'> {
   const step = recipe.steps[index]!;
   return {
     durationS: step.durationH * SECONDS_PER_HOUR,
@@ -71,16 +75,10 @@ export function planCycle(recipe: Recipe, diffusivity: DiffusivityFunction, reso
   const Dt = prepared.map((s) => maxDiffusivity(diffusivity, s.startTempK, s.endTempK, carbonValues) * s.durationS);
   const totalDt = Dt.reduce((sum, v) => sum + v, 0);
   const steps = prepared.map((step, i): PlannedStep => {
-    const before = prepared[i - 1];
-    const jumps =
-      before === undefined
-        ? step.effectivePotentialPct !== null
-        : before.effectivePotentialPct !== step.effectivePotentialPct ||
-          (step.effectivePotentialPct !== null && before.betaMPerS !== step.betaMPerS) ||
-          before.endTempK !== step.startTempK;
     const share = totalDt > 0 ? Dt[i]! / totalDt : 0;
     const timeSteps = Math.ceil(resolution * (MIN_TIME_STEPS + SHARED_TIME_STEPS * Math.sqrt(share)));
-    return { ...step, jumps, timeSteps };
+    const growth = Math.min(TIME_STEP_STRETCH ** (1 / Math.max(timeSteps - 1, 1)), MAX_TIME_STEP_GROWTH);
+    return { ...step, timeSteps, growth };
   });
   const semiInfiniteDepthM = Math.max(DOMAIN_DEPTHS * Math.sqrt(totalDt), MIN_DOMAIN_M);
   return { steps, semiInfiniteDepthM, minCarbonPct: Math.min(...carbonValues), maxCarbonPct: Math.max(...carbonValues) };

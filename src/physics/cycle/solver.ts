@@ -3,12 +3,14 @@
  * surface flux J = β·(Cp_eff − Cs) and a closed inner boundary (symmetry plane, bar axis or
  * undisturbed far field).
  *
- * Time: Crank–Nicolson, started after every jump of the surface condition by backward-Euler
- * sub-steps (Rannacher, Numer. Math. 43 (1984) 309) so the jump leaves no oscillation.
- * D is evaluated at the mid-step carbon by Picard iteration: a predictor with D(Cⁿ), then
- * corrections with D(θ·C* + (1 − θ)·Cⁿ). D at a face joins the two neighbouring half-cells in
- * series; the surface half-cell joins 1/β in series, so the surface carbon need not be a node.
- * All arrays are allocated once per run; the time loop allocates nothing.
+ * Time: variable-step BDF2 (second order and L-stable, so the stiff modes of the fine surface
+ * cells decay instead of ringing as they do under Crank–Nicolson when steps grow long), started
+ * at every recipe step by one backward-Euler step, since the surface condition may jump there.
+ * D(C) at the new time level by Picard iteration: a predictor from D at the carbon
+ * extrapolated linearly from the two previous levels, then corrections with D at the new carbon.
+ * D at a face joins the two neighbouring half-cells in series; the surface half-cell joins 1/β
+ * in series, so the surface carbon need not be a node. All arrays are allocated once per run;
+ * the time loop allocates nothing.
  */
 import type { DiffusivityTable } from './diffusivityTable';
 import type { Grid } from './grid';
@@ -16,10 +18,6 @@ import { EUTECTOID_TEMP_K, type PlannedStep } from './plan';
 
 /** Picard corrections after the predictor, per time step. */
 export const PICARD_CORRECTIONS = 1;
-/** Backward-Euler sub-steps replacing the first step after a jump (Rannacher start). */
-export const DAMPED_SUBSTEPS = 2;
-const CRANK_NICOLSON = 0.5;
-const BACKWARD_EULER = 1;
 
 export interface SolverRun {
   grid: Grid;
@@ -33,19 +31,29 @@ export interface SolverRun {
   historySurfacePct: Float64Array;
   historyStep: Int32Array;
   historyLength: number;
-  /** ∫ J dt per unit surface area exactly as the scheme applied it, wt%·m. */
-  fluxIntegralPctM: number;
+  /**
+   * Carbon taken up per unit surface area, wt%·m, accumulated from the surface flux alone with
+   * the scheme's own time weights; equals Σ (C − C_core)·V when nothing leaks (mass balance).
+   */
+  fluxUptakePctM: number;
 }
 
 /** Arrays of one run, allocated once. */
 class Workspace {
+  /** Carbon at the new time level (the latest iterate), wt%. */
   readonly carbon: Float64Array;
-  readonly old: Float64Array;
+  /** Carbon at the last completed level, and the one before it. */
+  readonly level1: Float64Array;
+  readonly level0: Float64Array;
+  /** Carbon at which D is evaluated. */
   readonly evalCarbon: Float64Array;
   readonly resistance: Float64Array;
   readonly conductance: Float64Array;
-  readonly scratch: Float64Array;
+  readonly sweep: Float64Array;
   surfacePct: number;
+  /** Flux uptake at the latest level and the one before it, wt%·m. */
+  uptake = 0;
+  uptakeBefore = 0;
 
   constructor(
     readonly grid: Grid,
@@ -54,11 +62,12 @@ class Workspace {
   ) {
     const n = grid.cells;
     this.carbon = new Float64Array(n).fill(corePct);
-    this.old = new Float64Array(n);
+    this.level1 = new Float64Array(n);
+    this.level0 = new Float64Array(n).fill(corePct);
     this.evalCarbon = new Float64Array(n);
     this.resistance = new Float64Array(n);
     this.conductance = new Float64Array(n + 1);
-    this.scratch = new Float64Array(n);
+    this.sweep = new Float64Array(n);
     this.surfacePct = corePct;
   }
 }
@@ -77,81 +86,76 @@ function updateConductance(ws: Workspace, source: Float64Array, betaMPerS: numbe
 }
 
 /**
- * Builds the θ-scheme rows for the current conductances and solves them into ws.carbon by
- * the Thomas algorithm (Gaussian elimination of a tridiagonal, diagonally dominant system),
- * the forward sweep fused with assembling the rows.
+ * Solves a0·V(Cⁿ⁺¹)/Δt + V(a1·Cⁿ + a2·Cⁿ⁻¹)/Δt = Σ face fluxes(Cⁿ⁺¹) into ws.carbon: the BDF2
+ * rows (backward Euler when a2 = 0) assembled inside the forward sweep of the Thomas algorithm
+ * (Gaussian elimination of a tridiagonal, diagonally dominant system; no pivoting needed).
  */
-function solveImplicit(ws: Workspace, dtS: number, theta: number, potentialPct: number): void {
-  const { old, conductance: g, carbon: out, scratch } = ws;
+function solveLevel(ws: Workspace, dtS: number, a0: number, a1: number, a2: number, potentialPct: number): void {
+  const { level1, level0, conductance: g, carbon: out, sweep } = ws;
   const { volumeM, cells: n } = ws.grid;
-  const explicit = 1 - theta;
   const perDtS = 1 / dtS;
-  // Surface row: its outer neighbour is the atmosphere, a known value.
-  let west = g[0]!;
-  let east = g[1]!;
-  let c = old[0]!;
-  let next = n > 1 ? old[1]! : c;
-  let capacity = volumeM[0]! * perDtS;
-  let inverse = 1 / (capacity + theta * (west + east));
-  scratch[0] = -theta * east * inverse;
-  out[0] = (capacity * c + explicit * (west * (potentialPct - c) + east * (next - c)) + theta * west * potentialPct) * inverse;
-  for (let i = 1; i < n; i++) {
-    const previous = c;
-    c = next;
-    next = i + 1 < n ? old[i + 1]! : c;
-    west = east;
+  let east = g[0]!;
+  for (let i = 0; i < n; i++) {
+    const west = east;
     east = g[i + 1]!;
-    capacity = volumeM[i]! * perDtS;
-    const rhs = capacity * c + explicit * (west * (previous - c) + east * (next - c));
-    const lower = -theta * west;
-    inverse = 1 / (capacity + theta * (west + east) - lower * scratch[i - 1]!);
-    scratch[i] = -theta * east * inverse;
-    out[i] = (rhs - lower * out[i - 1]!) * inverse;
+    const capacity = volumeM[i]! * perDtS;
+    let rhs = -capacity * (a1 * level1[i]! + a2 * level0[i]!);
+    let pivot = a0 * capacity + west + east;
+    if (i === 0) rhs += west * potentialPct;
+    else {
+      pivot -= west * sweep[i - 1]!;
+      rhs += west * out[i - 1]!;
+    }
+    const inverse = 1 / pivot;
+    sweep[i] = east * inverse;
+    out[i] = rhs * inverse;
   }
-  for (let i = n - 2; i >= 0; i--) out[i] = out[i]! - scratch[i]! * out[i + 1]!;
-}
-
-/** One time step; returns ∫ J dt over it per unit surface area, wt%·m. */
-function advance(ws: Workspace, dtS: number, theta: number, tempK: number, step: PlannedStep): number {
-  if (tempK <= EUTECTOID_TEMP_K) return 0;
-  const transfer = step.effectivePotentialPct !== null;
-  const potentialPct = step.effectivePotentialPct ?? 0;
-  const { carbon, old, evalCarbon } = ws;
-  const n = ws.grid.cells;
-  old.set(carbon);
-  ws.table.setTemperature(tempK);
-  updateConductance(ws, old, step.betaMPerS, transfer);
-  solveImplicit(ws, dtS, theta, potentialPct);
-  for (let k = 0; k < PICARD_CORRECTIONS; k++) {
-    for (let i = 0; i < n; i++) evalCarbon[i] = theta * carbon[i]! + (1 - theta) * old[i]!;
-    updateConductance(ws, evalCarbon, step.betaMPerS, transfer);
-    solveImplicit(ws, dtS, theta, potentialPct);
-  }
-  const surfaceG = ws.conductance[0]!;
-  const c0 = carbon[0]!;
-  // Surface carbon behind the first half-cell: Cs = C₀ + J·(h₀/2)/D₀, so that J = β·(Cp − Cs).
-  ws.surfacePct = transfer ? c0 + surfaceG * (potentialPct - c0) * ws.resistance[0]! : c0;
-  return dtS * surfaceG * (potentialPct - (theta * c0 + (1 - theta) * old[0]!));
-}
-
-/** Number of history entries a plan produces (time 0 plus every time step). */
-function historySize(steps: readonly PlannedStep[]): number {
-  return 1 + steps.reduce((sum, s) => sum + s.timeSteps + (s.jumps ? DAMPED_SUBSTEPS - 1 : 0), 0);
+  for (let i = n - 2; i >= 0; i--) out[i] = out[i]! + sweep[i]! * out[i + 1]!;
 }
 
 /**
- * Runs the planned steps on `grid` from uniform core carbon. Time points within a step are
- * t = duration·(j/M)² after a jump (evenly spaced in √t, as diffusion from a jump evolves)
- * and evenly spaced otherwise.
+ * One time step of length dtS; `ratio` is dtS over the previous step, or 0 to take a
+ * backward-Euler step (a restart). Leaves the new level in ws.carbon.
  */
-export function solveCycle(
-  steps: readonly PlannedStep[],
-  grid: Grid,
-  table: DiffusivityTable,
-  corePct: number,
-): SolverRun {
+function advance(ws: Workspace, dtS: number, ratio: number, tempK: number, step: PlannedStep): void {
+  const { carbon, level1, level0, evalCarbon } = ws;
+  level0.set(level1);
+  level1.set(carbon);
+  const uptakeN = ws.uptake;
+  const uptakeNMinus1 = ws.uptakeBefore;
+  ws.uptakeBefore = uptakeN;
+  if (tempK <= EUTECTOID_TEMP_K) return;
+  const transfer = step.effectivePotentialPct !== null;
+  const potentialPct = step.effectivePotentialPct ?? 0;
+  const n = ws.grid.cells;
+  // Variable-step BDF2 coefficients (ω = Δtₙ/Δtₙ₋₁); ω = 0 gives backward Euler.
+  const a0 = (1 + 2 * ratio) / (1 + ratio);
+  const a1 = -(1 + ratio);
+  const a2 = (ratio * ratio) / (1 + ratio);
+  for (let i = 0; i < n; i++) evalCarbon[i] = level1[i]! + ratio * (level1[i]! - level0[i]!);
+  ws.table.setTemperature(tempK);
+  updateConductance(ws, evalCarbon, step.betaMPerS, transfer);
+  solveLevel(ws, dtS, a0, a1, a2, potentialPct);
+  for (let k = 0; k < PICARD_CORRECTIONS; k++) {
+    updateConductance(ws, carbon, step.betaMPerS, transfer);
+    solveLevel(ws, dtS, a0, a1, a2, potentialPct);
+  }
+  const c0 = carbon[0]!;
+  const fluxPctMPerS = ws.conductance[0]! * (potentialPct - c0);
+  // Surface carbon behind the first half-cell: Cs = C₀ + J·(h₀/2)/D₀, so that J = β·(Cp − Cs).
+  ws.surfacePct = transfer ? c0 + fluxPctMPerS * ws.resistance[0]! : c0;
+  // The scheme's row sum: a0·Mⁿ⁺¹ + a1·Mⁿ + a2·Mⁿ⁻¹ = Δt·Jⁿ⁺¹ (interior fluxes cancel, the inner face is closed).
+  ws.uptake = (dtS * fluxPctMPerS - a1 * uptakeN - a2 * uptakeNMinus1) / a0;
+}
+
+/**
+ * Runs the planned steps on `grid` from uniform core carbon. Within a recipe step the time
+ * steps grow geometrically from a small first one: diffusion after a jump of the surface
+ * condition changes fastest at first, and a constant ratio Δt/t spreads the error evenly.
+ */
+export function solveCycle(steps: readonly PlannedStep[], grid: Grid, table: DiffusivityTable, corePct: number): SolverRun {
   const ws = new Workspace(grid, table, corePct);
-  const size = historySize(steps);
+  const size = 1 + steps.reduce((sum, s) => sum + s.timeSteps, 0);
   const historyTimeS = new Float64Array(size);
   const historyTempK = new Float64Array(size);
   const historySurfacePct = new Float64Array(size);
@@ -159,33 +163,28 @@ export function solveCycle(
   historyTempK[0] = steps[0]?.startTempK ?? 0;
   historySurfacePct[0] = corePct;
   let length = 1;
-  let fluxIntegral = 0;
   let stepStartS = 0;
   for (let k = 0; k < steps.length; k++) {
     const step = steps[k]!;
-    const m = step.timeSteps;
-    const rampKPerS = (step.endTempK - step.startTempK) / step.durationS;
+    const { timeSteps: m, growth, durationS } = step;
+    const rampKPerS = (step.endTempK - step.startTempK) / durationS;
+    let dtS = growth > 1 ? (durationS * (growth - 1)) / (growth ** m - 1) : durationS / m;
+    let previousDtS = 0;
     let localS = 0;
-    for (let j = 1; j <= m; j++) {
-      const fraction = j / m;
-      const endS = step.durationS * (step.jumps ? fraction * fraction : fraction);
-      const substeps = step.jumps && j === 1 ? DAMPED_SUBSTEPS : 1;
-      const theta = substeps > 1 ? BACKWARD_EULER : CRANK_NICOLSON;
-      const dtS = (endS - localS) / substeps;
-      for (let s = 0; s < substeps; s++) {
-        // D at the time the scheme weights: the mid-step for Crank–Nicolson, the end for Euler.
-        const evalTempK = step.startTempK + rampKPerS * (localS + theta * dtS);
-        fluxIntegral += advance(ws, dtS, theta, evalTempK, step);
-        localS += dtS;
-        historyTimeS[length] = stepStartS + localS;
-        historyTempK[length] = step.startTempK + rampKPerS * localS;
-        historySurfacePct[length] = ws.surfacePct;
-        historyStep[length] = k;
-        length++;
-      }
+    for (let j = 0; j < m; j++) {
+      const endS = j === m - 1 ? durationS : localS + dtS;
+      const thisDtS = endS - localS;
+      advance(ws, thisDtS, j === 0 ? 0 : thisDtS / previousDtS, step.startTempK + rampKPerS * endS, step);
       localS = endS;
+      previousDtS = thisDtS;
+      dtS *= growth;
+      historyTimeS[length] = stepStartS + localS;
+      historyTempK[length] = step.startTempK + rampKPerS * localS;
+      historySurfacePct[length] = ws.surfacePct;
+      historyStep[length] = k;
+      length++;
     }
-    stepStartS += step.durationS;
+    stepStartS += durationS;
   }
   return {
     grid,
@@ -196,6 +195,6 @@ export function solveCycle(
     historySurfacePct,
     historyStep,
     historyLength: length,
-    fluxIntegralPctM: fluxIntegral,
+    fluxUptakePctM: ws.uptake,
   };
 }

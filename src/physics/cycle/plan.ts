@@ -6,6 +6,7 @@ import { EUTECTOID_TEMP_C } from '../equivalentTime';
 import { alloyFactor } from '../steel';
 import { celsiusToKelvin, SECONDS_PER_HOUR } from '../units';
 import { DEFAULT_BETA_M_PER_S, type Recipe } from './recipe';
+import { rampProgress, RAMP_SAMPLES, stepEndTimes } from './timeSteps';
 
 /** D(T, C) in m²/s for T in K and carbon in wt%: a published model, or a stand-in in tests. */
 export type DiffusivityFunction = (tempK: number, carbonPct: number) => number;
@@ -35,9 +36,8 @@ export interface PlannedStep {
   /** Carbon potential × alloy factor, wt%; null for no transfer. */
   effectivePotentialPct: number | null;
   betaMPerS: number;
-  timeSteps: number;
-  /** Ratio of each time step to the one before. */
-  growth: number;
+  /** End of each time step, s from the start of the recipe step; the last equals durationS. */
+  endTimesS: Float64Array;
 }
 
 export interface Plan {
@@ -49,7 +49,7 @@ export interface Plan {
   semiInfiniteDepthM: number;
 }
 
-function prepareStep(recipe: Recipe, index: number, factor: number): Omit<PlannedStep, 'timeSteps' | 'growth'> {
+function prepareStep(recipe: Recipe, index: number, factor: number): Omit<PlannedStep, 'endTimesS'> {
   const step = recipe.steps[index]!;
   return {
     durationS: step.durationH * SECONDS_PER_HOUR,
@@ -60,11 +60,11 @@ function prepareStep(recipe: Recipe, index: number, factor: number): Omit<Planne
   };
 }
 
-/** Upper bound of D during a step: hottest point, richest carbon the cycle can reach; 0 below the eutectoid. */
-function maxDiffusivity(diffusivity: DiffusivityFunction, startTempK: number, endTempK: number, carbonValues: number[]): number {
-  const tempK = Math.max(startTempK, endTempK);
-  if (tempK <= EUTECTOID_TEMP_K) return 0;
-  return Math.max(...carbonValues.map((c) => diffusivity(tempK, c)), 0);
+/** The carbon among `carbonValues` where D is largest at `tempK` (D rises with carbon in every model, but tests may differ). */
+function fastestCarbon(diffusivity: DiffusivityFunction, tempK: number, carbonValues: number[]): number {
+  let best = carbonValues[0]!;
+  for (const c of carbonValues) if (diffusivity(tempK, c) > diffusivity(tempK, best)) best = c;
+  return best;
 }
 
 export function planCycle(recipe: Recipe, diffusivity: DiffusivityFunction, resolution: number): Plan {
@@ -72,13 +72,23 @@ export function planCycle(recipe: Recipe, diffusivity: DiffusivityFunction, reso
   const prepared = recipe.steps.map((_, i) => prepareStep(recipe, i, factor));
   const core = recipe.steel.coreCarbonPct;
   const carbonValues = [core, ...prepared.map((s) => s.effectivePotentialPct ?? core)];
-  const Dt = prepared.map((s) => maxDiffusivity(diffusivity, s.startTempK, s.endTempK, carbonValues) * s.durationS);
-  const totalDt = Dt.reduce((sum, v) => sum + v, 0);
+  // ∫D dt of each step at the fastest carbon: an upper bound of how far carbon can move.
+  const progress = prepared.map((s) => {
+    const hotK = Math.max(s.startTempK, s.endTempK);
+    const carbon = fastestCarbon(diffusivity, hotK, carbonValues);
+    if (s.startTempK !== s.endTempK) {
+      const ramp = rampProgress(s.durationS, s.startTempK, s.endTempK, diffusivity, carbon);
+      return { totalM2: ramp[RAMP_SAMPLES]!, ramp };
+    }
+    return { totalM2: hotK > EUTECTOID_TEMP_K ? diffusivity(hotK, carbon) * s.durationS : 0 };
+  });
+  const totalDt = progress.reduce((sum, p) => sum + p.totalM2, 0);
   const steps = prepared.map((step, i): PlannedStep => {
-    const share = totalDt > 0 ? Dt[i]! / totalDt : 0;
-    const timeSteps = Math.ceil(resolution * (MIN_TIME_STEPS + SHARED_TIME_STEPS * Math.sqrt(share)));
-    const growth = Math.min(TIME_STEP_STRETCH ** (1 / Math.max(timeSteps - 1, 1)), MAX_TIME_STEP_GROWTH);
-    return { ...step, timeSteps, growth };
+    const { totalM2, ramp } = progress[i]!;
+    const share = totalDt > 0 ? totalM2 / totalDt : 0;
+    const count = Math.ceil(resolution * (MIN_TIME_STEPS + SHARED_TIME_STEPS * Math.sqrt(share)));
+    const growth = Math.min(TIME_STEP_STRETCH ** (1 / Math.max(count - 1, 1)), MAX_TIME_STEP_GROWTH);
+    return { ...step, endTimesS: stepEndTimes(step.durationS, count, growth, ramp) };
   });
   const semiInfiniteDepthM = Math.max(DOMAIN_DEPTHS * Math.sqrt(totalDt), MIN_DOMAIN_M);
   return { steps, semiInfiniteDepthM, minCarbonPct: Math.min(...carbonValues), maxCarbonPct: Math.max(...carbonValues) };

@@ -18,6 +18,8 @@ import { EUTECTOID_TEMP_K, type PlannedStep } from './plan';
 
 /** Picard corrections after the predictor, per time step. */
 export const PICARD_CORRECTIONS = 1;
+/** Largest step ratio taken by BDF2: variable-step BDF2 is zero-stable below 1 + √2 (Grigorieff, 1983). */
+export const MAX_BDF2_RATIO = 2.4;
 
 export interface SolverRun {
   grid: Grid;
@@ -54,6 +56,8 @@ class Workspace {
   /** Flux uptake at the latest level and the one before it, wt%·m. */
   uptake = 0;
   uptakeBefore = 0;
+  /** The last step did nothing (below the eutectoid): transfer and diffusion switch on now, a jump. */
+  frozen = false;
 
   constructor(
     readonly grid: Grid,
@@ -124,7 +128,12 @@ function advance(ws: Workspace, dtS: number, ratio: number, tempK: number, step:
   const uptakeN = ws.uptake;
   const uptakeNMinus1 = ws.uptakeBefore;
   ws.uptakeBefore = uptakeN;
-  if (tempK <= EUTECTOID_TEMP_K) return;
+  if (tempK <= EUTECTOID_TEMP_K) {
+    ws.frozen = true;
+    return;
+  }
+  if (ws.frozen) ratio = 0;
+  ws.frozen = false;
   const transfer = step.effectivePotentialPct !== null;
   const potentialPct = step.effectivePotentialPct ?? 0;
   const n = ws.grid.cells;
@@ -148,14 +157,10 @@ function advance(ws: Workspace, dtS: number, ratio: number, tempK: number, step:
   ws.uptake = (dtS * fluxPctMPerS - a1 * uptakeN - a2 * uptakeNMinus1) / a0;
 }
 
-/**
- * Runs the planned steps on `grid` from uniform core carbon. Within a recipe step the time
- * steps grow geometrically from a small first one: diffusion after a jump of the surface
- * condition changes fastest at first, and a constant ratio Δt/t spreads the error evenly.
- */
+/** Runs the planned steps (time steps placed by timeSteps.ts) on `grid` from uniform core carbon. */
 export function solveCycle(steps: readonly PlannedStep[], grid: Grid, table: DiffusivityTable, corePct: number): SolverRun {
   const ws = new Workspace(grid, table, corePct);
-  const size = 1 + steps.reduce((sum, s) => sum + s.timeSteps, 0);
+  const size = 1 + steps.reduce((sum, s) => sum + s.endTimesS.length, 0);
   const historyTimeS = new Float64Array(size);
   const historyTempK = new Float64Array(size);
   const historySurfacePct = new Float64Array(size);
@@ -166,25 +171,26 @@ export function solveCycle(steps: readonly PlannedStep[], grid: Grid, table: Dif
   let stepStartS = 0;
   for (let k = 0; k < steps.length; k++) {
     const step = steps[k]!;
-    const { timeSteps: m, growth, durationS } = step;
-    const rampKPerS = (step.endTempK - step.startTempK) / durationS;
-    let dtS = growth > 1 ? (durationS * (growth - 1)) / (growth ** m - 1) : durationS / m;
+    const ends = step.endTimesS;
+    const rampKPerS = (step.endTempK - step.startTempK) / step.durationS;
     let previousDtS = 0;
     let localS = 0;
-    for (let j = 0; j < m; j++) {
-      const endS = j === m - 1 ? durationS : localS + dtS;
-      const thisDtS = endS - localS;
-      advance(ws, thisDtS, j === 0 ? 0 : thisDtS / previousDtS, step.startTempK + rampKPerS * endS, step);
+    for (let j = 0; j < ends.length; j++) {
+      const endS = ends[j]!;
+      const dtS = endS - localS;
+      // Restart with backward Euler at each recipe step, and wherever the step ratio leaves BDF2's stable range.
+      const ratio = j === 0 || dtS > MAX_BDF2_RATIO * previousDtS ? 0 : dtS / previousDtS;
+      const tempK = step.startTempK + rampKPerS * endS;
+      advance(ws, dtS, ratio, tempK, step);
       localS = endS;
-      previousDtS = thisDtS;
-      dtS *= growth;
-      historyTimeS[length] = stepStartS + localS;
-      historyTempK[length] = step.startTempK + rampKPerS * localS;
+      previousDtS = dtS;
+      historyTimeS[length] = stepStartS + endS;
+      historyTempK[length] = tempK;
       historySurfacePct[length] = ws.surfacePct;
       historyStep[length] = k;
       length++;
     }
-    stepStartS += durationS;
+    stepStartS += step.durationS;
   }
   return {
     grid,

@@ -4,6 +4,7 @@ import besselj1 from '@stdlib/math-base-special-besselj1';
 import type { PartShape, Recipe, RecipeStep } from '../../../src/physics/cycle/recipe';
 import { findGrade } from '../../../src/physics/grades';
 import { brentRoot } from '../../../src/physics/rootFinding';
+import { erfcx } from '../../../src/physics/special';
 
 /** A constant D, m²/s: Ågren's D near 0.5 %C at 925 °C has this order. */
 export const CONSTANT_D = 2e-11;
@@ -76,3 +77,23 @@ export function cylinderConstantSurface(depthM: number, timeS: number, D: number
 export function crossingDepthM(profile: (depthM: number) => number, thresholdPct: number, maxDepthM: number): number {
   return brentRoot((x) => profile(x) - thresholdPct, 0, maxDepthM, 1e-13)!.x;
 }
+
+/**
+ * Carbon taken up per unit area through a surface-transfer boundary, constant D (Crank, The
+ * Mathematics of Diffusion, 2nd ed., §3.3.2): M_t = (Cp − C0)/h · [exp(h²Dt)·erfc(h√(Dt)) − 1 + 2h√(Dt/π)],
+ * h = β/D; wt%·m.
+ */
+export function surfaceTransferUptake(timeS: number, D: number, betaMPerS: number, potentialPct: number, corePct: number): number {
+  const h = betaMPerS / D;
+  const s = h * Math.sqrt(D * timeS);
+  return ((potentialPct - corePct) / h) * (erfcx(s) - 1 + (2 * s) / Math.sqrt(Math.PI));
+}
+
+/** Σ (C − C_core)·V over the grid: carbon taken up per unit surface area, wt%·m. */
+export function gridUptake(run: { grid: { cells: number; volumeM: Float64Array }; carbonPct: Float64Array }, corePct: number): number {
+  let sum = 0;
+  for (let i = 0; i < run.grid.cells; i++) sum += (run.carbonPct[i]! - corePct) * run.grid.volumeM[i]!;
+  return sum;
+}
+
+export const relativeError = (value: number, reference: number) => Math.abs(value / reference - 1);

@@ -11,3 +11,6 @@ export * from './caseDepth';
 export * from './equivalentTime';
 export * from './conversions';
 export * from './grades';
+export * from './cycle/recipe';
+export * from './cycle/readRecipe';
+export * from './cycle/simulate';

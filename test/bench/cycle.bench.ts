@@ -32,6 +32,7 @@ export async function run(): Promise<Record<string, number>> {
   const result = simulateCycle(threeStepRequest);
   if (!result.ok) throw new Error(`bench recipe failed: ${result.error.code}`);
   const ecdMm = result.value.effectiveCaseDepthMm;
+  const cycle3StepTimeSteps = result.value.surfaceHistory.length - 1;
   const convergedEcdMm = runCycle(recipe.value, REFERENCE_RESOLUTION).effectiveCaseDepthMm;
   const cycle3StepEcdErrorPct = (Math.abs(ecdMm - convergedEcdMm) / convergedEcdMm) * 100;
   const cycle3StepMs = await medianMs(() => simulateCycle(threeStepRequest), RUNS, 50);
@@ -44,7 +45,7 @@ export async function run(): Promise<Record<string, number>> {
   console.log(
     `  ECD ${ecdMm.toFixed(5)} mm, converged (${REFERENCE_RESOLUTION}× finer) ${convergedEcdMm.toFixed(5)} mm: ` +
       `error ${cycle3StepEcdErrorPct.toFixed(4)} %; surface ${result.value.surfaceCarbonPct.toFixed(4)} %C; ` +
-      `reference run ${cycle3StepReferenceMs.toFixed(1)} ms`,
+      `reference run ${cycle3StepReferenceMs.toFixed(1)} ms; ${cycle3StepTimeSteps} time steps at default resolution`,
   );
-  return { cycle3StepMs, cycle3StepSolveOnlyMs, cycle3StepEcdErrorPct, cycle3StepEcdMm: ecdMm, cycle3StepReferenceMs };
+  return { cycle3StepMs, cycle3StepSolveOnlyMs, cycle3StepEcdErrorPct, cycle3StepEcdMm: ecdMm, cycle3StepReferenceMs, cycle3StepTimeSteps };
 }

@@ -8,6 +8,7 @@ import { readFileSync } from 'node:fs';
 import { createI18n, errorMessage, warningMessage } from './i18n/i18n';
 import { caseDepth, temperatureForCaseDepth, timeForCaseDepth } from './physics/caseDepth';
 import { convertRequest } from './physics/conversions';
+import { simulateCycle } from './physics/cycle/simulate';
 import { equivalentTime } from './physics/equivalentTime';
 import type { InputError, Result, Warning } from './physics/result';
 
@@ -20,6 +21,7 @@ export const COMMANDS: Record<string, Command> = {
   temperature: temperatureForCaseDepth,
   convert: convertRequest,
   'equivalent-time': equivalentTime,
+  simulate: simulateCycle,
 };
 
 const { t } = createI18n('en');

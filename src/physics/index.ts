@@ -13,3 +13,6 @@ export * from './conversions';
 export * from './grades';
 export * from './uncertainty';
 export * from './calibration';
+export * from './cycle/recipe';
+export * from './cycle/readRecipe';
+export * from './cycle/simulate';

@@ -41,6 +41,11 @@ export const ERROR_CODES = [
   'calibration.tooFewJobs',
   'calibration.noSensitivity',
   'calibration.factorOutOfRange',
+  'steps.empty',
+  'steps.tooMany',
+  'shape.unknown',
+  'shape.sizeOutOfRange',
+  'threshold.notAboveCore',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -82,7 +82,6 @@ export const WARNING_CODES = [
   'shape.throughCarburizing',
   'hardness.retainedAustenite',
   'model.outsideCalibratedRange',
-  'harris.assumesSaturation',
 ] as const;
 
 export type WarningCode = (typeof WARNING_CODES)[number];

@@ -11,3 +11,4 @@ export * from './caseDepth';
 export * from './equivalentTime';
 export * from './conversions';
 export * from './grades';
+export * from './totalCase';

@@ -37,7 +37,17 @@ export default defineConfig({
       },
     }),
   ],
-  build: { target: 'es2022', sourcemap: true, manifest: true },
+  build: {
+    target: 'es2022',
+    sourcemap: true,
+    manifest: true,
+    rolldownOptions: {
+      // The stdlib math packages are pure CommonJS functions: let unused ones (e.g. erfcx,
+      // needed only by the mass-transfer solution) drop out of the first screen's bundle; JSON
+      // (the locales) is data, so the app's lazy locale loading is not undone by a static import.
+      treeshake: { moduleSideEffects: (id: string) => !id.includes('/node_modules/@stdlib/') && !id.endsWith('.json') },
+    },
+  },
   preview: { port: 4173, strictPort: true },
   test: {
     include: ['test/**/*.test.ts', 'test/**/*.test.tsx'],

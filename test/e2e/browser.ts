@@ -58,3 +58,11 @@ export async function openScreen(page: Page, id: string): Promise<void> {
   await page.goto(`${BASE_URL}#/${id}`);
   await page.waitForSelector('main h1');
 }
+
+/** Every request stayed on the app's own origin (data: and blob: URLs are local). */
+export function foreignRequests(recorder: Recorder): string[] {
+  const origin = new URL(BASE_URL).origin;
+  return recorder.requests.filter((url) => !url.startsWith('data:') && !url.startsWith('blob:') && new URL(url).origin !== origin);
+}
+
+export const SCREENS = ['depth', 'cycle', 'recovery', 'convert', 'settings', 'safety'] as const;

@@ -35,11 +35,11 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
   });
   return {
     width,
-    height: Math.round(Math.min(320, Math.max(220, width * 0.7))),
+    height: Math.round(Math.min(340, Math.max(240, width * 0.8))),
     legend: { show: true, live: false },
     cursor: { drag: { x: false, y: false } },
     scales: { x: { time: false }, c: { auto: true }, hrc: { auto: false, range: [15, 70] } },
-    axes: [axis(data.labels.depth, 'x'), { ...axis(data.labels.carbonAxis, 'c'), size: 56 }, { ...axis(data.labels.hardnessAxis, 'hrc', 1), size: 52, grid: { show: false } }],
+    axes: [axis(data.labels.depth, 'x'), { ...axis(data.labels.carbonAxis, 'c'), size: 46 }, { ...axis(data.labels.hardnessAxis, 'hrc', 1), size: 44, grid: { show: false } }],
     series: [
       {},
       { label: data.labels.carbon, scale: 'c', stroke: carbon, width: 3 },
@@ -54,6 +54,7 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
           const ctx = u.ctx;
           ctx.save();
           ctx.strokeStyle = mark;
+          ctx.setLineDash([]);
           ctx.lineWidth = 2 * devicePixelRatio;
           ctx.beginPath();
           ctx.moveTo(x, u.bbox.top);

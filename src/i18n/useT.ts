@@ -41,7 +41,7 @@ void instance.init({
 const fixed = new Map<Language, TFunction>(LANGUAGES.map((l) => [l, instance.getFixedT(l)]));
 
 /** Loads a locale's messages (once) and makes it the current language. */
-export async function useLanguage(lng: Language): Promise<void> {
+export async function switchLanguage(lng: Language): Promise<void> {
   if (!instance.hasResourceBundle(lng, 'translation')) {
     const messages = await LOADERS[lng]();
     instance.addResourceBundle(lng, 'translation', messages.default);

@@ -4,7 +4,7 @@
  */
 import { computed, effect } from '@preact/signals';
 import type { Language } from '../../i18n/i18n';
-import { initialLanguage, language, useLanguage } from '../../i18n/useT';
+import { initialLanguage, language, switchLanguage } from '../../i18n/useT';
 import {
   DEFAULT_ECD_THRESHOLD_PCT,
   DEFAULT_MODEL,
@@ -51,12 +51,12 @@ export const settings = persisted<Settings>('settings', DEFAULT_SETTINGS);
 
 /** Loads the stored language (or the browser's preference) before the first render. */
 export function loadInitialLanguage(): Promise<void> {
-  return useLanguage(initialLanguage(settings.value.language));
+  return switchLanguage(initialLanguage(settings.value.language));
 }
 
 export async function setLanguage(lng: Language): Promise<void> {
   settings.value = { ...settings.value, language: lng };
-  await useLanguage(lng);
+  await switchLanguage(lng);
 }
 
 export const units = computed(() => displayUnits(settings.value.unitSystem, settings.value.overrides));

@@ -3,11 +3,11 @@ import { useMemo } from 'preact/hooks';
 import { MODEL_IDS } from '../../physics';
 import { defaults, model, theme } from '../settings/state';
 import { ChoiceField } from '../ui/ChoiceField';
-import { NO_VALUE, UNIT_SYMBOLS } from '../ui/format';
+import { NO_VALUE } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
-import { Cautions, ErrorNote } from '../ui/Notices';
 import { patch } from '../ui/persist';
-import { ResultList } from '../ui/ResultList';
+import { ResultsCard } from '../ui/ResultsCard';
+import { ThresholdField } from '../ui/ThresholdField';
 import { useScreenContext } from '../ui/screenContext';
 import { SteelFields } from '../ui/SteelFields';
 import { ProfileChart } from './ProfileChart';
@@ -82,28 +82,13 @@ export default function CycleScreen() {
         )}
         <SteelFields idPrefix="cycle-steel" steel={form.steel} onChange={(s) => patch(cycleForm, { steel: s })} errors={errors} word={word} />
         <ChoiceField id="cycle-model" label={t('app.settings.model')} value={form.model} choices={modelChoices} onChange={(v) => patch(cycleForm, { model: v })} />
-        <NumberField
-            id="cycle-threshold"
-            label={t('app.fields.threshold')}
-            unitLabel={UNIT_SYMBOLS.pctC}
-            value={form.threshold}
-            placeholder={show.number(defaults.value.ecdThresholdPct, 2)}
-            onInput={(v) => patch(cycleForm, { threshold: v })}
-            error={word(errors.threshold)}
-            hint={t('app.fields.thresholdHint')}
-          />
+        <ThresholdField id="cycle-threshold" value={form.threshold} onInput={(v) => patch(cycleForm, { threshold: v })} error={word(errors.threshold)} show={show} />
       </section>
 
-      <section class="card" aria-labelledby="cycle-results">
-        <h2 id="cycle-results">{t('app.common.results')}</h2>
-        <ErrorNote message={word(outcome.general)} />
-        {!view && !outcome.general && <p class="note">{t('app.common.fixInputs')}</p>}
-        {view && <ResultList rows={view.rows} label={t('app.common.results')} />}
-        {view && <Cautions title={t('app.common.cautions')} messages={view.cautions} />}
+      <ResultsCard id="cycle-results" error={word(outcome.general)} view={view}>
         {view && <ProfileChart data={view.chart} label={t('app.cycle.chartLabel')} theme={theme.value} />}
         {result && <ProfileTable profile={result.simulation.profile} ctx={ctx} />}
-        <p class="note">{t('app.common.estimateNote')}</p>
-      </section>
+      </ResultsCard>
     </div>
   );
 }

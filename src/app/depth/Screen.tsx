@@ -3,8 +3,8 @@ import { NO_VALUE, UNIT_SYMBOLS } from '../ui/format';
 import { patch } from '../ui/persist';
 import { defaults } from '../settings/state';
 import { NumberField } from '../ui/NumberField';
-import { Cautions, ErrorNote } from '../ui/Notices';
-import { ResultList } from '../ui/ResultList';
+import { ResultsCard } from '../ui/ResultsCard';
+import { ThresholdField } from '../ui/ThresholdField';
 import { Segmented } from '../ui/Segmented';
 import { SteelFields } from '../ui/SteelFields';
 import { useScreenContext } from '../ui/screenContext';
@@ -87,28 +87,12 @@ export default function DepthScreen() {
             onInput={(v) => patch(depthForm, { carbon: v })}
             error={word(errors.carbon)}
           />
-          <NumberField
-            id="depth-threshold"
-            label={t('app.fields.threshold')}
-            unitLabel={UNIT_SYMBOLS.pctC}
-            value={form.threshold}
-            placeholder={show.number(defaults.value.ecdThresholdPct, 2)}
-            hint={t('app.fields.thresholdHint')}
-            onInput={(v) => patch(depthForm, { threshold: v })}
-            error={word(errors.threshold)}
-          />
+          <ThresholdField id="depth-threshold" value={form.threshold} onInput={(v) => patch(depthForm, { threshold: v })} error={word(errors.threshold)} show={show} />
         </div>
         <SteelFields idPrefix="depth-steel" steel={form.steel} onChange={(s) => patch(depthForm, { steel: s })} errors={errors} word={word} />
       </section>
 
-      <section class="card" aria-labelledby="depth-results">
-        <h2 id="depth-results">{t('app.common.results')}</h2>
-        <ErrorNote message={word(outcome.general)} />
-        {!view && !outcome.general && <p class="note">{t('app.common.fixInputs')}</p>}
-        {view && <ResultList rows={view.rows} label={t('app.common.results')} />}
-        {view && <Cautions title={t('app.common.cautions')} messages={view.cautions} />}
-        <p class="note">{t('app.common.estimateNote')}</p>
-      </section>
+      <ResultsCard id="depth-results" error={word(outcome.general)} view={view} />
     </div>
   );
 }

@@ -11,7 +11,6 @@ export default defineConfig({
       registerType: 'prompt',
       // We register from our own module: no inline script, so the CSP stays 'self'.
       injectRegister: null,
-      includeAssets: ['icons/*.png', 'examples/*.json'],
       manifest: {
         name: 'Casefront',
         short_name: 'Casefront',

@@ -145,6 +145,7 @@ describe('keyboard and touch', () => {
     await page.focus('a[href="#/convert"]');
     await page.keyboard.press('Enter');
     await page.waitForFunction(() => document.querySelector('main h1')?.textContent === 'Conversions');
+    await page.waitForFunction(() => document.activeElement === document.querySelector('main h1'));
     await close();
   });
 

@@ -11,14 +11,9 @@ export function App() {
   const id = route.value;
   const first = useRef(true);
   useEffect(() => {
-    // After a navigation (not the first paint) move focus to the new screen's heading for keyboard and screen-reader users.
-    if (first.current) {
-      first.current = false;
-      return;
-    }
-    window.scrollTo(0, 0);
-    const timer = setTimeout(() => document.querySelector<HTMLElement>('main h1')?.focus(), 0);
-    return () => clearTimeout(timer);
+    // A new screen starts at its top (focus moves to its heading in ScreenView).
+    if (first.current) first.current = false;
+    else window.scrollTo(0, 0);
   }, [id]);
   return (
     <div class="shell">

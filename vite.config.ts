@@ -11,6 +11,8 @@ export default defineConfig({
       registerType: 'prompt',
       // We register from our own module: no inline script, so the CSP stays 'self'.
       injectRegister: null,
+      // The glob below already precaches the icons and the plugin adds the manifest itself.
+      includeManifestIcons: false,
       manifest: {
         name: 'Casefront',
         short_name: 'Casefront',
@@ -30,7 +32,7 @@ export default defineConfig({
       },
       workbox: {
         // Every asset, the lazy screen chunks and the chart included, so the app works in airplane mode.
-        globPatterns: ['**/*.{js,css,html,png,svg,json,webmanifest}'],
+        globPatterns: ['**/*.{js,css,html,png,svg,json}'],
         navigateFallback: 'index.html',
         cleanupOutdatedCaches: true,
       },

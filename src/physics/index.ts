@@ -11,4 +11,6 @@ export * from './caseDepth';
 export * from './equivalentTime';
 export * from './conversions';
 export * from './grades';
+export * from './uncertainty';
+export * from './calibration';
 export * from './totalCase';

@@ -167,17 +167,25 @@ describe('keyboard and touch', () => {
 });
 
 describe('accessibility (axe-core)', () => {
-  it('no serious or critical violation on any screen, in English and Spanish', async () => {
+  it('no serious or critical violation on any screen: English and Spanish, dark, light and high-contrast themes', async () => {
     const lines: string[] = [];
-    for (const locale of ['en-US', 'es-ES']) {
+    const runs = [
+      ['en-US', 'dark'],
+      ['es-ES', 'dark'],
+      ['en-US', 'light'],
+      ['en-US', 'contrast'],
+    ] as const;
+    for (const [locale, theme] of runs) {
       const { page, close } = await freshPage(locale);
+      await page.addInitScript((th) => localStorage.setItem('casefront.settings', JSON.stringify({ theme: th })), theme);
       for (const id of SCREENS) {
         await openScreen(page, id);
         if (id === 'cycle') await page.waitForSelector('.profile-chart canvas');
         const { violations } = await runAxe(page);
         const bad = violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
-        lines.push(`${locale} ${id}: ${violations.length} violation(s)${violations.length ? ` [${violations.map((v) => `${v.id}/${v.impact}`).join(', ')}]` : ''}`);
-        assert.deepEqual(bad, [], `${locale} ${id}`);
+        assert.equal(await page.evaluate(() => document.documentElement.dataset.theme), theme);
+        lines.push(`${locale} ${theme} ${id}: ${violations.length} violation(s)${violations.length ? ` [${violations.map((v) => `${v.id}/${v.impact}`).join(', ')}]` : ''}`);
+        assert.deepEqual(bad, [], `${locale} ${theme} ${id}`);
       }
       await close();
     }

@@ -1,9 +1,54 @@
 import preact from '@preact/preset-vite';
+import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
-  plugins: [preact()],
-  build: { target: 'es2022', sourcemap: true },
+  plugins: [
+    preact(),
+    VitePWA({
+      strategies: 'generateSW',
+      // The update waits for the user's go-ahead (src/pwa/UpdatePrompt.tsx).
+      registerType: 'prompt',
+      // We register from our own module: no inline script, so the CSP stays 'self'.
+      injectRegister: null,
+      // The glob below already precaches the icons and the plugin adds the manifest itself.
+      includeManifestIcons: false,
+      manifest: {
+        name: 'Casefront',
+        short_name: 'Casefront',
+        description: 'Offline carburizing calculator for the furnace floor.',
+        lang: 'en',
+        start_url: '.',
+        scope: '.',
+        display: 'standalone',
+        orientation: 'portrait',
+        background_color: '#101418',
+        theme_color: '#101418',
+        icons: [
+          { src: 'icons/icon-192.png', sizes: '192x192', type: 'image/png' },
+          { src: 'icons/icon-512.png', sizes: '512x512', type: 'image/png' },
+          { src: 'icons/maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
+        ],
+      },
+      workbox: {
+        // Every asset, the lazy screen chunks and the chart included, so the app works in airplane mode.
+        globPatterns: ['**/*.{js,css,html,png,svg,json}'],
+        navigateFallback: 'index.html',
+        cleanupOutdatedCaches: true,
+      },
+    }),
+  ],
+  build: {
+    target: 'es2022',
+    sourcemap: true,
+    manifest: true,
+    rolldownOptions: {
+      // The stdlib math packages are pure CommonJS functions: let unused ones (e.g. erfcx,
+      // needed only by the mass-transfer solution) drop out of the first screen's bundle; JSON
+      // (the locales) is data, so the app's lazy locale loading is not undone by a static import.
+      treeshake: { moduleSideEffects: (id: string) => !id.includes('/node_modules/@stdlib/') && !id.endsWith('.json') },
+    },
+  },
   preview: { port: 4173, strictPort: true },
   test: {
     include: ['test/**/*.test.ts', 'test/**/*.test.tsx'],

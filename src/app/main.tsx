@@ -1,8 +1,15 @@
+/** Entry: restore settings, apply theme and language, render the shell, register the service worker. */
 import { render } from 'preact';
+import { registerServiceWorker } from '../pwa/register';
+import { applyToDocument, loadInitialLanguage } from './settings/state';
+import { App } from './shell/App';
+import { followHash } from './shell/route';
+import './ui/base.css';
+import './ui/ui.css';
 
-/** Placeholder first screen; the shop-floor screens replace it. */
-function App() {
-  return <main><h1>Casefront</h1></main>;
-}
-
-render(<App />, document.getElementById('app')!);
+applyToDocument();
+followHash();
+void loadInitialLanguage().then(() => {
+  render(<App />, document.getElementById('app')!);
+  registerServiceWorker();
+});

@@ -16,3 +16,4 @@ export * from './calibration';
 export * from './cycle/recipe';
 export * from './cycle/readRecipe';
 export * from './cycle/simulate';
+export * from './totalCase';

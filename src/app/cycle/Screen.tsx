@@ -1,0 +1,94 @@
+/** Cycle editor: steps (add, remove, reorder, duplicate), part shape, steel, model, threshold; results, chart and table. */
+import { useMemo } from 'preact/hooks';
+import { MODEL_IDS } from '../../physics';
+import { defaults, model, theme } from '../settings/state';
+import { ChoiceField } from '../ui/ChoiceField';
+import { NO_VALUE } from '../ui/format';
+import { NumberField } from '../ui/NumberField';
+import { patch } from '../ui/persist';
+import { ResultsCard } from '../ui/ResultsCard';
+import { ThresholdField } from '../ui/ThresholdField';
+import { useScreenContext } from '../ui/screenContext';
+import { SteelFields } from '../ui/SteelFields';
+import { ProfileChart } from './ProfileChart';
+import { ProfileTable } from './ProfileTable';
+import { cycleOutcome } from './results';
+import { isPreview } from './simulate';
+import { addStep, cycleForm, duplicateStep, MAX_STEPS, moveStep, removeStep, SHAPES, updateStep } from './state';
+import { StepCard } from './StepCard';
+import { cycleView } from './view';
+import './screen.css';
+
+export default function CycleScreen() {
+  const ctx = useScreenContext();
+  const { t, units, show, word } = ctx;
+  const form = cycleForm.value;
+  const outcome = cycleOutcome.value;
+  const errors = outcome.errors;
+  const result = outcome.result;
+  const view = useMemo(() => (result ? cycleView(result, t, show, units) : undefined), [result, t, units]);
+  const canAdd = form.steps.length < MAX_STEPS;
+  const set = (next: typeof form) => (cycleForm.value = next);
+  const modelChoices = [
+    { value: '', label: t('app.cycle.modelFromSettings', { model: t(`app.models.${model.value}`) }) },
+    ...MODEL_IDS.map((m) => ({ value: m, label: t(`app.models.${m}`) })),
+  ];
+  return (
+    <div class="screen cycle">
+      <h1 tabIndex={-1}>{t('app.cycle.title')}</h1>
+      {isPreview && <p class="preview-note">{t('app.cycle.previewNote')}</p>}
+      <div class="answer" aria-live="polite">
+        <span class="answer-label">{view ? t('app.depth.answerDepth') : t('app.common.noResult')}</span>
+        <span class="answer-value">{view ? view.answer : NO_VALUE}</span>
+      </div>
+
+      <section aria-labelledby="cycle-steps">
+        <h2 id="cycle-steps">{t('app.cycle.stepsHeading')}</h2>
+        <ol class="steps">
+          {form.steps.map((step, i) => (
+            <StepCard
+              key={step.key}
+              index={i}
+              count={form.steps.length}
+              step={step}
+              errors={errors}
+              ctx={ctx}
+              betaPlaceholder={show.number(defaults.value.betaMPerS / 1e-7, 2)}
+              canAdd={canAdd}
+              onChange={(changes) => set(updateStep(form, i, changes))}
+              onMove={(by) => set(moveStep(form, i, by))}
+              onDuplicate={() => set(duplicateStep(form, i))}
+              onRemove={() => set(removeStep(form, i))}
+            />
+          ))}
+        </ol>
+        <button type="button" class="button button-wide" disabled={!canAdd} onClick={() => set(addStep(form))}>
+          {t('app.cycle.addStep')}
+        </button>
+      </section>
+
+      <section class="card" aria-labelledby="cycle-part">
+        <h2 id="cycle-part">{t('app.cycle.partHeading')}</h2>
+        <ChoiceField id="cycle-shape" label={t('app.cycle.shape')} value={form.shape} choices={SHAPES.map((s) => ({ value: s, label: t(`app.cycle.shapes.${s}`) }))} onChange={(v) => patch(cycleForm, { shape: v })} />
+        {(form.shape === 'plate' || form.shape === 'bar') && (
+          <NumberField
+            id="cycle-size"
+            label={form.shape === 'plate' ? t('app.cycle.thickness') : t('app.cycle.diameter')}
+            unit={units.depth}
+            value={form.size}
+            onInput={(v) => patch(cycleForm, { size: v })}
+            error={word(errors.size)}
+          />
+        )}
+        <SteelFields idPrefix="cycle-steel" steel={form.steel} onChange={(s) => patch(cycleForm, { steel: s })} errors={errors} word={word} />
+        <ChoiceField id="cycle-model" label={t('app.settings.model')} value={form.model} choices={modelChoices} onChange={(v) => patch(cycleForm, { model: v })} />
+        <ThresholdField id="cycle-threshold" value={form.threshold} onInput={(v) => patch(cycleForm, { threshold: v })} error={word(errors.threshold)} show={show} />
+      </section>
+
+      <ResultsCard id="cycle-results" error={word(outcome.general)} view={view}>
+        {view && <ProfileChart data={view.chart} label={t('app.cycle.chartLabel')} theme={theme.value} />}
+        {result && <ProfileTable profile={result.simulation.profile} ctx={ctx} />}
+      </ResultsCard>
+    </div>
+  );
+}

@@ -1,0 +1,99 @@
+/** Reads the cycle form into a Recipe (°C, h, mm, m/s) and runs it through the simulate adapter. */
+import { computed } from '@preact/signals';
+import { ALLOY_ELEMENTS, fail, isModelId, type DiffusivityModelId } from '../../physics';
+import type { PartShape, Recipe, RecipeStep, SimulationResult } from '../../physics/cycle/recipe';
+import { BETA_INPUT_SCALE, defaults, model } from '../settings/state';
+import { readField, readOptionalField } from '../ui/fieldText';
+import { FieldReader, placeError, type Outcome } from '../ui/outcome';
+import { readComposition } from '../ui/steel';
+import { PHYSICS_UNITS } from '../ui/units';
+import { simulate } from './simulate';
+import { cycleForm, type CycleForm } from './state';
+
+export interface CycleDefaults {
+  model: DiffusivityModelId;
+  ecdThresholdPct: number;
+  betaMPerS: number;
+}
+
+export interface CycleResult {
+  recipe: Recipe;
+  simulation: SimulationResult;
+}
+
+/** Recipe field names → form field names where they differ. */
+const FIELD_MAP: Record<string, string> = {
+  'steel.coreCarbonPct': 'coreCarbon',
+  thresholdCarbonPct: 'threshold',
+  'shape.thicknessMm': 'size',
+  'shape.diameterMm': 'size',
+  ...Object.fromEntries(ALLOY_ELEMENTS.map((e) => [`steel.composition.${e}`, `composition.${e}`])),
+};
+
+export function formFields(form: CycleForm): ReadonlySet<string> {
+  return new Set([
+    'coreCarbon',
+    'threshold',
+    'size',
+    ...ALLOY_ELEMENTS.map((e) => `composition.${e}`),
+    ...form.steps.flatMap((_, i) => ['durationH', 'startTempC', 'endTempC', 'carbonPotentialPct', 'betaMPerS'].map((f) => `steps.${i}.${f}`)),
+  ]);
+}
+
+function readShape(form: CycleForm, read: FieldReader): PartShape | undefined {
+  if (form.shape !== 'plate' && form.shape !== 'bar') return { kind: 'semi-infinite' };
+  const sizeMm = read.value(readField(form.size, 'size', PHYSICS_UNITS.depth));
+  if (sizeMm === undefined) return undefined;
+  if (!(sizeMm > 0)) {
+    read.value(fail('depth.notPositive', 'size', { value: sizeMm }));
+    return undefined;
+  }
+  return form.shape === 'plate' ? { kind: 'plate', thicknessMm: sizeMm } : { kind: 'bar', diameterMm: sizeMm };
+}
+
+export function buildRecipe(form: CycleForm, settings: CycleDefaults): { recipe?: Recipe; errors: FieldReader['errors'] } {
+  const read = new FieldReader();
+  const steps: (RecipeStep | undefined)[] = form.steps.map((s, i) => {
+    const durationH = read.value(readField(s.duration, `steps.${i}.durationH`, PHYSICS_UNITS.time));
+    const startTempC = read.value(readField(s.startTemp, `steps.${i}.startTempC`, PHYSICS_UNITS.temperature));
+    const endTempC = read.value(readField(s.endTemp, `steps.${i}.endTempC`, PHYSICS_UNITS.temperature));
+    const carbonPotentialPct = s.neutral ? null : read.value(readField(s.carbonPotential, `steps.${i}.carbonPotentialPct`));
+    const betaTyped = read.value(readOptionalField(s.beta, `steps.${i}.betaMPerS`));
+    if (durationH === undefined || startTempC === undefined || endTempC === undefined || carbonPotentialPct === undefined) return undefined;
+    return {
+      ...(s.label.trim() ? { label: s.label.trim() } : {}),
+      durationH,
+      startTempC,
+      endTempC,
+      carbonPotentialPct,
+      betaMPerS: betaTyped === undefined ? settings.betaMPerS : betaTyped * BETA_INPUT_SCALE,
+    };
+  });
+  const coreCarbonPct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
+  const composition = read.value(readComposition(form.steel));
+  const threshold = read.value(readOptionalField(form.threshold, 'threshold'));
+  const shape = readShape(form, read);
+  if (read.failed || coreCarbonPct === undefined || !shape) return { errors: read.errors };
+  return {
+    errors: {},
+    recipe: {
+      steel: { grade: form.steel.grade, coreCarbonPct, ...(composition ? { composition } : {}) },
+      model: isModelId(form.model) ? form.model : settings.model,
+      thresholdCarbonPct: threshold ?? settings.ecdThresholdPct,
+      shape,
+      steps: steps as RecipeStep[],
+    },
+  };
+}
+
+export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<CycleResult> {
+  const { recipe, errors } = buildRecipe(form, settings);
+  if (!recipe) return { errors };
+  const simulation = simulate(recipe);
+  if (!simulation.ok) return placeError(simulation.error, FIELD_MAP, formFields(form));
+  return { errors: {}, result: { recipe, simulation: simulation.value } };
+}
+
+export const cycleOutcome = computed(() =>
+  computeCycle(cycleForm.value, { model: model.value, ecdThresholdPct: defaults.value.ecdThresholdPct, betaMPerS: defaults.value.betaMPerS }),
+);

@@ -1,0 +1,90 @@
+/** The cycle editor's form: steps, part shape, steel, model and threshold, persisted as typed. */
+import { field, type FieldText } from '../ui/fieldText';
+import { persisted } from '../ui/persist';
+import { defaultSteel, type SteelForm } from '../ui/steel';
+
+export interface StepForm {
+  /** Stable key for the list (survives reordering). */
+  key: number;
+  label: string;
+  duration: FieldText;
+  startTemp: FieldText;
+  endTemp: FieldText;
+  /** No carbon transfer (neutral gas). */
+  neutral: boolean;
+  carbonPotential: FieldText;
+  /** In 10⁻⁷ m/s; empty: the default from the settings. */
+  beta: FieldText;
+}
+
+export const SHAPES = ['semi-infinite', 'plate', 'bar'] as const;
+export type ShapeKind = (typeof SHAPES)[number];
+
+export interface CycleForm {
+  steps: StepForm[];
+  shape: string;
+  /** Plate thickness or bar diameter. */
+  size: FieldText;
+  steel: SteelForm;
+  model: string;
+  /** Empty: the default from the settings. */
+  threshold: FieldText;
+  nextKey: number;
+}
+
+const step = (key: number, durationH: string, startC: string, endC: string, cp: string): StepForm => ({
+  key,
+  label: '',
+  duration: field(durationH, 'h'),
+  startTemp: field(startC, 'C'),
+  endTemp: field(endC, 'C'),
+  neutral: false,
+  carbonPotential: field(cp),
+  beta: field(''),
+});
+
+/** A boost and diffuse cycle for pinion KR-2231 (SAE 8620) of the demo scenario, then a drop to 845 °C. */
+export const DEFAULT_CYCLE_FORM: CycleForm = {
+  steps: [step(1, '3.5', '925', '925', '1.1'), step(2, '2', '925', '925', '0.8'), step(3, '0.5', '925', '845', '0.8'), step(4, '0.5', '845', '845', '0.8')],
+  shape: 'semi-infinite',
+  size: field('20', 'mm'),
+  steel: defaultSteel('sae-8620'),
+  model: '',
+  threshold: field(''),
+  nextKey: 5,
+};
+
+export const cycleForm = persisted<CycleForm>('form.cycle', DEFAULT_CYCLE_FORM);
+
+export const MAX_STEPS = 12;
+
+export function addStep(form: CycleForm): CycleForm {
+  if (form.steps.length >= MAX_STEPS) return form;
+  const last = form.steps[form.steps.length - 1];
+  const base = last ? { ...last, label: '', startTemp: last.endTemp, duration: { ...last.duration, text: '1' } } : step(0, '1', '925', '925', '0.8');
+  return { ...form, steps: [...form.steps, { ...base, key: form.nextKey }], nextKey: form.nextKey + 1 };
+}
+
+export function duplicateStep(form: CycleForm, index: number): CycleForm {
+  const original = form.steps[index];
+  if (!original || form.steps.length >= MAX_STEPS) return form;
+  const steps = [...form.steps];
+  steps.splice(index + 1, 0, { ...original, key: form.nextKey });
+  return { ...form, steps, nextKey: form.nextKey + 1 };
+}
+
+export function removeStep(form: CycleForm, index: number): CycleForm {
+  return form.steps.length <= 1 ? form : { ...form, steps: form.steps.filter((_, i) => i !== index) };
+}
+
+export function moveStep(form: CycleForm, index: number, by: -1 | 1): CycleForm {
+  const target = index + by;
+  if (target < 0 || target >= form.steps.length) return form;
+  const steps = [...form.steps];
+  [steps[index], steps[target]] = [steps[target]!, steps[index]!];
+  return { ...form, steps };
+}
+
+export function updateStep(form: CycleForm, index: number, changes: Partial<StepForm>): CycleForm {
+  return { ...form, steps: form.steps.map((s, i) => (i === index ? { ...s, ...changes } : s)) };
+}

@@ -1,0 +1,103 @@
+/**
+ * Reads the depth form into a physics request (°C, h, mm, %C) and calls the
+ * closed-form calculators; results and errors come back as an Outcome.
+ */
+import { computed } from '@preact/signals';
+import {
+  ALLOY_ELEMENTS,
+  caseDepth,
+  temperatureForCaseDepth,
+  timeForCaseDepth,
+  totalCaseDepthForMarginMm,
+  type CaseDepthResult,
+  type DiffusivityModelId,
+  type TemperatureResult,
+  type TimeResult,
+} from '../../physics';
+import { defaults, model } from '../settings/state';
+import { readField, readOptionalField } from '../ui/fieldText';
+import { FieldReader, placeError, type Outcome } from '../ui/outcome';
+import { readComposition } from '../ui/steel';
+import { PHYSICS_UNITS } from '../ui/units';
+import { depthForm, type DepthForm, type SolveFor } from './state';
+
+export type DepthResult =
+  | { solveFor: 'depth'; figures: CaseDepthResult; totalCaseMm: number | undefined }
+  | { solveFor: 'time'; figures: TimeResult; totalCaseMm: number | undefined }
+  | { solveFor: 'temperature'; figures: TemperatureResult; totalCaseMm: number | undefined };
+
+export interface DepthDefaults {
+  model: DiffusivityModelId;
+  ecdThresholdPct: number;
+  totalCaseMarginPct: number;
+}
+
+/** Physics request fields → form fields. */
+const FIELD_MAP: Record<string, string> = {
+  temperatureC: 'temperature',
+  timeH: 'time',
+  targetDepthMm: 'targetDepth',
+  carbonPotentialPct: 'carbon',
+  surfaceCarbonPct: 'carbon',
+  coreCarbonPct: 'coreCarbon',
+  thresholdCarbonPct: 'threshold',
+};
+
+const FORM_FIELDS = new Set([
+  'temperature',
+  'time',
+  'targetDepth',
+  'carbon',
+  'coreCarbon',
+  'threshold',
+  ...ALLOY_ELEMENTS.map((e) => `composition.${e}`),
+]);
+
+export function solveFor(form: DepthForm): SolveFor {
+  return form.solveFor === 'time' || form.solveFor === 'temperature' ? form.solveFor : 'depth';
+}
+
+/** The inputs each mode uses (the third is what it solves for). */
+export function usesField(mode: SolveFor, name: 'temperature' | 'time' | 'targetDepth'): boolean {
+  if (name === 'temperature') return mode !== 'temperature';
+  if (name === 'time') return mode !== 'time';
+  return mode !== 'depth';
+}
+
+export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<DepthResult> {
+  const mode = solveFor(form);
+  const read = new FieldReader();
+  const temperatureC = usesField(mode, 'temperature') ? read.value(readField(form.temperature, 'temperature', PHYSICS_UNITS.temperature)) : undefined;
+  const timeH = usesField(mode, 'time') ? read.value(readField(form.time, 'time', PHYSICS_UNITS.time)) : undefined;
+  const targetDepthMm = usesField(mode, 'targetDepth') ? read.value(readField(form.targetDepth, 'targetDepth', PHYSICS_UNITS.depth)) : undefined;
+  const carbonPct = read.value(readField(form.carbon, 'carbon'));
+  const corePct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
+  const thresholdPct = read.value(readOptionalField(form.threshold, 'threshold'));
+  const composition = read.value(readComposition(form.steel));
+  if (read.failed) return { errors: read.errors };
+
+  const request = {
+    ...(temperatureC === undefined ? {} : { temperatureC }),
+    ...(timeH === undefined ? {} : { timeH }),
+    ...(targetDepthMm === undefined ? {} : { targetDepthMm }),
+    [form.carbonSource === 'surface' ? 'surfaceCarbonPct' : 'carbonPotentialPct']: carbonPct,
+    coreCarbonPct: corePct,
+    thresholdCarbonPct: thresholdPct ?? settings.ecdThresholdPct,
+    model: settings.model,
+    composition,
+  };
+  const calculated =
+    mode === 'time' ? timeForCaseDepth(request) : mode === 'temperature' ? temperatureForCaseDepth(request) : caseDepth(request);
+  if (!calculated.ok) return placeError(calculated.error, FIELD_MAP, FORM_FIELDS);
+  const total = totalCaseDepthForMarginMm(calculated.value, settings.totalCaseMarginPct);
+  const totalCaseMm = total.ok ? total.value : undefined;
+  return { errors: {}, result: { solveFor: mode, figures: calculated.value, totalCaseMm } as DepthResult };
+}
+
+export const depthOutcome = computed(() =>
+  computeDepth(depthForm.value, {
+    model: model.value,
+    ecdThresholdPct: defaults.value.ecdThresholdPct,
+    totalCaseMarginPct: defaults.value.totalCaseMarginPct,
+  }),
+);

@@ -1,0 +1,110 @@
+/** Settings: units (system and per-quantity overrides), language, model, defaults, theme. */
+import { LANGUAGES, type Language } from '../../i18n/i18n';
+import { language } from '../../i18n/useT';
+import { MODEL_IDS } from '../../physics';
+import { ChoiceField } from '../ui/ChoiceField';
+import { UNIT_SYMBOLS } from '../ui/format';
+import { NumberField } from '../ui/NumberField';
+import { patch } from '../ui/persist';
+import { Segmented } from '../ui/Segmented';
+import { useScreenContext } from '../ui/screenContext';
+import { UNIT_CHOICES, UNIT_SYSTEMS, type DisplayQuantity, type UnitSystem } from '../ui/units';
+import { readBeta, readMargin, readThreshold, setLanguage, settings, THEMES } from './state';
+import './screen.css';
+
+/** Each language names itself, so it can be found whatever the current language. */
+const LANGUAGE_NAMES: Record<Language, string> = { en: 'English', es: 'Español', de: 'Deutsch' };
+
+export default function SettingsScreen() {
+  const { t, word } = useScreenContext();
+  const s = settings.value;
+  const beta = readBeta(s.beta);
+  const threshold = readThreshold(s.ecdThreshold);
+  const margin = readMargin(s.totalCaseMargin);
+  const marginError = margin === 'notPositive' ? t('app.settings.marginNotPositive') : margin.ok ? undefined : word(margin.error);
+  const unitChoices = (q: DisplayQuantity) => [
+    { value: 'auto', label: t('app.settings.followSystem') },
+    ...UNIT_CHOICES[q].map((u) => ({ value: u, label: UNIT_SYMBOLS[u] ?? u })),
+  ];
+  const setOverride = (q: DisplayQuantity, value: string) => patch(settings, { overrides: { ...s.overrides, [q]: value } });
+
+  return (
+    <div class="screen settings">
+      <h1 tabIndex={-1}>{t('app.settings.title')}</h1>
+      <section class="card" aria-labelledby="settings-language">
+        <h2 id="settings-language">{t('app.settings.languageHeading')}</h2>
+        <Segmented
+          name="settings-language"
+          legend={t('app.settings.language')}
+          value={language.value}
+          choices={LANGUAGES.map((l) => ({ value: l, label: LANGUAGE_NAMES[l] }))}
+          onChange={(v) => void setLanguage(v as Language)}
+        />
+      </section>
+      <section class="card" aria-labelledby="settings-units">
+        <h2 id="settings-units">{t('app.settings.unitsHeading')}</h2>
+        <Segmented
+          name="settings-units"
+          legend={t('app.settings.unitSystem')}
+          value={s.unitSystem}
+          choices={UNIT_SYSTEMS.map((u) => ({ value: u, label: t(`app.settings.system.${u}`) }))}
+          onChange={(v) => patch(settings, { unitSystem: v as UnitSystem })}
+        />
+        {(Object.keys(UNIT_CHOICES) as DisplayQuantity[]).map((q) => (
+          <Segmented key={q} name={`settings-unit-${q}`} legend={t(`app.settings.quantity.${q}`)} value={s.overrides[q]} choices={unitChoices(q)} onChange={(v) => setOverride(q, v)} />
+        ))}
+        <p class="note">{t('app.settings.overrideHint')}</p>
+      </section>
+      <section class="card" aria-labelledby="settings-model">
+        <h2 id="settings-model">{t('app.settings.calculationHeading')}</h2>
+        <ChoiceField
+          id="settings-model-choice"
+          label={t('app.settings.model')}
+          value={s.model}
+          choices={MODEL_IDS.map((m) => ({ value: m, label: t(`app.models.${m}`) }))}
+          onChange={(v) => patch(settings, { model: v })}
+          hint={t('app.settings.modelHint')}
+        />
+        <div class="field-grid">
+          <NumberField
+            id="settings-threshold"
+            label={t('app.settings.ecdThreshold')}
+            unitLabel={UNIT_SYMBOLS.pctC}
+            value={s.ecdThreshold}
+            onInput={(v) => patch(settings, { ecdThreshold: v })}
+            error={threshold.ok ? undefined : word(threshold.error)}
+            hint={t('app.settings.ecdThresholdHint')}
+          />
+          <NumberField
+            id="settings-margin"
+            label={t('app.settings.totalCaseMargin')}
+            unitLabel={UNIT_SYMBOLS.pctC}
+            value={s.totalCaseMargin}
+            onInput={(v) => patch(settings, { totalCaseMargin: v })}
+            error={marginError}
+            hint={t('app.settings.totalCaseMarginHint')}
+          />
+          <NumberField
+            id="settings-beta"
+            label={t('app.settings.beta')}
+            unitLabel={UNIT_SYMBOLS.beta7}
+            value={s.beta}
+            onInput={(v) => patch(settings, { beta: v })}
+            error={beta.ok ? undefined : word(beta.error)}
+            hint={t('app.settings.betaHint')}
+          />
+        </div>
+      </section>
+      <section class="card" aria-labelledby="settings-theme">
+        <h2 id="settings-theme">{t('app.settings.themeHeading')}</h2>
+        <Segmented
+          name="settings-theme"
+          legend={t('app.settings.theme')}
+          value={s.theme}
+          choices={THEMES.map((th) => ({ value: th, label: t(`app.settings.themes.${th}`) }))}
+          onChange={(v) => patch(settings, { theme: v })}
+        />
+      </section>
+    </div>
+  );
+}

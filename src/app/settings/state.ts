@@ -1,0 +1,111 @@
+/**
+ * App-wide settings: units, language, diffusivity model, defaults for β and the
+ * depth thresholds, theme. Persisted; the language and theme are applied to the page here.
+ */
+import { computed, effect } from '@preact/signals';
+import type { Language } from '../../i18n/i18n';
+import { initialLanguage, language, switchLanguage } from '../../i18n/useT';
+import {
+  DEFAULT_ECD_THRESHOLD_PCT,
+  DEFAULT_MODEL,
+  isModelId,
+  TOTAL_CASE_MARGIN_PCT,
+  type DiffusivityModelId,
+  type Result,
+} from '../../physics';
+import { DEFAULT_BETA_M_PER_S } from '../../physics/cycle/recipe';
+import { checkBeta, checkCarbonPct } from '../../physics/validate';
+import { field, readField, type FieldText } from '../ui/fieldText';
+import { persisted } from '../ui/persist';
+import { displayUnits, type UnitOverrides, type UnitSystem } from '../ui/units';
+
+export const THEMES = ['dark', 'light', 'contrast'] as const;
+export type Theme = (typeof THEMES)[number];
+
+/** β is typed in units of 10⁻⁷ m/s: the typical values are then 1–3. */
+export const BETA_INPUT_SCALE = 1e-7;
+
+export interface Settings {
+  unitSystem: UnitSystem;
+  overrides: UnitOverrides;
+  language: string;
+  model: string;
+  beta: FieldText;
+  ecdThreshold: FieldText;
+  totalCaseMargin: FieldText;
+  theme: string;
+}
+
+export const DEFAULT_SETTINGS: Settings = {
+  unitSystem: 'metric',
+  overrides: { temperature: 'auto', depth: 'auto', time: 'auto' },
+  language: '',
+  model: DEFAULT_MODEL,
+  beta: field(String(DEFAULT_BETA_M_PER_S / BETA_INPUT_SCALE)),
+  ecdThreshold: field(String(DEFAULT_ECD_THRESHOLD_PCT)),
+  totalCaseMargin: field(String(TOTAL_CASE_MARGIN_PCT)),
+  theme: 'dark',
+};
+
+export const settings = persisted<Settings>('settings', DEFAULT_SETTINGS);
+
+/** Loads the stored language (or the browser's preference) before the first render. */
+export function loadInitialLanguage(): Promise<void> {
+  return switchLanguage(initialLanguage(settings.value.language));
+}
+
+export async function setLanguage(lng: Language): Promise<void> {
+  settings.value = { ...settings.value, language: lng };
+  await switchLanguage(lng);
+}
+
+export const units = computed(() => displayUnits(settings.value.unitSystem, settings.value.overrides));
+
+export const model = computed<DiffusivityModelId>(() => (isModelId(settings.value.model) ? settings.value.model : DEFAULT_MODEL));
+
+export const theme = computed<Theme>(() => ((THEMES as readonly string[]).includes(settings.value.theme) ? (settings.value.theme as Theme) : 'dark'));
+
+/** Default β in m/s, validated. */
+export function readBeta(value: FieldText): Result<number> {
+  const typed = readField(value, 'beta');
+  return typed.ok ? checkBeta(typed.value * BETA_INPUT_SCALE, 'beta') : typed;
+}
+
+export function readThreshold(value: FieldText): Result<number> {
+  const typed = readField(value, 'ecdThreshold');
+  return typed.ok ? checkCarbonPct(typed.value, 'ecdThreshold') : typed;
+}
+
+/** Total-case margin above core carbon, %C; zero would put the total case at infinite depth. */
+export function readMargin(value: FieldText): Result<number> | 'notPositive' {
+  const typed = readField(value, 'totalCaseMargin');
+  if (!typed.ok) return typed;
+  return typed.value > 0 ? checkCarbonPct(typed.value, 'totalCaseMargin') : 'notPositive';
+}
+
+/** Settings read for use: invalid entries fall back to the defaults (and are flagged on the settings screen). */
+export const defaults = computed(() => {
+  const s = settings.value;
+  const beta = readBeta(s.beta);
+  const threshold = readThreshold(s.ecdThreshold);
+  const margin = readMargin(s.totalCaseMargin);
+  return {
+    betaMPerS: beta.ok ? beta.value : DEFAULT_BETA_M_PER_S,
+    ecdThresholdPct: threshold.ok ? threshold.value : DEFAULT_ECD_THRESHOLD_PCT,
+    totalCaseMarginPct: margin !== 'notPositive' && margin.ok ? margin.value : TOTAL_CASE_MARGIN_PCT,
+  };
+});
+
+const THEME_COLOURS: Record<Theme, string> = { dark: '#101418', light: '#f4f3ee', contrast: '#000000' };
+
+/** Applies language and theme to the document (browser only). */
+export function applyToDocument(): void {
+  effect(() => {
+    document.documentElement.lang = language.value;
+  });
+  effect(() => {
+    const current = theme.value;
+    document.documentElement.dataset.theme = current;
+    document.querySelector('meta[name="theme-color"]')?.setAttribute('content', THEME_COLOURS[current]);
+  });
+}

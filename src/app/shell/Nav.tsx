@@ -1,0 +1,23 @@
+/** Bottom navigation within thumb reach; each item at least 48 px tall. */
+import { useT } from '../../i18n/useT';
+import { Icon } from '../ui/Icon';
+import { hrefFor, route } from './route';
+import { NAV_SCREENS } from './screens';
+
+export function Nav() {
+  const t = useT();
+  return (
+    <nav class="bottom-nav" aria-label={t('app.nav.label')}>
+      <ul>
+        {NAV_SCREENS.map((id) => (
+          <li key={id}>
+            <a href={hrefFor(id)} aria-current={route.value === id ? 'page' : undefined}>
+              <Icon name={id} />
+              <span>{t(`app.nav.${id}`)}</span>
+            </a>
+          </li>
+        ))}
+      </ul>
+    </nav>
+  );
+}

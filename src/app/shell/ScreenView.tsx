@@ -1,0 +1,37 @@
+/** Shows the routed screen, loading its chunk the first time it is opened. */
+import { signal } from '@preact/signals';
+import type { ComponentType } from 'preact';
+import { useEffect, useRef } from 'preact/hooks';
+import { useT } from '../../i18n/useT';
+import type { ScreenId } from './route';
+import { FIRST_SCREEN, LOADERS } from './screens';
+
+const loaded = signal<Partial<Record<ScreenId, ComponentType>>>({ depth: FIRST_SCREEN });
+const failed = signal<Partial<Record<ScreenId, boolean>>>({});
+
+function load(id: Exclude<ScreenId, 'depth'>): void {
+  LOADERS[id]()
+    .then((mod) => {
+      loaded.value = { ...loaded.value, [id]: mod.default };
+    })
+    .catch(() => {
+      failed.value = { ...failed.value, [id]: true };
+    });
+}
+
+export function ScreenView({ id }: { id: ScreenId }) {
+  const t = useT();
+  const Screen = loaded.value[id];
+  const shown = useRef<ScreenId | null>(null);
+  useEffect(() => {
+    if (!Screen) {
+      if (id !== 'depth') load(id);
+      return;
+    }
+    // After a navigation (not the first paint), once the screen is on the page, move focus to its heading.
+    if (shown.current !== null && shown.current !== id) document.querySelector<HTMLElement>('main h1')?.focus();
+    shown.current = id;
+  }, [id, Screen]);
+  if (Screen) return <Screen />;
+  return <p class="screen-loading">{failed.value[id] ? t('app.shell.loadFailed') : t('app.shell.loading')}</p>;
+}

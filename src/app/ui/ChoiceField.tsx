@@ -1,0 +1,37 @@
+/** A labelled drop-down for longer lists (steel grade, model, unit). */
+export interface Choice {
+  value: string;
+  label: string;
+}
+
+export interface ChoiceFieldProps {
+  id: string;
+  label: string;
+  value: string;
+  choices: readonly Choice[];
+  onChange: (value: string) => void;
+  hint?: string | undefined;
+  compact?: boolean;
+}
+
+export function ChoiceField({ id, label, value, choices, onChange, hint, compact }: ChoiceFieldProps) {
+  return (
+    <div class={compact ? 'field field-compact' : 'field'}>
+      <label for={id}>{label}</label>
+      <div class="field-box">
+        <select id={id} value={value} aria-describedby={hint ? `${id}-hint` : undefined} onChange={(e) => onChange(e.currentTarget.value)}>
+          {choices.map((c) => (
+            <option key={c.value} value={c.value}>
+              {c.label}
+            </option>
+          ))}
+        </select>
+      </div>
+      {hint && (
+        <p id={`${id}-hint`} class="field-hint">
+          {hint}
+        </p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,63 @@
+/** A labelled numeric input: accepts a decimal comma, shows its unit and its error in words beside it. */
+import { language } from '../../i18n/useT';
+import { displayText, type FieldText } from './fieldText';
+import { UNIT_SYMBOLS } from './format';
+
+export interface NumberFieldProps {
+  id: string;
+  label: string;
+  value: FieldText;
+  /** Unit the field is shown and typed in ('' for none); `unitLabel` overrides its symbol. */
+  unit?: string;
+  unitLabel?: string;
+  onInput: (next: FieldText) => void;
+  error?: string | undefined;
+  hint?: string | undefined;
+  placeholder?: string | undefined;
+  compact?: boolean;
+  /** Label kept for screen readers only (a table-like row with visible column titles). */
+  hideLabel?: boolean;
+}
+
+export function NumberField({ id, label, value, unit = '', unitLabel, onInput, error, hint, placeholder, compact, hideLabel }: NumberFieldProps) {
+  const shown = displayText(value, unit, language.value);
+  const symbol = unitLabel ?? (unit ? (UNIT_SYMBOLS[unit] ?? unit) : '');
+  const described = [hint ? `${id}-hint` : '', error ? `${id}-error` : ''].filter(Boolean).join(' ');
+  return (
+    <div class={compact ? 'field field-compact' : 'field'}>
+      <label for={id} class={hideLabel ? 'visually-hidden' : undefined}>
+        {label}
+        {symbol && <span class="visually-hidden"> ({symbol})</span>}
+      </label>
+      <div class={error ? 'field-box field-box-invalid' : 'field-box'}>
+        <input
+          id={id}
+          type="text"
+          inputMode="decimal"
+          autoComplete="off"
+          spellcheck={false}
+          value={shown}
+          placeholder={placeholder}
+          aria-invalid={error ? 'true' : undefined}
+          aria-describedby={described || undefined}
+          onInput={(e) => onInput({ text: e.currentTarget.value, unit })}
+        />
+        {symbol && (
+          <span class="field-unit" aria-hidden="true">
+            {symbol}
+          </span>
+        )}
+      </div>
+      {hint && (
+        <p id={`${id}-hint`} class="field-hint">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} class="field-error">
+          {error}
+        </p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,26 @@
+/** A short set of exclusive options as large radio segments (thumb-sized, keyboard: arrow keys). */
+import type { Choice } from './ChoiceField';
+
+export interface SegmentedProps {
+  name: string;
+  legend: string;
+  value: string;
+  choices: readonly Choice[];
+  onChange: (value: string) => void;
+}
+
+export function Segmented({ name, legend, value, choices, onChange }: SegmentedProps) {
+  return (
+    <fieldset class="segmented">
+      <legend>{legend}</legend>
+      <div class="segmented-options">
+        {choices.map((c) => (
+          <label key={c.value} class={c.value === value ? 'segment segment-on' : 'segment'}>
+            <input type="radio" name={name} value={c.value} checked={c.value === value} onChange={() => onChange(c.value)} />
+            <span>{c.label}</span>
+          </label>
+        ))}
+      </div>
+    </fieldset>
+  );
+}

@@ -1,0 +1,29 @@
+/** What every screen needs to word and format: translate, show in the user's units, word errors. */
+import type { TFunction } from 'i18next';
+import { language, useT } from '../../i18n/useT';
+import type { InputError } from '../../physics';
+import { units } from '../settings/state';
+import { wordError } from './fieldError';
+import { makeShow, type Show } from './show';
+import type { DisplayUnits } from './units';
+
+export interface ScreenContext {
+  t: TFunction;
+  locale: string;
+  units: DisplayUnits;
+  show: Show;
+  word: (error: InputError | undefined) => string | undefined;
+}
+
+export function useScreenContext(): ScreenContext {
+  const t = useT();
+  const locale = language.value;
+  const current = units.value;
+  return {
+    t,
+    locale,
+    units: current,
+    show: makeShow(current, locale),
+    word: (error) => (error ? wordError(t, error, current, locale) : undefined),
+  };
+}

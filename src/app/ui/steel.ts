@@ -1,0 +1,49 @@
+/**
+ * The steel part of a form, shared by the depth and cycle screens: a listed grade
+ * (nominal composition) or a custom composition, and core carbon.
+ */
+import { ALLOY_ELEMENTS, findGrade, fail, ok, type Composition, type Result } from '../../physics';
+import { field, readField, type FieldText } from './fieldText';
+
+export const CUSTOM_STEEL = 'custom';
+
+export interface SteelForm {
+  /** A grade id from grades.ts, or CUSTOM_STEEL. */
+  grade: string;
+  coreCarbon: FieldText;
+  composition: Record<(typeof ALLOY_ELEMENTS)[number], FieldText>;
+}
+
+export const defaultSteel = (gradeId: string): SteelForm => {
+  const grade = findGrade(gradeId);
+  return {
+    grade: gradeId,
+    coreCarbon: field(String(grade?.coreCarbonPct ?? 0.2)),
+    composition: Object.fromEntries(ALLOY_ELEMENTS.map((e) => [e, field(String(grade?.composition[e] ?? 0))])) as SteelForm['composition'],
+  };
+};
+
+/** Choosing a grade fills core carbon and composition with its nominal values; custom keeps what is there. */
+export function chooseGrade(steel: SteelForm, gradeId: string): SteelForm {
+  const grade = findGrade(gradeId);
+  if (!grade) return { ...steel, grade: CUSTOM_STEEL };
+  return { ...defaultSteel(gradeId), grade: gradeId };
+}
+
+/** The composition to send to physics: the grade's nominal one, or the custom entries (field names `composition.X`). */
+export function readComposition(steel: SteelForm): Result<Composition> {
+  const grade = findGrade(steel.grade);
+  if (grade) return ok(grade.composition);
+  const out: Partial<Composition> = {};
+  for (const element of ALLOY_ELEMENTS) {
+    const text = steel.composition[element];
+    if (text.text.trim() === '') {
+      out[element] = 0;
+      continue;
+    }
+    const value = readField(text, `composition.${element}`);
+    if (!value.ok) return value;
+    out[element] = value.value;
+  }
+  return out.Si === undefined ? fail('field.missing', 'composition') : ok(out as Composition);
+}

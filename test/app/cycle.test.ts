@@ -1,0 +1,88 @@
+/** The cycle editor's list operations, its recipe reading, and the closed-form preview behind the adapter. */
+import { describe, expect, it } from 'vitest';
+import { previewCycle } from '../../src/app/cycle/preview';
+import { buildRecipe, computeCycle } from '../../src/app/cycle/results';
+import { isPreview, simulate } from '../../src/app/cycle/simulate';
+import { addStep, DEFAULT_CYCLE_FORM, duplicateStep, MAX_STEPS, moveStep, removeStep, updateStep } from '../../src/app/cycle/state';
+import { field } from '../../src/app/ui/fieldText';
+import { caseDepth } from '../../src/physics';
+
+const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, betaMPerS: 1.5e-7 };
+
+describe('cycle step list', () => {
+  const f = DEFAULT_CYCLE_FORM;
+  it('adds a step continuing from the last end temperature, with a new key', () => {
+    const next = addStep(f);
+    expect(next.steps).toHaveLength(f.steps.length + 1);
+    expect(next.steps.at(-1)?.startTemp).toEqual(f.steps.at(-1)?.endTemp);
+    expect(new Set(next.steps.map((s) => s.key)).size).toBe(next.steps.length);
+  });
+  it('duplicates after the original, removes, and never removes the last step', () => {
+    const dup = duplicateStep(f, 0);
+    expect(dup.steps[1]?.carbonPotential).toEqual(f.steps[0]?.carbonPotential);
+    expect(dup.steps[1]?.key).not.toBe(f.steps[0]?.key);
+    expect(removeStep(f, 0).steps.map((s) => s.key)).toEqual(f.steps.slice(1).map((s) => s.key));
+    let one = f;
+    while (one.steps.length > 1) one = removeStep(one, 0);
+    expect(removeStep(one, 0).steps).toHaveLength(1);
+  });
+  it('moves steps within bounds and caps the count', () => {
+    expect(moveStep(f, 0, 1).steps.map((s) => s.key)).toEqual([2, 1, 3, 4]);
+    expect(moveStep(f, 0, -1)).toBe(f);
+    let many = f;
+    for (let i = 0; i < 20; i++) many = addStep(many);
+    expect(many.steps).toHaveLength(MAX_STEPS);
+  });
+});
+
+describe('recipe from the form', () => {
+  it('reads units, neutral steps and the default β', () => {
+    const form = updateStep(updateStep(DEFAULT_CYCLE_FORM, 0, { duration: field('210', 'min'), startTemp: field('1697', 'F') }), 3, { neutral: true });
+    const { recipe } = buildRecipe(form, settings);
+    expect(recipe?.steps[0]?.durationH).toBeCloseTo(3.5, 12);
+    expect(recipe?.steps[0]?.startTempC).toBeCloseTo(925, 12);
+    expect(recipe?.steps[3]?.carbonPotentialPct).toBeNull();
+    expect(recipe?.steps[1]?.betaMPerS).toBe(1.5e-7);
+  });
+  it('places errors on the step field that caused them', () => {
+    const bad = updateStep(DEFAULT_CYCLE_FORM, 1, { duration: field('zwei', 'h') });
+    expect(computeCycle(bad, settings).errors['steps.1.durationH']?.code).toBe('number.invalid');
+    const hot = updateStep(DEFAULT_CYCLE_FORM, 2, { endTemp: field('1400', 'C') });
+    expect(computeCycle(hot, settings).errors['steps.2.endTempC']?.code).toBe('temperature.outOfRange');
+  });
+});
+
+describe('closed-form preview (until the solver is wired)', () => {
+  it('the adapter still points at the preview and says so', () => {
+    expect(isPreview).toBe(true);
+    expect(simulate).toBe(previewCycle);
+  });
+  it('a single soak gives the same depths as the closed-form case-depth calculator', () => {
+    const recipe = {
+      steel: { coreCarbonPct: 0.2 },
+      model: 'agren' as const,
+      thresholdCarbonPct: 0.4,
+      steps: [{ durationH: 6, startTempC: 925, endTempC: 925, carbonPotentialPct: 0.9 }],
+    };
+    const preview = previewCycle(recipe);
+    const closed = caseDepth({ temperatureC: 925, timeH: 6, surfaceCarbonPct: 0.9, coreCarbonPct: 0.2, thresholdCarbonPct: 0.4, model: 'agren' });
+    if (!preview.ok || !closed.ok) throw new Error('expected results');
+    expect(preview.value.effectiveCaseDepthMm).toBeCloseTo(closed.value.effectiveCaseDepthMm, 9);
+    expect(preview.value.totalCaseDepthMm).toBeCloseTo(closed.value.totalCaseDepthMm, 9);
+    expect(preview.value.profile[0]?.carbonPct).toBeCloseTo(0.9, 12);
+    expect(preview.value.profile.every((p, i, all) => i === 0 || p.carbonPct <= all[i - 1]!.carbonPct)).toBe(true);
+  });
+  it('gives finite numbers and step-tagged cautions for the default boost/diffuse cycle', () => {
+    const out = computeCycle(DEFAULT_CYCLE_FORM, settings);
+    expect(out.result).toBeDefined();
+    const sim = out.result!.simulation;
+    expect([sim.effectiveCaseDepthMm, sim.totalCaseDepthMm, ...sim.profile.flatMap((p) => [p.depthMm, p.carbonPct, p.hardnessHrc])].every(Number.isFinite)).toBe(true);
+    const tooRich = updateStep(DEFAULT_CYCLE_FORM, 0, { carbonPotential: field('1.5') });
+    const warnings = computeCycle(tooRich, settings).result?.simulation.warnings ?? [];
+    expect(warnings.some((w) => w.code === 'saturation.potentialAboveAcm' && w.stepIndex === 0)).toBe(true);
+  });
+  it('rejects a request that is not a recipe without throwing', () => {
+    expect(previewCycle(null).ok).toBe(false);
+    expect(previewCycle({ steps: 'x' }).ok).toBe(false);
+  });
+});

@@ -1,0 +1,88 @@
+/**
+ * Offline from the second visit, and an update that waits for the user and loses
+ * nothing typed. The update is made by changing the served service-worker script
+ * (a new version for the browser), then restoring it.
+ */
+import assert from 'node:assert/strict';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { after, before, describe, it } from 'node:test';
+import type { Browser, Page } from 'playwright-core';
+import { foreignRequests, launch, openScreen, phoneContext } from './browser';
+
+let browser: Browser;
+before(async () => {
+  browser = await launch();
+});
+after(async () => {
+  await browser?.close();
+});
+
+async function waitUntilOfflineReady(page: Page): Promise<void> {
+  await page.evaluate(() => navigator.serviceWorker.ready);
+  await page.waitForSelector('[data-offline-state="ready"]');
+}
+
+describe('offline', () => {
+  it('after the first visit the app works in airplane mode, every screen opens, and the inputs are still there', async () => {
+    const { context, recorder } = await phoneContext(browser);
+    const page = await context.newPage();
+    await openScreen(page, 'depth');
+    await waitUntilOfflineReady(page);
+    await page.fill('#depth-time', '7,5');
+    const online = await page.textContent('.answer-value');
+
+    await context.setOffline(true);
+    await page.reload();
+    await page.waitForSelector('main h1');
+    assert.equal(await page.inputValue('#depth-time'), '7,5');
+    assert.equal(await page.textContent('.answer-value'), online);
+    assert.equal(await page.getAttribute('.offline-status', 'data-offline-state'), 'offline');
+    for (const id of ['cycle', 'recovery', 'convert', 'settings', 'safety']) {
+      await page.click(id === 'safety' ? '.safety-link' : `a[href="#/${id}"]`);
+      await page.waitForFunction((screen) => location.hash === `#/${screen}` && !document.querySelector('.screen-loading'), id);
+    }
+    await page.click('a[href="#/cycle"]');
+    await page.waitForSelector('.profile-chart canvas');
+    // Switching language offline loads the other locale from the cache.
+    await page.click('a[href="#/settings"]');
+    await page.locator('label.segment', { hasText: 'Deutsch' }).click();
+    await page.waitForFunction(() => document.querySelector('main h1')?.textContent === 'Optionen');
+    assert.deepEqual(foreignRequests(recorder), []);
+    assert.deepEqual(recorder.problems.filter((p) => !/ERR_INTERNET_DISCONNECTED/.test(p)), []);
+    await context.close();
+  });
+});
+
+describe('update prompt', () => {
+  it('a new version waits for the user; accepting reloads into it and keeps what was typed', async () => {
+    const swPath = 'dist/sw.js';
+    const original = readFileSync(swPath, 'utf8');
+    const { context } = await phoneContext(browser);
+    const page = await context.newPage();
+    try {
+      await openScreen(page, 'recovery');
+      await waitUntilOfflineReady(page);
+      await page.reload(); // now controlled by the installed worker
+      await page.waitForSelector('main h1');
+      const firstWorker = await page.evaluate(() => navigator.serviceWorker.controller?.scriptURL);
+      assert.ok(firstWorker);
+
+      writeFileSync(swPath, `${original}\n// next version\n`);
+      await page.fill('#recovery-required', '5,5');
+      await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.update());
+      await page.waitForSelector('.update-prompt');
+      // Nothing is applied until the user says so: the old worker still controls the page.
+      assert.equal(await page.evaluate(() => navigator.serviceWorker.getRegistration().then((r) => Boolean(r?.waiting))), true);
+      assert.equal(await page.inputValue('#recovery-required'), '5,5');
+
+      await Promise.all([page.waitForEvent('load'), page.click('.update-prompt .button-primary')]);
+      await page.waitForSelector('main h1');
+      assert.equal(await page.inputValue('#recovery-required'), '5,5');
+      assert.equal(await page.locator('.update-prompt').count(), 0);
+      assert.equal(await page.evaluate(() => navigator.serviceWorker.getRegistration().then((r) => Boolean(r?.waiting))), false);
+    } finally {
+      writeFileSync(swPath, original);
+      await context.close();
+    }
+  });
+});

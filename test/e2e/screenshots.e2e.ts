@@ -1,0 +1,37 @@
+/** Screenshots of every screen at 390×844 in English and Spanish, into test-results/ for review. */
+import assert from 'node:assert/strict';
+import { mkdirSync } from 'node:fs';
+import { after, before, describe, it } from 'node:test';
+import type { Browser } from 'playwright-core';
+import { launch, openScreen, phoneContext, SCREENS } from './browser';
+
+let browser: Browser;
+before(async () => {
+  browser = await launch();
+});
+after(async () => {
+  await browser?.close();
+});
+
+describe('screenshots', () => {
+  for (const [language, locale] of [
+    ['en', 'en-US'],
+    ['es', 'es-ES'],
+  ] as const) {
+    it(`every screen at 390×844 in ${language}, without horizontal overflow`, async () => {
+      mkdirSync('test-results', { recursive: true });
+      const { context } = await phoneContext(browser, locale);
+      const page = await context.newPage();
+      for (const id of SCREENS) {
+        await openScreen(page, id);
+        if (id === 'cycle') await page.waitForSelector('.profile-chart canvas');
+        assert.equal(await page.evaluate(() => document.documentElement.lang), language);
+        const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+        assert.ok(overflow <= 0, `${language} ${id}: ${overflow} px wider than the screen`);
+        await page.screenshot({ path: `test-results/${language}-${id}.png` });
+        await page.screenshot({ path: `test-results/${language}-${id}-full.png`, fullPage: true });
+      }
+      await context.close();
+    });
+  }
+});

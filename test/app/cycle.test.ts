@@ -1,8 +1,8 @@
-/** The cycle editor's list operations, its recipe reading, and the closed-form preview behind the adapter. */
+/** The cycle editor's list operations, its recipe reading, and the solver behind the adapter. */
 import { describe, expect, it } from 'vitest';
-import { previewCycle } from '../../src/app/cycle/preview';
+import { simulateCycle } from '../../src/physics/cycle/simulate';
 import { buildRecipe, computeCycle } from '../../src/app/cycle/results';
-import { isPreview, simulate } from '../../src/app/cycle/simulate';
+import { simulate } from '../../src/app/cycle/simulate';
 import { addStep, DEFAULT_CYCLE_FORM, duplicateStep, MAX_STEPS, moveStep, removeStep, updateStep } from '../../src/app/cycle/state';
 import { field } from '../../src/app/ui/fieldText';
 import { caseDepth } from '../../src/physics';
@@ -52,25 +52,12 @@ describe('recipe from the form', () => {
   });
 });
 
-describe('closed-form preview (until the solver is wired)', () => {
-  it('the adapter still points at the preview and says so', () => {
-    expect(isPreview).toBe(true);
-    expect(simulate).toBe(previewCycle);
-  });
-  it('a single soak gives the same depths as the closed-form case-depth calculator', () => {
-    const recipe = {
-      steel: { coreCarbonPct: 0.2 },
-      model: 'agren' as const,
-      thresholdCarbonPct: 0.4,
-      steps: [{ durationH: 6, startTempC: 925, endTempC: 925, carbonPotentialPct: 0.9 }],
-    };
-    const preview = previewCycle(recipe);
-    const closed = caseDepth({ temperatureC: 925, timeH: 6, surfaceCarbonPct: 0.9, coreCarbonPct: 0.2, thresholdCarbonPct: 0.4, model: 'agren' });
-    if (!preview.ok || !closed.ok) throw new Error('expected results');
-    expect(preview.value.effectiveCaseDepthMm).toBeCloseTo(closed.value.effectiveCaseDepthMm, 9);
-    expect(preview.value.totalCaseDepthMm).toBeCloseTo(closed.value.totalCaseDepthMm, 9);
-    expect(preview.value.profile[0]?.carbonPct).toBeCloseTo(0.9, 12);
-    expect(preview.value.profile.every((p, i, all) => i === 0 || p.carbonPct <= all[i - 1]!.carbonPct)).toBe(true);
+describe('the cycle screen runs the cycle solver', () => {
+  it('the recipe read from the form gives the same result as the solver called directly', () => {
+    const out = computeCycle(DEFAULT_CYCLE_FORM, settings);
+    const direct = simulateCycle(out.result!.recipe);
+    if (!direct.ok) throw new Error(direct.error.code);
+    expect(out.result!.simulation).toEqual(direct.value);
   });
   it('gives finite numbers and step-tagged cautions for the default boost/diffuse cycle', () => {
     const out = computeCycle(DEFAULT_CYCLE_FORM, settings);
@@ -82,7 +69,7 @@ describe('closed-form preview (until the solver is wired)', () => {
     expect(warnings.some((w) => w.code === 'saturation.potentialAboveAcm' && w.stepIndex === 0)).toBe(true);
   });
   it('rejects a request that is not a recipe without throwing', () => {
-    expect(previewCycle(null).ok).toBe(false);
-    expect(previewCycle({ steps: 'x' }).ok).toBe(false);
+    expect(simulate(null).ok).toBe(false);
+    expect(simulate({ steps: 'x' }).ok).toBe(false);
   });
 });

@@ -13,7 +13,6 @@ import { SteelFields } from '../ui/SteelFields';
 import { ProfileChart } from './ProfileChart';
 import { ProfileTable } from './ProfileTable';
 import { cycleOutcome } from './results';
-import { isPreview } from './simulate';
 import { addStep, cycleForm, duplicateStep, MAX_STEPS, moveStep, removeStep, SHAPES, updateStep } from './state';
 import { StepCard } from './StepCard';
 import { cycleView } from './view';
@@ -36,7 +35,6 @@ export default function CycleScreen() {
   return (
     <div class="screen cycle">
       <h1 tabIndex={-1}>{t('app.cycle.title')}</h1>
-      {isPreview && <p class="preview-note">{t('app.cycle.previewNote')}</p>}
       <div class="answer" aria-live="polite">
         <span class="answer-label">{view ? t('app.depth.answerDepth') : t('app.common.noResult')}</span>
         <span class="answer-value">{view ? view.answer : NO_VALUE}</span>

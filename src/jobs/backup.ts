@@ -57,5 +57,5 @@ export function parseBackup(text: string): JobsResult<Backup> {
   const parsed = v.safeParse(BackupSchema, data);
   if (parsed.success) return succeed(parsed.output);
   const issues = issuesOf(parsed.issues);
-  return failWith('import.invalid', { count: parsed.issues.length, path: issues[0]?.path ?? '(root)' }, issues);
+  return failWith('import.invalid', { count: parsed.issues.length }, issues);
 }

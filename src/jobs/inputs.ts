@@ -96,6 +96,10 @@ export const JobInputsSchema = v.variant('kind', [
 
 export type JobInputs = v.InferOutput<typeof JobInputsSchema>;
 export type JobInputKind = JobInputs['kind'];
+export const JOB_INPUT_KINDS = ['depth', 'time', 'temperature', 'cycle'] as const satisfies readonly JobInputKind[];
+// Compile-time: the list names every kind of the union.
+const everyKindListed: Exclude<JobInputKind, (typeof JOB_INPUT_KINDS)[number]> extends never ? true : false = true;
+void everyKindListed;
 
 /** A closed-form input without its `kind`: exactly the request the physics function takes. */
 export function physicsRequestOf(inputs: Exclude<JobInputs, { kind: 'cycle' }>): Record<string, unknown> {

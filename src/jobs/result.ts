@@ -76,11 +76,21 @@ export function problemMessageKey(issue: FieldIssue): { key: string; params: Rec
 /** A translate function such as i18next's `t`. */
 export type Translate = (key: string, params?: Record<string, string | number>) => string;
 
-/** The full sentence for an error, followed by its first problem when it has one. */
+/** Fields whose format deserves an example (a key under `jobs.hints.`). */
+export const HINTED_FIELDS = ['operator', 'createdAt', 'updatedAt', 'shiftDate', 'measuredAt', 'id'] as const;
+
+/** The translation key of the format hint for the field an issue points at, if there is one. */
+export function hintMessageKey(issue: FieldIssue): string | undefined {
+  const field = /(?:^|\.)([A-Za-z]+)$/u.exec(issue.path)?.[1];
+  return field && (HINTED_FIELDS as readonly string[]).includes(field) ? `jobs.hints.${field}` : undefined;
+}
+
+/** The full sentence for an error, then its first problem and a format example when there is one. */
 export function describeJobsError(t: Translate, error: JobsError): string {
   const main = jobsErrorMessageKey(error);
   const first = error.issues?.[0];
   if (!first) return t(main.key, main.params);
   const detail = problemMessageKey(first);
-  return `${t(main.key, main.params)} ${t(detail.key, detail.params)}`;
+  const hint = hintMessageKey(first);
+  return [t(main.key, main.params), t(detail.key, detail.params), ...(hint ? [t(hint)] : [])].join(' ');
 }

@@ -33,18 +33,27 @@ export const HARDNESS_LIMITS = { HRC: { min: 0, max: 80 }, HV: { min: 1, max: 20
 
 export const TEXT_LIMITS = { short: 40, notes: 4000 } as const;
 
+/**
+ * Whether `text` parses to an instant that Date.toISOString writes as `expected` (so 30 February
+ * fails). Total: valibot runs every check of a pipe even after an earlier one failed.
+ */
+function sameInstantText(text: string, expected: string): boolean {
+  const ms = Date.parse(text);
+  return !Number.isNaN(ms) && new Date(ms).toISOString() === expected;
+}
+
 /** A UTC timestamp exactly as Date.toISOString writes it, so text order is time order. */
 export const TimestampSchema = v.pipe(
   v.string(),
   v.regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/u),
-  v.check((s) => !Number.isNaN(Date.parse(s)) && new Date(s).toISOString() === s),
+  v.check((s) => sameInstantText(s, s)),
 );
 
 /** A calendar date "YYYY-MM-DD" that exists. */
 export const CalendarDateSchema = v.pipe(
   v.string(),
   v.isoDate(),
-  v.check((s) => new Date(`${s}T00:00:00.000Z`).toISOString().startsWith(s)),
+  v.check((s) => sameInstantText(`${s}T00:00:00.000Z`, `${s}T00:00:00.000Z`)),
 );
 
 /** Operator initials: 1–4 letters of any alphabet (Ñ, Ö welcome), nothing else. */

@@ -21,3 +21,13 @@ export function storageFailure<T = never>(error: unknown): JobsResult<T> {
   if (name === 'InvalidStateError') return failWith('storage.closed');
   return failWith('storage.failed', { name });
 }
+
+/**
+ * When a transaction aborts (a full disk at commit, say), its pending requests fail with a bare
+ * AbortError; the real cause is the transaction's own error. Prefer whichever says "quota".
+ */
+export function rootCause(requestError: unknown, transactionError: unknown): unknown {
+  if (isQuotaError(requestError)) return requestError;
+  if (isQuotaError(transactionError)) return transactionError;
+  return errorName(requestError) === 'AbortError' && transactionError !== undefined ? transactionError : requestError;
+}

@@ -13,7 +13,7 @@ import { compareNewestFirst, matchesFilter, planQuery, searchWords, type JobFilt
 import { failWith, succeed, type FieldIssue, type JobsResult } from './result';
 import { JobChangesSchema, JobDraftSchema, JobSchema, type Job } from './schema';
 import { DEFAULT_SHIFT_CONFIG, shiftOf, type ShiftConfig } from './shift';
-import { storageFailure } from './storageErrors';
+import { rootCause, storageFailure } from './storageErrors';
 
 export const DEFAULT_DB_NAME = 'casefront-job-log';
 
@@ -99,6 +99,22 @@ function abortQuietly(tx: IDBTransaction | { abort(): void }): void {
   }
 }
 
+/**
+ * Issues one request per item and waits for all. If issuing throws part-way (a full disk can
+ * make put() throw), the requests already issued still settle; they are marked handled so the
+ * transaction's abort does not surface as stray rejections.
+ */
+async function allRequests<T>(items: readonly T[], issue: (item: T) => Promise<unknown>): Promise<void> {
+  const pending: Promise<unknown>[] = [];
+  try {
+    for (const item of items) pending.push(issue(item));
+  } catch (error) {
+    for (const request of pending) request.catch(() => undefined);
+    throw error;
+  }
+  await Promise.all(pending);
+}
+
 export class JobStore {
   #closed = false;
 
@@ -131,8 +147,7 @@ export class JobStore {
       outcome = await work(tx.store);
     } catch (error) {
       abortQuietly(tx);
-      await finished;
-      return storageFailure(error);
+      return storageFailure(rootCause(error, await finished));
     }
     if (!outcome.ok) {
       abortQuietly(tx);
@@ -183,7 +198,7 @@ export class JobStore {
       jobs.push(parsed.output);
     }
     return this.write(async (store) => {
-      await Promise.all(jobs.map((job) => store.put(job)));
+      await allRequests(jobs, (job) => store.put(job));
       return succeed(jobs.length);
     });
   }
@@ -258,15 +273,14 @@ export class JobStore {
     return this.write(async (store) => {
       const report = emptyReport();
       const locals = await Promise.all(candidates.map((job) => store.get(job.id) as Promise<unknown>));
-      const writes: Promise<unknown>[] = [];
-      candidates.forEach((job, i) => {
+      const toWrite = candidates.filter((job, i) => {
         const raw = locals[i];
         const local = raw === undefined ? undefined : validated(raw);
         const decision = decideMerge(local === undefined ? undefined : local.ok ? local.job : 'corrupt', job);
         countDecision(report, decision);
-        if (decision === 'add' || decision === 'update') writes.push(store.put(job));
+        return decision === 'add' || decision === 'update';
       });
-      await Promise.all(writes);
+      await allRequests(toWrite, (job) => store.put(job));
       return succeed(report);
     });
   }

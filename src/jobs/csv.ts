@@ -37,6 +37,20 @@ export function guardText(text: string): string {
 const closedForm = (job: Job) => (job.inputs && job.inputs.kind !== 'cycle' ? job.inputs : undefined);
 const recipe = (job: Job) => (job.inputs?.kind === 'cycle' ? job.inputs.recipe : undefined);
 const element = (name: 'Si' | 'Mn' | 'Cr' | 'Ni' | 'Mo') => (job: Job) => job.steel.composition?.[name];
+const targetEcdMm = (job: Job) => {
+  const request = closedForm(job);
+  return request && 'targetDepthMm' in request ? request.targetDepthMm : undefined;
+};
+/** The prediction's temperature (the answer of a temperature request), else the one asked for. */
+const temperatureC = (job: Job) => {
+  const request = closedForm(job);
+  return job.prediction?.temperatureC ?? (request && 'temperatureC' in request ? request.temperatureC : undefined);
+};
+/** The prediction's time (the answer of a time request), else the one asked for. */
+const timeH = (job: Job) => {
+  const request = closedForm(job);
+  return job.prediction?.timeH ?? (request && 'timeH' in request ? request.timeH : undefined);
+};
 
 export const CSV_COLUMNS: readonly CsvColumn[] = [
   { header: 'id', value: (j) => j.id },
@@ -60,10 +74,10 @@ export const CSV_COLUMNS: readonly CsvColumn[] = [
   { header: 'input_kind', value: (j) => j.inputs?.kind },
   { header: 'carbon_potential_pct', value: (j) => closedForm(j)?.carbonPotentialPct },
   { header: 'surface_carbon_set_pct', value: (j) => closedForm(j)?.surfaceCarbonPct },
-  { header: 'target_ecd_mm', value: (j) => { const c = closedForm(j); return c && 'targetDepthMm' in c ? c.targetDepthMm : undefined; } },
+  { header: 'target_ecd_mm', value: targetEcdMm },
   { header: 'cycle_steps', value: (j) => recipe(j)?.steps.length },
-  { header: 'temperature_c', value: (j) => { const c = closedForm(j); return j.prediction?.temperatureC ?? (c && 'temperatureC' in c ? c.temperatureC : undefined); } },
-  { header: 'time_h', value: (j) => { const c = closedForm(j); return j.prediction?.timeH ?? (c && 'timeH' in c ? c.timeH : undefined); } },
+  { header: 'temperature_c', value: temperatureC },
+  { header: 'time_h', value: timeH },
   { header: 'predicted_ecd_mm', value: (j) => j.prediction?.effectiveCaseDepthMm },
   { header: 'predicted_total_case_mm', value: (j) => j.prediction?.totalCaseDepthMm },
   { header: 'predicted_surface_carbon_pct', value: (j) => j.prediction?.surfaceCarbonPct },

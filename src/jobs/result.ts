@@ -10,6 +10,7 @@ export const JOBS_ERROR_CODES = [
   'storage.unavailable',
   'storage.failed',
   'storage.closed',
+  'storage.newerVersion',
   'record.notFound',
   'record.invalid',
   'import.notJson',

@@ -46,14 +46,16 @@ type WriteStore = IDBPObjectStore<unknown, ['jobs'], 'jobs', 'readwrite'>;
 
 export async function openJobStore(options: OpenOptions = {}): Promise<JobsResult<JobStore>> {
   if (typeof indexedDB === 'undefined') return failWith('storage.unavailable');
+  let store: JobStore | undefined;
+  let upgradeError: unknown;
   try {
-    let store: JobStore | undefined;
     const db = await openDB(options.name ?? DEFAULT_DB_NAME, LATEST_DB_VERSION, {
       upgrade(upgradeDb, oldVersion, newVersion, tx) {
         // A failed upgrade is reported by openDB rejecting; this promise would only repeat it.
         tx.done.catch(() => undefined);
         // An upgrade that fails part-way is rolled back whole.
-        runMigrations(upgradeDb, tx, oldVersion, newVersion ?? LATEST_DB_VERSION).catch(() => {
+        runMigrations(upgradeDb, tx, oldVersion, newVersion ?? LATEST_DB_VERSION).catch((error: unknown) => {
+          upgradeError = error;
           try {
             tx.abort();
           } catch {
@@ -62,15 +64,18 @@ export async function openJobStore(options: OpenOptions = {}): Promise<JobsResul
         });
       },
       blocked: () => options.onBlocked?.(),
-      blocking: () => {
-        store?.close();
+      blocking: (_current, _blocked, event) => {
+        if (store) store.close();
+        else (event.target as IDBDatabase).close();
         options.onVersionChange?.();
       },
     });
     store = new JobStore(db);
     return succeed(store);
   } catch (error) {
-    return storageFailure(error);
+    // The device has a log from a newer release than this one (an old tab or cached app).
+    if (error instanceof Error && error.name === 'VersionError') return failWith('storage.newerVersion');
+    return storageFailure(rootCause(error, upgradeError));
   }
 }
 

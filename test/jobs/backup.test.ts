@@ -4,7 +4,7 @@ import { backupToJson, createBackup, parseBackup } from '../../src/jobs/backup';
 import { demoJobs } from '../../src/jobs/demo';
 import { describeJobsError } from '../../src/jobs/result';
 import type { Job } from '../../src/jobs/schema';
-import { exportBackup, importBackup } from '../../src/jobs/transfer';
+import { exportBackup, exportFileName, importBackup } from '../../src/jobs/transfer';
 import { freshStore, pinionDraft, snapshot, unwrap } from './helpers';
 
 const END = new Date('2025-06-30T12:00:00.000Z');
@@ -27,6 +27,13 @@ describe('JSON backup: export, wipe, import', () => {
     expect(unwrap(await importBackup(store, file.text))).toEqual({ added: 0, updated: 0, unchanged: 121, skippedOlder: 0 });
     expect(await snapshot(store)).toEqual(before);
     store.close();
+  });
+});
+
+describe('file names', () => {
+  it('carry the local date', () => {
+    expect(exportFileName('json', new Date(2025, 2, 5, 23, 59))).toBe('casefront-job-log-2025-03-05.json');
+    expect(exportFileName('csv', new Date(2025, 11, 31, 0, 0))).toBe('casefront-job-log-2025-12-31.csv');
   });
 });
 

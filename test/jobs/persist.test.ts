@@ -41,3 +41,17 @@ describe('a newer version opened in another tab', () => {
     newer.close();
   });
 });
+
+describe('a log saved by a newer release', () => {
+  it('is not opened by this one: storage.newerVersion, and the newer data is untouched', async () => {
+    const name = uniqueDbName();
+    const newer = await openDB(name, 7, { upgrade: (db) => void db.createObjectStore('jobs', { keyPath: 'id' }) });
+    await newer.put('jobs', { id: 'from-the-future', shape: 'unknown to us' });
+    newer.close();
+    expect(await openJobStore({ name })).toEqual({ ok: false, error: { code: 'storage.newerVersion' } });
+    const check = await openDB(name);
+    expect(check.version).toBe(7);
+    expect(await check.get('jobs', 'from-the-future')).toEqual({ id: 'from-the-future', shape: 'unknown to us' });
+    check.close();
+  });
+});

@@ -16,12 +16,15 @@ import { fail, ok, type Result, type Warning } from './result';
 import { brentRoot } from './rootFinding';
 import { harrisTotalCaseDepthMm } from './rulesOfThumb';
 import { alloyFactor, DEFAULT_ECD_THRESHOLD_PCT, totalCaseThresholdPct, type Composition } from './steel';
+import { depthBand, DEFAULT_TEMPERATURE_TOLERANCE_C, type DepthBand } from './uncertainty';
 import { celsiusToKelvin, SECONDS_PER_HOUR } from './units';
 import {
   asFields,
   checkCarbonPct,
   checkDepthMm,
+  checkDiffusivityFactor,
   checkTemperatureC,
+  checkTemperatureTolerance,
   checkTimeH,
   readChecked,
   readComposition,
@@ -47,6 +50,10 @@ export interface CaseSpec {
   composition?: Composition;
   /** Gunnarson alloy factor applied between potential and surface carbon (1 for plain carbon). */
   alloyFactor: number;
+  /** Furnace calibration factor on D (1 when uncalibrated). */
+  diffusivityFactor: number;
+  /** Furnace temperature tolerance for the uncertainty band, ±°C. */
+  temperatureToleranceC: number;
 }
 
 export interface DepthFigures {
@@ -65,6 +72,7 @@ export interface CaseDepthResult extends DepthFigures {
   thresholdCarbonPct: number;
   totalCaseThresholdPct: number;
   alloyFactor: number;
+  diffusivityFactor: number;
   model: DiffusivityModelId;
   /** Harris (1943) total case depth: surface at saturation, time at temperature. */
   harrisDepthMm: number;
@@ -72,6 +80,8 @@ export interface CaseDepthResult extends DepthFigures {
   modelRangeMm: { min: number; max: number; byModel: Record<DiffusivityModelId, number> };
   /** Effective case depth with the temperature 10 °C lower and higher. */
   temperatureSensitivity: { stepC: number; minusMm: number; plusMm: number };
+  /** Band on the effective case depth from model spread and furnace temperature tolerance. */
+  uncertaintyMm: DepthBand;
   /** Indicative maximum as-quenched surface hardness, HRC. */
   surfaceHardnessHrc: number;
   warnings: Warning[];
@@ -103,12 +113,15 @@ export function readCaseSpec(fields: Fields): Result<CaseSpec> {
   const potential = readOptionalNumber(fields, 'carbonPotentialPct');
   if (!potential.ok) return potential;
   if (given.value === undefined && potential.value === undefined) return fail('field.missing', 'surfaceCarbonPct');
+  if (potential.value !== undefined) {
+    const checked = checkCarbonPct(potential.value, 'carbonPotentialPct');
+    if (!checked.ok) return checked;
+  }
   const surfaceField = given.value === undefined ? 'carbonPotentialPct' : 'surfaceCarbonPct';
-  const potentialPct = potential.value ?? given.value! / factor;
-  const checkedPotential = checkCarbonPct(potentialPct, 'carbonPotentialPct');
-  if (!checkedPotential.ok) return checkedPotential;
-  const surface = checkCarbonPct(given.value ?? potentialPct * factor, surfaceField);
+  const surface = checkCarbonPct(given.value ?? potential.value! * factor, surfaceField);
   if (!surface.ok) return surface;
+  // Without a stated potential, the one implied by the surface carbon feeds the soot caution.
+  const potentialPct = potential.value ?? surface.value / factor;
   if (!(surface.value > core.value)) {
     return fail('carbon.surfaceNotAboveCore', surfaceField, { surfacePct: surface.value, corePct: core.value });
   }
@@ -122,7 +135,17 @@ export function readCaseSpec(fields: Fields): Result<CaseSpec> {
       surfacePct: surface.value,
     });
   }
+  const factorField = readOptionalNumber(fields, 'diffusivityFactor');
+  if (!factorField.ok) return factorField;
+  const diffusivityFactor = checkDiffusivityFactor(factorField.value ?? 1, 'diffusivityFactor');
+  if (!diffusivityFactor.ok) return diffusivityFactor;
+  const tolerance = readOptionalNumber(fields, 'temperatureToleranceC');
+  if (!tolerance.ok) return tolerance;
+  const toleranceC = checkTemperatureTolerance(tolerance.value ?? DEFAULT_TEMPERATURE_TOLERANCE_C, 'temperatureToleranceC');
+  if (!toleranceC.ok) return toleranceC;
   return ok({
+    diffusivityFactor: diffusivityFactor.value,
+    temperatureToleranceC: toleranceC.value,
     surfaceCarbonPct: surface.value,
     carbonPotentialPct: potentialPct,
     coreCarbonPct: core.value,
@@ -133,9 +156,15 @@ export function readCaseSpec(fields: Fields): Result<CaseSpec> {
   });
 }
 
+/** Effective constant D for a spec (model at mean carbon, times the furnace factor), m²/s. */
+function specDiffusivity(spec: CaseSpec, temperatureC: number, model: DiffusivityModelId): number {
+  const D = effectiveDiffusivity(model, celsiusToKelvin(temperatureC), spec.surfaceCarbonPct, spec.coreCarbonPct);
+  return spec.diffusivityFactor * D;
+}
+
 /** Effective and total case depth, √(Dt) and D for one model, temperature and time. */
 export function depthFigures(spec: CaseSpec, temperatureC: number, timeH: number, model = spec.model): DepthFigures {
-  const D = effectiveDiffusivity(model, celsiusToKelvin(temperatureC), spec.surfaceCarbonPct, spec.coreCarbonPct);
+  const D = specDiffusivity(spec, temperatureC, model);
   const timeS = timeH * SECONDS_PER_HOUR;
   const totalThreshold = totalCaseThresholdPct(spec.coreCarbonPct);
   const depthMm = (thresholdPct: number) =>
@@ -168,6 +197,7 @@ export function evaluateCaseDepth(spec: CaseSpec, temperatureC: number, timeH: n
     thresholdCarbonPct: spec.thresholdCarbonPct,
     totalCaseThresholdPct: totalCaseThresholdPct(spec.coreCarbonPct),
     alloyFactor: spec.alloyFactor,
+    diffusivityFactor: spec.diffusivityFactor,
     model: spec.model,
     harrisDepthMm: harrisTotalCaseDepthMm(timeH, temperatureC),
     modelRangeMm: { min: Math.min(...depths), max: Math.max(...depths), byModel },
@@ -176,6 +206,11 @@ export function evaluateCaseDepth(spec: CaseSpec, temperatureC: number, timeH: n
       minusMm: ecdAt(temperatureC - SENSITIVITY_STEP_C),
       plusMm: ecdAt(temperatureC + SENSITIVITY_STEP_C),
     },
+    uncertaintyMm: depthBand(
+      (c) => depthFigures(spec, temperatureC + c.tempOffsetC, timeH, c.model).effectiveCaseDepthMm,
+      spec.model,
+      { temperatureToleranceC: spec.temperatureToleranceC },
+    ),
     surfaceHardnessHrc: asQuenchedHardnessHrc(spec.surfaceCarbonPct),
     warnings: [
       ...saturationWarnings(temperatureC, spec.surfaceCarbonPct, spec.carbonPotentialPct),
@@ -201,7 +236,7 @@ export function caseDepth(request: unknown): Result<CaseDepthResult> {
 
 /** Time at temperature for the effective case depth to reach `depthMm`, h. */
 export function timeForDepthH(spec: CaseSpec, temperatureC: number, depthMm: number, model = spec.model): number {
-  const D = effectiveDiffusivity(model, celsiusToKelvin(temperatureC), spec.surfaceCarbonPct, spec.coreCarbonPct);
+  const D = specDiffusivity(spec, temperatureC, model);
   const timeS = constantSurfaceTime(depthMm * 1e-3, D, spec.surfaceCarbonPct, spec.coreCarbonPct, spec.thresholdCarbonPct);
   return timeS / SECONDS_PER_HOUR;
 }

@@ -84,7 +84,7 @@ export function equivalentTimeH(
   const diffusivity = DIFFUSIVITY_MODELS[model].diffusivity;
   const reference = diffusivity(celsiusToKelvin(setTemperatureC), carbonPct);
   const ratio = (tempC: number) =>
-    tempC <= EUTECTOID_TEMP_C ? 0 : diffusivity(celsiusToKelvin(tempC), carbonPct) / reference;
+    tempC < EUTECTOID_TEMP_C ? 0 : diffusivity(celsiusToKelvin(tempC), carbonPct) / reference;
   let total = 0;
   for (let i = 1; i < history.length; i++) {
     const a = history[i - 1]!;

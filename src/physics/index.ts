@@ -11,3 +11,5 @@ export * from './caseDepth';
 export * from './equivalentTime';
 export * from './conversions';
 export * from './grades';
+export * from './uncertainty';
+export * from './calibration';

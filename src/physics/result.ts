@@ -27,6 +27,8 @@ export const ERROR_CODES = [
   'composition.outOfRange',
   'composition.unknownElement',
   'beta.notPositive',
+  'diffusivityFactor.outOfRange',
+  'temperatureTolerance.outOfRange',
   'solve.temperatureBelowRange',
   'solve.temperatureAboveRange',
   'solve.noConvergence',
@@ -36,6 +38,9 @@ export const ERROR_CODES = [
   'history.tooShort',
   'history.notIncreasing',
   'history.temperatureTooHigh',
+  'calibration.tooFewJobs',
+  'calibration.noSensitivity',
+  'calibration.factorOutOfRange',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];

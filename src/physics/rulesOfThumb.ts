@@ -1,5 +1,5 @@
 /**
- * Harris (1943), Metal Progress 44: total case depth for a surface held at
+ * Harris (1943), Metal Progress: total case depth for a surface held at
  * saturation, counting time at temperature only.
  * Published form: d (in) = 31.6·√t / 10^(6700/T_R), t in hours, T in °R.
  */

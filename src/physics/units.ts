@@ -89,6 +89,7 @@ export function convert(value: number, from: string, to: string): Result<number>
   if (qFrom === 'temperature' && toKelvin[from as TemperatureUnit](value) < 0) {
     return fail('temperature.belowAbsoluteZero', 'value', { value, unit: from });
   }
+  if (from === to) return ok(value);
   const out =
     qFrom === 'temperature'
       ? convertTemperature(value, from as TemperatureUnit, to as TemperatureUnit)

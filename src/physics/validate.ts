@@ -23,9 +23,11 @@ export function asFields(request: unknown): Result<Fields> {
 }
 
 /** A number given as a JSON number or as text (`"0,8"` accepted). */
+const isBlank = (raw: unknown) => raw === undefined || raw === null || (typeof raw === 'string' && raw.trim() === '');
+
 export function readNumber(fields: Fields, field: string): Result<number> {
   const raw = fields[field];
-  if (raw === undefined || raw === null || raw === '') return fail('field.missing', field);
+  if (isBlank(raw)) return fail('field.missing', field);
   if (typeof raw === 'number') return Number.isFinite(raw) ? ok(raw) : fail('field.notNumber', field);
   if (typeof raw === 'string') {
     const parsed = parseNumber(raw);
@@ -35,8 +37,7 @@ export function readNumber(fields: Fields, field: string): Result<number> {
 }
 
 export function readOptionalNumber(fields: Fields, field: string): Result<number | undefined> {
-  const raw = fields[field];
-  return raw === undefined || raw === null || raw === '' ? ok(undefined) : readNumber(fields, field);
+  return isBlank(fields[field]) ? ok(undefined) : readNumber(fields, field);
 }
 
 function inRange(value: number, field: string, min: number, max: number, code: ErrorCode): Result<number> {
@@ -60,6 +61,21 @@ export function checkCarbonPct(value: number, field: string): Result<number> {
 export function checkDepthMm(value: number, field: string): Result<number> {
   if (!(value > 0)) return fail('depth.notPositive', field, { value });
   return value <= MAX_DEPTH_MM ? ok(value) : fail('depth.tooDeep', field, { value, max: MAX_DEPTH_MM });
+}
+
+/** Furnace calibration factor on D; beyond these a fit means a wrong record or model, not a furnace. */
+export const DIFFUSIVITY_FACTOR_LIMITS = { min: 0.1, max: 10 } as const;
+
+export function checkDiffusivityFactor(value: number, field: string): Result<number> {
+  const { min, max } = DIFFUSIVITY_FACTOR_LIMITS;
+  return inRange(value, field, min, max, 'diffusivityFactor.outOfRange');
+}
+
+/** Widest furnace temperature tolerance accepted for the uncertainty band, ±°C. */
+export const MAX_TEMPERATURE_TOLERANCE_C = 50;
+
+export function checkTemperatureTolerance(value: number, field: string): Result<number> {
+  return inRange(value, field, 0, MAX_TEMPERATURE_TOLERANCE_C, 'temperatureTolerance.outOfRange');
 }
 
 export function checkBeta(value: number, field: string): Result<number> {

@@ -127,6 +127,7 @@ export function demoJobs(options: DemoOptions): Job[] {
         model: result.model,
         timeH: result.timeH,
         temperatureC: result.temperatureC,
+        ecdBandMm: { minMm: result.uncertaintyMm.minMm, maxMm: result.uncertaintyMm.maxMm },
         appVersion,
       },
       status,

@@ -7,6 +7,7 @@ import * as v from 'valibot';
 import { MODEL_IDS } from '../physics/diffusivity';
 import type { Recipe } from '../physics/cycle/recipe';
 import { ALLOY_ELEMENT_MAX_PCT, MAX_CARBON_PCT } from '../physics/steel';
+import { DIFFUSIVITY_FACTOR_LIMITS, MAX_TEMPERATURE_TOLERANCE_C } from '../physics/validate';
 
 export const ModelIdSchema = v.picklist(MODEL_IDS);
 
@@ -34,6 +35,10 @@ const caseSpecEntries = {
   thresholdCarbonPct: v.optional(CarbonPctSchema),
   model: v.optional(ModelIdSchema),
   composition: v.optional(CompositionSchema),
+  /** Furnace calibration factor on D (1 when uncalibrated). */
+  diffusivityFactor: v.optional(numberBetween(DIFFUSIVITY_FACTOR_LIMITS.min, DIFFUSIVITY_FACTOR_LIMITS.max)),
+  /** Furnace temperature tolerance for the uncertainty band, ±°C. */
+  temperatureToleranceC: v.optional(numberBetween(0, MAX_TEMPERATURE_TOLERANCE_C)),
 };
 
 export const DepthInputSchema = v.strictObject({

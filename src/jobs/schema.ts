@@ -79,6 +79,13 @@ export const PredictionSchema = v.strictObject({
   timeH: v.optional(positiveNumber()),
   /** Temperature the prediction holds for, °C (for a temperature request: the answer). */
   temperatureC: v.optional(v.pipe(v.number(), v.finite())),
+  /** Uncertainty band of the effective case depth (models × temperature tolerance × β), mm. */
+  ecdBandMm: v.optional(
+    v.pipe(
+      v.strictObject({ minMm: numberBetween(0, MAX_DEPTH_MM), maxMm: numberBetween(0, MAX_DEPTH_MM) }),
+      v.check((band) => band.minMm <= band.maxMm, 'the band minimum exceeds its maximum'),
+    ),
+  ),
   /** Version of the app that computed it, so a later model change can be traced. */
   appVersion: requiredText(TEXT_LIMITS.short),
 });

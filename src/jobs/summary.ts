@@ -14,6 +14,8 @@ export interface EcdComparison {
   differenceMm: number;
   /** The difference as a share of the measured depth, %. */
   differencePct: number;
+  /** Whether the lab depth lies inside the predicted uncertainty band (absent without a band). */
+  withinBand?: boolean;
 }
 
 export interface ShiftSummary {
@@ -34,6 +36,7 @@ export function ecdComparison(job: Job): EcdComparison | undefined {
   const measuredMm = job.lab?.ecdMm;
   if (predictedMm === undefined || measuredMm === undefined || !(measuredMm > 0)) return undefined;
   const differenceMm = predictedMm - measuredMm;
+  const band = job.prediction?.ecdBandMm;
   return {
     jobId: job.id,
     furnace: job.furnace,
@@ -42,6 +45,7 @@ export function ecdComparison(job: Job): EcdComparison | undefined {
     measuredMm,
     differenceMm,
     differencePct: (differenceMm / measuredMm) * 100,
+    ...(band ? { withinBand: measuredMm >= band.minMm && measuredMm <= band.maxMm } : {}),
   };
 }
 

@@ -28,6 +28,10 @@ describe('job record schema (version 2)', () => {
     expect(ok(JobInputsSchema, { kind: 'temperature', timeH: 6, targetDepthMm: 0.9, ...spec })).toBe(true);
     expect(ok(JobInputsSchema, { kind: 'depth', temperatureC: 925, targetDepthMm: 0.9, ...spec })).toBe(false);
     expect(ok(JobInputsSchema, { kind: 'guess', ...spec })).toBe(false);
+    // Furnace calibration and temperature tolerance, in the physics layer's accepted ranges.
+    expect(ok(JobInputsSchema, { kind: 'depth', temperatureC: 925, timeH: 6, diffusivityFactor: 0.93, temperatureToleranceC: 8, ...spec })).toBe(true);
+    expect(ok(JobInputsSchema, { kind: 'depth', temperatureC: 925, timeH: 6, diffusivityFactor: 0, ...spec })).toBe(false);
+    expect(ok(JobInputsSchema, { kind: 'depth', temperatureC: 925, timeH: 6, temperatureToleranceC: 500, ...spec })).toBe(false);
     const recipe = {
       name: 'KR-4410 boost/diffuse',
       steel: { grade: '20MnCr5', coreCarbonPct: 0.2 },
@@ -51,6 +55,12 @@ describe('job record schema (version 2)', () => {
     expect(ok(LabResultSchema, { measuredAt: '2025-03-06' })).toBe(true);
     expect(ok(LabResultSchema, { measuredAt: '2025-03-06T09:30:00.000Z' })).toBe(true);
     expect(ok(LabResultSchema, { measuredAt: 'Tuesday' })).toBe(false);
+  });
+
+  it('a prediction band must run from its minimum up to its maximum', () => {
+    const withBand = (minMm: number, maxMm: number) => ({ ...job, prediction: { ...job.prediction!, ecdBandMm: { minMm, maxMm } } });
+    expect(ok(JobSchema, withBand(0.78, 0.93))).toBe(true);
+    expect(ok(JobSchema, withBand(0.93, 0.78))).toBe(false);
   });
 
   it('rejects NaN and Infinity anywhere a number is stored', () => {

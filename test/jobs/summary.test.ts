@@ -5,7 +5,8 @@ import { ecdComparison, summarizeShift } from '../../src/jobs/summary';
 
 const base = demoJobs({ count: 1, end: new Date('2025-05-01T12:00:00Z'), seed: 11 })[0]!;
 const make = (overrides: Partial<Job>): Job => ({ ...base, id: crypto.randomUUID(), lab: undefined, ...overrides });
-const predicted = (mm: number) => ({ ...base.prediction!, effectiveCaseDepthMm: mm });
+const { ecdBandMm: _band, ...bandless } = base.prediction!;
+const predicted = (mm: number) => ({ ...bandless, effectiveCaseDepthMm: mm });
 
 describe('shift summary', () => {
   const jobs = [
@@ -34,6 +35,16 @@ describe('shift summary', () => {
     expect(b!.differencePct).toBeCloseTo(-10, 10); // −0.15 / 1.50
     expect(summary.meanDifferenceMm).toBeCloseTo(-0.05, 12);
     expect(summary.meanAbsDifferencePct).toBeCloseTo(8.125, 10);
+  });
+
+  it('says whether the lab depth falls inside the predicted uncertainty band', () => {
+    const banded = (measuredMm: number) =>
+      ecdComparison(make({ prediction: { ...predicted(0.85), ecdBandMm: { minMm: 0.78, maxMm: 0.93 } }, lab: { ecdMm: measuredMm } }));
+    expect(banded(0.78)?.withinBand).toBe(true);
+    expect(banded(0.93)?.withinBand).toBe(true);
+    expect(banded(0.77)?.withinBand).toBe(false);
+    expect(banded(0.95)?.withinBand).toBe(false);
+    expect(ecdComparison(make({ prediction: predicted(0.85), lab: { ecdMm: 0.8 } }))).not.toHaveProperty('withinBand');
   });
 
   it('no pairs without both depths; an empty shift gives zeros and no means', () => {

@@ -6,6 +6,7 @@
  */
 import { timeForCaseDepth, type TimeResult } from '../physics/caseDepth';
 import { findGrade } from '../physics/grades';
+import { mulberry32 } from '../physics/random';
 import type { Job, JobStatus } from './schema';
 import { DEFAULT_SHIFT_CONFIG, shiftOf, type ShiftConfig } from './shift';
 
@@ -50,18 +51,6 @@ const NOTES = [
 /** Invented furnace offsets of the lab depth against the prediction. */
 const FURNACE_BIAS: Record<string, number> = { F1: 0.02, F2: -0.04, F3: 0.0 };
 
-/** mulberry32: a small, fast, seedable generator (public-domain algorithm). */
-function randomSource(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 function uuidFrom(random: () => number): string {
   const hex = Array.from({ length: 32 }, () => Math.floor(random() * 16).toString(16));
   hex[12] = '4';
@@ -73,7 +62,7 @@ function uuidFrom(random: () => number): string {
 const round = (x: number, digits: number) => Math.round(x * 10 ** digits) / 10 ** digits;
 
 export function demoJobs(options: DemoOptions): Job[] {
-  const random = randomSource(options.seed ?? 2231);
+  const random = mulberry32(options.seed ?? 2231);
   const pick = <T>(items: readonly T[]): T => items[Math.floor(random() * items.length)]!;
   const endMs = (options.end ?? new Date()).getTime();
   const spanMs = 365 * 24 * 3600 * 1000;

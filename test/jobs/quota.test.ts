@@ -53,42 +53,42 @@ async function storeWithThreeJobs(): Promise<{ store: JobStore; jobs: Job[] }> {
 
 const newJob = (base: Job, i: number): Job => ({ ...base, id: crypto.randomUUID(), workOrder: `WO-NEW-${i}` });
 
+const FULL = { ok: false, error: { code: 'storage.full' } };
+
+/** Runs `failingWrites` on a log of three jobs with the fault armed, then checks nothing changed. */
+async function expectUnchangedAfter(failingWrites: (store: JobStore, jobs: Job[]) => Promise<void>): Promise<void> {
+  const { store, jobs } = await storeWithThreeJobs();
+  const before = await snapshot(store);
+  await failingWrites(store, jobs);
+  vi.restoreAllMocks();
+  expect(await snapshot(store)).toEqual(before);
+  store.close();
+}
+
 describe.each(FAULTS)('storage full (%s): nothing half-written', (fault) => {
-  it('putMany of five, failing at the third: storage.full and every record as before', async () => {
-    const { store, jobs } = await storeWithThreeJobs();
-    const before = await snapshot(store);
-    const edited = { ...jobs[0]!, notes: 'changed in the failed batch' };
-    failNth('put', 3, fault);
-    const result = await store.putMany([edited, newJob(jobs[0]!, 1), newJob(jobs[0]!, 2), newJob(jobs[0]!, 3), newJob(jobs[0]!, 4)]);
-    expect(result).toEqual({ ok: false, error: { code: 'storage.full' } });
-    vi.restoreAllMocks();
-    expect(await snapshot(store)).toEqual(before);
-    store.close();
-  });
+  it('putMany of five, failing at the third: storage.full and every record as before', () =>
+    expectUnchangedAfter(async (store, jobs) => {
+      const edited = { ...jobs[0]!, notes: 'changed in the failed batch' };
+      failNth('put', 3, fault);
+      const batch = [edited, newJob(jobs[0]!, 1), newJob(jobs[0]!, 2), newJob(jobs[0]!, 3), newJob(jobs[0]!, 4)];
+      expect(await store.putMany(batch)).toEqual(FULL);
+    }));
 
-  it('an import failing part-way: storage.full and the log unchanged', async () => {
-    const { store, jobs } = await storeWithThreeJobs();
-    const before = await snapshot(store);
-    const newer = { ...jobs[1]!, status: 'done' as const, updatedAt: '2099-01-01T00:00:00.000Z' };
-    const file = backupToJson(createBackup([newer, newJob(jobs[1]!, 1), newJob(jobs[1]!, 2), newJob(jobs[1]!, 3)], 'test'));
-    failNth('put', 3, fault);
-    expect(await importBackup(store, file)).toEqual({ ok: false, error: { code: 'storage.full' } });
-    vi.restoreAllMocks();
-    expect(await snapshot(store)).toEqual(before);
-    store.close();
-  });
+  it('an import failing part-way: storage.full and the log unchanged', () =>
+    expectUnchangedAfter(async (store, jobs) => {
+      const newer = { ...jobs[1]!, status: 'done' as const, updatedAt: '2099-01-01T00:00:00.000Z' };
+      const file = backupToJson(createBackup([newer, newJob(jobs[1]!, 1), newJob(jobs[1]!, 2), newJob(jobs[1]!, 3)], 'test'));
+      failNth('put', 3, fault);
+      expect(await importBackup(store, file)).toEqual(FULL);
+    }));
 
-  it('add and update: storage.full and no change', async () => {
-    const { store, jobs } = await storeWithThreeJobs();
-    const before = await snapshot(store);
-    failNth('add', 1, fault);
-    expect(await store.add(pinionDraft())).toEqual({ ok: false, error: { code: 'storage.full' } });
-    failNth('put', 1, fault);
-    expect(await store.update(jobs[2]!.id, { status: 'inFurnace' })).toEqual({ ok: false, error: { code: 'storage.full' } });
-    vi.restoreAllMocks();
-    expect(await snapshot(store)).toEqual(before);
-    store.close();
-  });
+  it('add and update: storage.full and no change', () =>
+    expectUnchangedAfter(async (store, jobs) => {
+      failNth('add', 1, fault);
+      expect(await store.add(pinionDraft())).toEqual(FULL);
+      failNth('put', 1, fault);
+      expect(await store.update(jobs[2]!.id, { status: 'inFurnace' })).toEqual(FULL);
+    }));
 });
 
 describe('after a full-disk failure', () => {

@@ -3,18 +3,10 @@ import { describe, expect, it } from 'vitest';
 import { fitDiffusivityFactor, type CalibrationSample } from '../../src/physics/calibration';
 import { constantSurfaceDepth } from '../../src/physics/closedForm';
 import { agrenDiffusivity } from '../../src/physics/diffusivity';
+import { mulberry32 } from '../../src/physics/random';
 
-/** Deterministic uniform numbers in [0, 1) (mulberry32), so every synthetic log is reproducible. */
-function uniform(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Deterministic uniform numbers in [0, 1), so every synthetic log is reproducible. */
+const uniform = mulberry32;
 /** Standard normal deviates by Box–Muller. */
 const normal = (u: () => number) => () => Math.sqrt(-2 * Math.log(1 - u())) * Math.cos(2 * Math.PI * u());
 

@@ -1,0 +1,61 @@
+/**
+ * The full backup: our own plain JSON format,
+ * `{ format: "casefront-job-log", version, exportedAt, appVersion, jobs: [...] }`,
+ * where `version` is the job record version. Import checks the whole file first and
+ * changes nothing unless every record is valid.
+ */
+import * as v from 'valibot';
+import { issuesOf } from './issues';
+import { failWith, succeed, type JobsResult } from './result';
+import { JOB_RECORD_VERSION, JobSchema, TimestampSchema, type Job } from './schema';
+import { compareNewestFirst } from './query';
+
+export const BACKUP_FORMAT = 'casefront-job-log';
+
+export const BackupSchema = v.strictObject({
+  format: v.literal(BACKUP_FORMAT),
+  version: v.literal(JOB_RECORD_VERSION),
+  exportedAt: TimestampSchema,
+  appVersion: v.pipe(v.string(), v.minLength(1), v.maxLength(40)),
+  jobs: v.array(JobSchema),
+});
+
+export type Backup = v.InferOutput<typeof BackupSchema>;
+
+export function createBackup(jobs: readonly Job[], appVersion: string, now: Date = new Date()): Backup {
+  return {
+    format: BACKUP_FORMAT,
+    version: JOB_RECORD_VERSION,
+    exportedAt: now.toISOString(),
+    appVersion,
+    jobs: [...jobs].sort(compareNewestFirst).reverse(),
+  };
+}
+
+export function backupToJson(backup: Backup): string {
+  return `${JSON.stringify(backup, null, 1)}\n`;
+}
+
+const isObject = (value: unknown): value is Record<string, unknown> =>
+  typeof value === 'object' && value !== null && !Array.isArray(value);
+
+/** Reads and checks a backup file's text; nothing is stored here. */
+export function parseBackup(text: string): JobsResult<Backup> {
+  let data: unknown;
+  try {
+    data = JSON.parse(text.replace(/^\uFEFF/u, ''));
+  } catch {
+    return failWith('import.notJson');
+  }
+  if (!isObject(data) || data.format !== BACKUP_FORMAT) return failWith('import.wrongFormat');
+  if (data.version !== JOB_RECORD_VERSION) {
+    return failWith('import.unsupportedVersion', {
+      version: typeof data.version === 'number' ? data.version : String(data.version),
+      supported: JOB_RECORD_VERSION,
+    });
+  }
+  const parsed = v.safeParse(BackupSchema, data);
+  if (parsed.success) return succeed(parsed.output);
+  const issues = issuesOf(parsed.issues);
+  return failWith('import.invalid', { count: parsed.issues.length }, issues);
+}

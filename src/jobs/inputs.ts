@@ -1,0 +1,118 @@
+/**
+ * What a job was planned with: a closed-form calculator request (depth, time or
+ * temperature, the same fields the physics functions read) or a multi-step cycle Recipe.
+ * Numbers are stored as finite numbers; the physics layer checked their ranges when it ran.
+ */
+import * as v from 'valibot';
+import { MODEL_IDS } from '../physics/diffusivity';
+import type { Recipe } from '../physics/cycle/recipe';
+import { ALLOY_ELEMENT_MAX_PCT, MAX_CARBON_PCT } from '../physics/steel';
+import { DIFFUSIVITY_FACTOR_LIMITS, MAX_TEMPERATURE_TOLERANCE_C } from '../physics/validate';
+
+export const ModelIdSchema = v.picklist(MODEL_IDS);
+
+export const finiteNumber = () => v.pipe(v.number(), v.finite());
+export const numberBetween = (min: number, max: number) => v.pipe(v.number(), v.finite(), v.minValue(min), v.maxValue(max));
+export const positiveNumber = () => v.pipe(v.number(), v.finite(), v.gtValue(0));
+export const textUpTo = (max: number) => v.pipe(v.string(), v.maxLength(max));
+
+export const CarbonPctSchema = numberBetween(0, MAX_CARBON_PCT);
+
+const elementPct = () => numberBetween(0, ALLOY_ELEMENT_MAX_PCT);
+export const CompositionSchema = v.strictObject({
+  Si: elementPct(),
+  Mn: elementPct(),
+  Cr: elementPct(),
+  Ni: elementPct(),
+  Mo: elementPct(),
+});
+
+/** The fields every closed-form request shares (see physics readCaseSpec). */
+const caseSpecEntries = {
+  surfaceCarbonPct: v.optional(CarbonPctSchema),
+  carbonPotentialPct: v.optional(CarbonPctSchema),
+  coreCarbonPct: CarbonPctSchema,
+  thresholdCarbonPct: v.optional(CarbonPctSchema),
+  model: v.optional(ModelIdSchema),
+  composition: v.optional(CompositionSchema),
+  /** Furnace calibration factor on D (1 when uncalibrated). */
+  diffusivityFactor: v.optional(numberBetween(DIFFUSIVITY_FACTOR_LIMITS.min, DIFFUSIVITY_FACTOR_LIMITS.max)),
+  /** Furnace temperature tolerance for the uncertainty band, ±°C. */
+  temperatureToleranceC: v.optional(numberBetween(0, MAX_TEMPERATURE_TOLERANCE_C)),
+};
+
+export const DepthInputSchema = v.strictObject({
+  kind: v.literal('depth'),
+  temperatureC: finiteNumber(),
+  timeH: positiveNumber(),
+  ...caseSpecEntries,
+});
+
+export const TimeInputSchema = v.strictObject({
+  kind: v.literal('time'),
+  temperatureC: finiteNumber(),
+  targetDepthMm: positiveNumber(),
+  ...caseSpecEntries,
+});
+
+export const TemperatureInputSchema = v.strictObject({
+  kind: v.literal('temperature'),
+  timeH: positiveNumber(),
+  targetDepthMm: positiveNumber(),
+  ...caseSpecEntries,
+});
+
+const RecipeStepSchema = v.strictObject({
+  label: v.optional(textUpTo(80)),
+  durationH: positiveNumber(),
+  startTempC: finiteNumber(),
+  endTempC: finiteNumber(),
+  carbonPotentialPct: v.nullable(CarbonPctSchema),
+  betaMPerS: v.optional(positiveNumber()),
+});
+
+const PartShapeSchema = v.variant('kind', [
+  v.strictObject({ kind: v.literal('semi-infinite') }),
+  v.strictObject({ kind: v.literal('plate'), thicknessMm: positiveNumber() }),
+  v.strictObject({ kind: v.literal('bar'), diameterMm: positiveNumber() }),
+]);
+
+export const RecipeSchema = v.strictObject({
+  name: v.optional(textUpTo(120)),
+  steel: v.strictObject({
+    grade: v.optional(textUpTo(60)),
+    coreCarbonPct: CarbonPctSchema,
+    composition: v.optional(CompositionSchema),
+  }),
+  model: v.optional(ModelIdSchema),
+  thresholdCarbonPct: v.optional(CarbonPctSchema),
+  shape: v.optional(PartShapeSchema),
+  steps: v.pipe(v.array(RecipeStepSchema), v.minLength(1), v.maxLength(50)),
+});
+
+export const CycleInputSchema = v.strictObject({ kind: v.literal('cycle'), recipe: RecipeSchema });
+
+export const JobInputsSchema = v.variant('kind', [
+  DepthInputSchema,
+  TimeInputSchema,
+  TemperatureInputSchema,
+  CycleInputSchema,
+]);
+
+export type JobInputs = v.InferOutput<typeof JobInputsSchema>;
+export type JobInputKind = JobInputs['kind'];
+export const JOB_INPUT_KINDS = ['depth', 'time', 'temperature', 'cycle'] as const satisfies readonly JobInputKind[];
+// Compile-time: the list names every kind of the union.
+const everyKindListed: Exclude<JobInputKind, (typeof JOB_INPUT_KINDS)[number]> extends never ? true : false = true;
+void everyKindListed;
+
+/** A closed-form input without its `kind`: exactly the request the physics function takes. */
+export function physicsRequestOf(inputs: Exclude<JobInputs, { kind: 'cycle' }>): Record<string, unknown> {
+  const { kind: _kind, ...request } = inputs;
+  return request;
+}
+
+// Compile-time proof that the stored recipe and the physics contract are the same shape.
+type Same<A, B> = [A] extends [B] ? ([B] extends [A] ? true : false) : false;
+const recipeMatchesContract: Same<v.InferOutput<typeof RecipeSchema>, Recipe> = true;
+void recipeMatchesContract;

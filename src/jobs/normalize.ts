@@ -1,0 +1,33 @@
+/**
+ * Tidying what a person typed before it is checked: surrounding spaces go from the short
+ * fields and initials are upper-cased. Notes are kept exactly as written.
+ */
+const TRIMMED_FIELDS = ['operator', 'furnace', 'workOrder', 'partNumber'] as const;
+
+export function tidyEntry(input: unknown): unknown {
+  if (typeof input !== 'object' || input === null || Array.isArray(input)) return input;
+  const tidy: Record<string, unknown> = { ...(input as Record<string, unknown>) };
+  for (const field of TRIMMED_FIELDS) {
+    const value = tidy[field];
+    if (typeof value === 'string') tidy[field] = value.trim();
+  }
+  if (typeof tidy.operator === 'string') tidy.operator = tidy.operator.toUpperCase();
+  return tidy;
+}
+
+/** A copy of `base` with `changes` applied; a change to `undefined` removes the field. */
+export function applyChanges(base: Record<string, unknown>, changes: Record<string, unknown>): Record<string, unknown> {
+  const merged: Record<string, unknown> = { ...base };
+  for (const [key, value] of Object.entries(changes)) {
+    if (value === undefined) delete merged[key];
+    else merged[key] = value;
+  }
+  return merged;
+}
+
+/** An update time later than both now and the previous one, so "newest wins" always holds. */
+export function nextTimestamp(now: Date, previousIso: unknown): string {
+  const previousMs = typeof previousIso === 'string' ? Date.parse(previousIso) : Number.NaN;
+  const nowMs = now.getTime();
+  return new Date(Number.isNaN(previousMs) || nowMs > previousMs ? nowMs : previousMs + 1).toISOString();
+}

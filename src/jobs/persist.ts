@@ -1,0 +1,27 @@
+/**
+ * Asking the browser to keep the log when space runs low. Without it, a browser may evict
+ * the whole database of a site not visited for a while.
+ */
+export type PersistOutcome = 'granted' | 'denied' | 'unsupported';
+
+export interface StorageManagerLike {
+  persist?: () => Promise<boolean>;
+  persisted?: () => Promise<boolean>;
+}
+
+function storageManager(): StorageManagerLike | undefined {
+  return typeof navigator === 'undefined' ? undefined : (navigator.storage as StorageManagerLike | undefined);
+}
+
+/** Requests persistent storage; already persisted counts as granted. */
+export async function requestPersistentStorage(
+  storage: StorageManagerLike | undefined = storageManager(),
+): Promise<PersistOutcome> {
+  if (!storage || typeof storage.persist !== 'function') return 'unsupported';
+  try {
+    if (typeof storage.persisted === 'function' && (await storage.persisted())) return 'granted';
+    return (await storage.persist()) ? 'granted' : 'denied';
+  } catch {
+    return 'denied';
+  }
+}

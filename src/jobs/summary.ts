@@ -1,0 +1,71 @@
+/**
+ * The supervisor's view of a shift: how many loads, which furnaces, what is still open,
+ * and how each prediction compares with the lab's traverse. Pure functions over jobs.
+ */
+import { OPEN_STATUSES, type Job, type JobStatus } from './schema';
+
+export interface EcdComparison {
+  jobId: string;
+  furnace: string;
+  partNumber: string;
+  predictedMm: number;
+  measuredMm: number;
+  /** Predicted − measured, mm: positive when the prediction was deeper than the lab found. */
+  differenceMm: number;
+  /** The difference as a share of the measured depth, %. */
+  differencePct: number;
+  /** Whether the lab depth lies inside the predicted uncertainty band (absent without a band). */
+  withinBand?: boolean;
+}
+
+export interface ShiftSummary {
+  loads: number;
+  furnaces: string[];
+  byStatus: Record<JobStatus, number>;
+  /** Jobs still planned, in the furnace or on hold, newest first as given. */
+  openItems: Job[];
+  ecdPairs: EcdComparison[];
+  /** Mean of the differences and of their absolute percentages; absent without pairs. */
+  meanDifferenceMm?: number;
+  meanAbsDifferencePct?: number;
+}
+
+/** Prediction against the lab for one job, when both depths are known. */
+export function ecdComparison(job: Job): EcdComparison | undefined {
+  const predictedMm = job.prediction?.effectiveCaseDepthMm;
+  const measuredMm = job.lab?.ecdMm;
+  if (predictedMm === undefined || measuredMm === undefined || !(measuredMm > 0)) return undefined;
+  const differenceMm = predictedMm - measuredMm;
+  const band = job.prediction?.ecdBandMm;
+  return {
+    jobId: job.id,
+    furnace: job.furnace,
+    partNumber: job.partNumber,
+    predictedMm,
+    measuredMm,
+    differenceMm,
+    differencePct: (differenceMm / measuredMm) * 100,
+    ...(band ? { withinBand: measuredMm >= band.minMm && measuredMm <= band.maxMm } : {}),
+  };
+}
+
+const mean = (values: readonly number[]) => values.reduce((sum, x) => sum + x, 0) / values.length;
+
+export function summarizeShift(jobs: readonly Job[]): ShiftSummary {
+  const byStatus: Record<JobStatus, number> = { planned: 0, inFurnace: 0, done: 0, onHold: 0, rejected: 0 };
+  for (const job of jobs) byStatus[job.status]++;
+  const ecdPairs = jobs.map(ecdComparison).filter((pair): pair is EcdComparison => pair !== undefined);
+  return {
+    loads: jobs.length,
+    furnaces: [...new Set(jobs.map((job) => job.furnace))].sort(),
+    byStatus,
+    openItems: jobs.filter((job) => OPEN_STATUSES.includes(job.status)),
+    ecdPairs,
+    ...(ecdPairs.length > 0
+      ? {
+          meanDifferenceMm: mean(ecdPairs.map((p) => p.differenceMm)),
+          meanAbsDifferencePct: mean(ecdPairs.map((p) => Math.abs(p.differencePct))),
+        }
+      : {}),
+  };
+}

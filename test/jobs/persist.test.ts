@@ -1,0 +1,57 @@
+import { openDB } from 'idb';
+import { describe, expect, it, vi } from 'vitest';
+import { requestPersistentStorage } from '../../src/jobs/persist';
+import { openJobStore } from '../../src/jobs/store';
+import { pinionDraft, uniqueDbName, unwrap } from './helpers';
+
+describe('requestPersistentStorage', () => {
+  it('granted when the browser agrees or already persists', async () => {
+    expect(await requestPersistentStorage({ persist: async () => true })).toBe('granted');
+    const persist = vi.fn(async () => false);
+    expect(await requestPersistentStorage({ persisted: async () => true, persist })).toBe('granted');
+    expect(persist).not.toHaveBeenCalled();
+  });
+  it('denied when the browser refuses or the call fails', async () => {
+    expect(await requestPersistentStorage({ persisted: async () => false, persist: async () => false })).toBe('denied');
+    expect(await requestPersistentStorage({ persist: async () => Promise.reject(new Error('SecurityError')) })).toBe('denied');
+  });
+  it('unsupported without the Storage API', async () => {
+    expect(await requestPersistentStorage(undefined)).toBe('unsupported');
+    expect(await requestPersistentStorage({})).toBe('unsupported');
+  });
+  it('reads navigator.storage by default', async () => {
+    vi.stubGlobal('navigator', { storage: { persist: async () => true } });
+    try {
+      expect(await requestPersistentStorage()).toBe('granted');
+    } finally {
+      vi.unstubAllGlobals();
+    }
+  });
+});
+
+describe('a newer version opened in another tab', () => {
+  it('closes this connection, tells the app, and later calls answer storage.closed', async () => {
+    const name = uniqueDbName();
+    const onVersionChange = vi.fn();
+    const store = unwrap(await openJobStore({ name, onVersionChange }));
+    const newer = await openDB(name, 99);
+    expect(onVersionChange).toHaveBeenCalledOnce();
+    expect(store.closed).toBe(true);
+    expect(await store.add(pinionDraft())).toEqual({ ok: false, error: { code: 'storage.closed' } });
+    newer.close();
+  });
+});
+
+describe('a log saved by a newer release', () => {
+  it('is not opened by this one: storage.newerVersion, and the newer data is untouched', async () => {
+    const name = uniqueDbName();
+    const newer = await openDB(name, 7, { upgrade: (db) => void db.createObjectStore('jobs', { keyPath: 'id' }) });
+    await newer.put('jobs', { id: 'from-the-future', shape: 'unknown to us' });
+    newer.close();
+    expect(await openJobStore({ name })).toEqual({ ok: false, error: { code: 'storage.newerVersion' } });
+    const check = await openDB(name);
+    expect(check.version).toBe(7);
+    expect(await check.get('jobs', 'from-the-future')).toEqual({ id: 'from-the-future', shape: 'unknown to us' });
+    check.close();
+  });
+});

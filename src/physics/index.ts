@@ -16,3 +16,5 @@ export * from './calibration';
 export * from './cycle/recipe';
 export * from './cycle/readRecipe';
 export * from './cycle/simulate';
+export * from './planner/readPlanRequest';
+export * from './planner/planner';

@@ -40,7 +40,7 @@ export function under<T>(prefix: string, result: Result<T>): Result<T> {
   return fail(e.code, e.field === undefined ? prefix : `${prefix}.${e.field}`, e.params);
 }
 
-export const text = (raw: unknown): string | undefined =>
+const text = (raw: unknown): string | undefined =>
   typeof raw === 'string' && raw.trim() !== '' ? raw.trim().slice(0, MAX_TEXT_LENGTH) : undefined;
 
 function checkStepTemperatureC(value: number, field: string): Result<number> {

@@ -4,7 +4,7 @@
  * forward in full. `reachable` only when that forward run meets both ranges with potentials
  * below saturation; otherwise `binding` says what stops it and `suggestions` what would help.
  */
-import type { Recipe } from '../cycle/recipe';
+import type { Recipe, SimulationResult } from '../cycle/recipe';
 import { fail, ok, type Result, type Warning } from '../result';
 import { saturationFinding, searchFinding, type Finding } from './findings';
 import { PlanModel } from './planModel';
@@ -13,8 +13,8 @@ import { searchPlan, type Aim, type SearchOutcome } from './search';
 
 /** The diffuse step keeps at least a tenth of the carburizing time: our rule, so a plan is a real two-step cycle. */
 export const MAX_BOOST_SHARE = 0.9;
-/** Plan times are rounded to this, h (36 s): finer than a furnace timer needs. */
-export const TIME_ROUNDING_H = 0.01;
+/** Plan times are rounded to this, h (3.6 s): at most 0.25 % of the shortest carburizing time considered (0.1 h). */
+export const TIME_ROUNDING_H = 0.001;
 /** Solver resolution of the runs during the search (measured: see the planner bench). */
 export const SEARCH_RESOLUTION = 0.5;
 /** Resolution of the forward run that checks the plan (the simulator's default). */
@@ -72,11 +72,18 @@ function missFinding(ecdMm: number, surfacePct: number): Finding {
 
 const aimOf = (aim: Aim) => ({ effectiveCaseDepthMm: aim.ecdMm, surfaceCarbonPct: aim.surfacePct });
 
-/** Plans a validated request. */
-export function planForTargets(request: PlanRequest, options: PlanOptions = {}): PlanResult {
-  const searchResolution = options.searchResolution ?? SEARCH_RESOLUTION;
-  const model = new PlanModel(request);
-  const hardeningH = model.hardeningH;
+interface Attempt {
+  outcome: SearchOutcome;
+  boostH: number;
+  diffuseH: number;
+  recipe: Recipe;
+  simulation: SimulationResult;
+  meets: boolean;
+}
+
+/** Searches at `searchResolution`, rounds the times, and checks the plan forward at `verifyResolution`. */
+function attempt(model: PlanModel, searchResolution: number, verifyResolution: number): Attempt {
+  const { request, hardeningH } = model;
   const limits = { minCarburizeH: MIN_CARBURIZE_H, maxCarburizeH: request.maxTotalH - hardeningH, maxBoostShare: MAX_BOOST_SHARE };
   const outcome = searchPlan(
     (boostShare, carburizeH) => model.probe(boostShare, carburizeH, searchResolution),
@@ -86,9 +93,23 @@ export function planForTargets(request: PlanRequest, options: PlanOptions = {}):
   );
   const { boostH, diffuseH } = roundedTimes(outcome, limits.maxCarburizeH);
   const recipe = model.recipe(boostH, diffuseH);
-  const simulation = model.simulate(recipe, options.verifyResolution ?? VERIFY_RESOLUTION);
+  const simulation = model.simulate(recipe, verifyResolution);
+  const meets = within(simulation.effectiveCaseDepthMm, request.targetEcdMm) && within(simulation.surfaceCarbonPct, request.targetSurfaceCarbonPct);
+  return { outcome, boostH, diffuseH, recipe, simulation, meets };
+}
+
+/** Plans a validated request. */
+export function planForTargets(request: PlanRequest, options: PlanOptions = {}): PlanResult {
+  const searchResolution = options.searchResolution ?? SEARCH_RESOLUTION;
+  const verifyResolution = options.verifyResolution ?? VERIFY_RESOLUTION;
+  const model = new PlanModel(request);
+  const hardeningH = model.hardeningH;
+  let tried = attempt(model, searchResolution, verifyResolution);
+  const searchSaidMet = tried.outcome.kind === 'depthMet' && tried.outcome.surface === 'met';
+  // Narrow targets on a steep profile can fall between the coarse search and the check: search again at the check's resolution.
+  if (!tried.meets && searchSaidMet && searchResolution !== verifyResolution) tried = attempt(model, verifyResolution, verifyResolution);
+  const { outcome, boostH, diffuseH, recipe, simulation, meets } = tried;
   const { effectiveCaseDepthMm, surfaceCarbonPct, totalCaseDepthMm } = simulation;
-  const meets = within(effectiveCaseDepthMm, request.targetEcdMm) && within(surfaceCarbonPct, request.targetSurfaceCarbonPct);
   const finding =
     saturationFinding(request) ??
     (meets
@@ -100,7 +121,8 @@ export function planForTargets(request: PlanRequest, options: PlanOptions = {}):
     boostH,
     diffuseH,
     hardeningH,
-    totalH: roundTime(boostH + diffuseH + hardeningH),
+    // The hardening soak is as given, so only float noise is rounded off the sum.
+    totalH: Number((boostH + diffuseH + hardeningH).toFixed(9)),
     predicted: { effectiveCaseDepthMm, surfaceCarbonPct, totalCaseDepthMm },
     ...(finding ? { binding: finding.binding } : {}),
     suggestions: finding?.suggestions ?? [],

@@ -63,14 +63,18 @@ function readObject<T>(fields: Fields, field: string, read: (f: Fields) => Resul
   return under(field, inner.ok ? read(inner.value) : inner);
 }
 
+/** An optional number field with a default, range-checked. */
+function readOptionalChecked(f: Fields, field: string, fallback: number, check: (value: number, field: string) => Result<number>): Result<number> {
+  const raw = readOptionalNumber(f, field);
+  return raw.ok ? check(raw.value ?? fallback, field) : raw;
+}
+
 function readPotentialStep(f: Fields): Result<PotentialStep> {
   const temperatureC = readChecked(f, 'temperatureC', checkTemperatureC);
   if (!temperatureC.ok) return temperatureC;
   const potential = readChecked(f, 'carbonPotentialPct', checkCarbonPct);
   if (!potential.ok) return potential;
-  const betaRaw = readOptionalNumber(f, 'betaMPerS');
-  if (!betaRaw.ok) return betaRaw;
-  const beta = checkBeta(betaRaw.value ?? DEFAULT_BETA_M_PER_S, 'betaMPerS');
+  const beta = readOptionalChecked(f, 'betaMPerS', DEFAULT_BETA_M_PER_S, checkBeta);
   if (!beta.ok) return beta;
   return ok({ temperatureC: temperatureC.value, carbonPotentialPct: potential.value, betaMPerS: beta.value });
 }
@@ -97,11 +101,6 @@ function deepestCaseMm(shape: PartShape): number | undefined {
   if (shape.kind === 'plate') return shape.thicknessMm / 2;
   if (shape.kind === 'bar') return shape.diameterMm / 2;
   return undefined;
-}
-
-function readOptionalChecked(f: Fields, field: string, fallback: number, check: (value: number, field: string) => Result<number>): Result<number> {
-  const raw = readOptionalNumber(f, field);
-  return raw.ok ? check(raw.value ?? fallback, field) : raw;
 }
 
 /** Cross-checks between fields: a boost richer than the diffuse, targets inside the part and above the threshold. */

@@ -39,7 +39,7 @@ export interface PlanResult {
   binding?: Warning;
   /** Changes that would make the targets reachable (estimates). */
   suggestions: Warning[];
-  /** The ECD and surface carbon the search aimed at: the middle of what is wanted and reachable. */
+  /** What the search aimed at: the middle of what is both wanted and reachable (out of reach: the nearest target limit). */
   aim?: { effectiveCaseDepthMm: number; surfaceCarbonPct: number };
   /** Surface carbon that plans of the aimed depth can leave, from most diffuse to most boost, wt%. */
   surfaceRangePct?: TargetRange;

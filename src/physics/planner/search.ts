@@ -188,6 +188,9 @@ export function searchPlan(
     const nearest = (highPct >= lowPct) === tooHigh ? high : low;
     return depthMet(tooHigh ? 'tooHigh' : 'tooLow', nearest, tooHigh ? targetSurfacePct.min : targetSurfacePct.max);
   }
+  // Not the reachable point nearest the drawing's middle: the ends of the reachable range are where a
+  // plan degenerates (no boost, or the shortest diffuse, which the atmosphere's lag after a change of
+  // potential makes unreliable), so the middle keeps room on every side.
   const surfaceAim = middle(wantedLow, wantedHigh);
   if (low.boostShare >= high.boostShare) return depthMet('met', low, surfaceAim);
 

@@ -10,6 +10,7 @@ import { caseDepth, temperatureForCaseDepth, timeForCaseDepth } from './physics/
 import { convertRequest } from './physics/conversions';
 import { simulateCycle } from './physics/cycle/simulate';
 import { equivalentTime } from './physics/equivalentTime';
+import { planTwoStepCycle } from './physics/planner/planner';
 import type { InputError, Result, Warning } from './physics/result';
 
 type Command = (request: unknown) => Result<object>;
@@ -22,6 +23,7 @@ export const COMMANDS: Record<string, Command> = {
   convert: convertRequest,
   'equivalent-time': equivalentTime,
   simulate: simulateCycle,
+  plan: planTwoStepCycle,
 };
 
 const { t } = createI18n('en');
@@ -32,15 +34,21 @@ interface CliError {
   field?: string;
 }
 
-/** Adds the English sentence to every warning in a result, wherever it sits. */
+/** Result keys holding a list of cautions or findings, and keys holding a single one (the planner's `binding`). */
+const WORDED_LISTS = new Set(['warnings', 'suggestions']);
+const WORDED_ITEMS = new Set(['binding']);
+
+const worded = (w: Warning) => ({ ...w, message: warningMessage(t, w) });
+
+/** Adds the English sentence to every warning and planner finding in a result, wherever it sits. */
 function wordWarnings(value: unknown): unknown {
   if (Array.isArray(value)) return value.map(wordWarnings);
   if (typeof value !== 'object' || value === null) return value;
-  const entries = Object.entries(value).map(([key, v]) =>
-    key === 'warnings' && Array.isArray(v)
-      ? [key, (v as Warning[]).map((w) => ({ ...w, message: warningMessage(t, w) }))]
-      : [key, wordWarnings(v)],
-  );
+  const entries = Object.entries(value).map(([key, v]) => {
+    if (WORDED_LISTS.has(key) && Array.isArray(v)) return [key, (v as Warning[]).map(worded)];
+    if (WORDED_ITEMS.has(key) && typeof v === 'object' && v !== null) return [key, worded(v as Warning)];
+    return [key, wordWarnings(v)];
+  });
   return Object.fromEntries(entries);
 }
 

@@ -13,6 +13,8 @@ export * from './conversions';
 export * from './grades';
 export * from './uncertainty';
 export * from './calibration';
+export * from './planner/readPlanRequest';
+export * from './planner/planner';
 export * from './cycle/recipe';
 export * from './cycle/readRecipe';
 export * from './cycle/simulate';

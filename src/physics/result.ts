@@ -46,6 +46,9 @@ export const ERROR_CODES = [
   'shape.unknown',
   'shape.sizeOutOfRange',
   'threshold.notAboveCore',
+  'range.minAboveMax',
+  'carbon.boostNotAboveDiffuse',
+  'time.limitTooShort',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];
@@ -74,7 +77,7 @@ export const fail = <T = never>(code: ErrorCode, field?: string, params?: Params
   },
 });
 
-/** Cautions that do not stop a computation (each is a key under `warnings.` in the locales). */
+/** Cautions that do not stop a computation, and the planner's findings (each is a key under `warnings.` in the locales). */
 export const WARNING_CODES = [
   'saturation.potentialAboveAcm',
   'saturation.surfaceAboveAcm',
@@ -82,6 +85,24 @@ export const WARNING_CODES = [
   'shape.throughCarburizing',
   'hardness.retainedAustenite',
   'model.outsideCalibratedRange',
+  // What binds when the planner cannot meet its targets…
+  'plan.boostPotentialAboveSaturation',
+  'plan.diffusePotentialAboveSaturation',
+  'plan.caseDepthNeedsMoreTime',
+  'plan.caseDepthTooDeepForShortestCycle',
+  'plan.surfaceCarbonTooHighForDiffusePotential',
+  'plan.surfaceCarbonTooHighForCycleTime',
+  'plan.surfaceCarbonTooLowForDiffusePotential',
+  'plan.missedInFinalCheck',
+  // …and what would make them reachable.
+  'plan.lowerBoostPotential',
+  'plan.raiseBoostPotential',
+  'plan.lowerDiffusePotential',
+  'plan.raiseDiffusePotential',
+  'plan.raiseTemperature',
+  'plan.lowerTemperature',
+  'plan.allowMoreTime',
+  'plan.shortenHardening',
 ] as const;
 
 export type WarningCode = (typeof WARNING_CODES)[number];

@@ -10,6 +10,7 @@ export interface Root {
 /**
  * Finds x in [a, b] with f(x) = 0, given f(a) and f(b) of opposite sign.
  * Returns undefined when the root is not bracketed or does not converge.
+ * `valueTolerance` also accepts the latest x once |f(x)| is within it (for costly f).
  */
 export function brentRoot(
   f: (x: number) => number,
@@ -17,6 +18,7 @@ export function brentRoot(
   b: number,
   relTol = 1e-12,
   maxIterations = 200,
+  valueTolerance = 0,
 ): Root | undefined {
   let fa = f(a);
   let fb = f(b);
@@ -45,7 +47,7 @@ export function brentRoot(
     }
     const tol = 2 * Number.EPSILON * Math.abs(b) + 0.5 * relTol * Math.abs(b);
     const m = 0.5 * (c - b);
-    if (Math.abs(m) <= tol || fb === 0) return { x: b, iterations: i };
+    if (Math.abs(m) <= tol || Math.abs(fb) <= valueTolerance) return { x: b, iterations: i };
     if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
       // Inverse quadratic interpolation, or the secant step when only two points differ.
       const s = fb / fa;

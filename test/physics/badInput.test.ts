@@ -4,6 +4,7 @@ import { caseDepth, temperatureForCaseDepth, timeForCaseDepth } from '../../src/
 import { convertRequest } from '../../src/physics/conversions';
 import { equivalentTime } from '../../src/physics/equivalentTime';
 import { ERROR_CODES, type Result } from '../../src/physics/result';
+import { allFinite } from './allFinite';
 
 const base = { temperatureC: 925, timeH: 6, surfaceCarbonPct: 0.9, coreCarbonPct: 0.2 };
 const history = [
@@ -62,13 +63,6 @@ describe('every error path returns its key and field', () => {
   });
 });
 
-/** Every number anywhere inside a value is finite. */
-function allFinite(value: unknown): boolean {
-  if (typeof value === 'number') return Number.isFinite(value);
-  if (Array.isArray(value)) return value.every(allFinite);
-  if (typeof value === 'object' && value !== null) return Object.values(value).every(allFinite);
-  return true;
-}
 
 const wildNumber = fc.oneof(
   fc.double(),

@@ -34,7 +34,7 @@ export const SHAPE_SIZE_LIMITS_MM = { min: 0.1, max: 1000 } as const;
 const MAX_TEXT_LENGTH = 120;
 
 /** Re-labels an error with the path of the object it came from. */
-function under<T>(prefix: string, result: Result<T>): Result<T> {
+export function under<T>(prefix: string, result: Result<T>): Result<T> {
   if (result.ok) return result;
   const e: InputError = result.error;
   return fail(e.code, e.field === undefined ? prefix : `${prefix}.${e.field}`, e.params);
@@ -140,14 +140,12 @@ function readShape(raw: unknown): Result<PartShape> {
   return fail('shape.unknown', 'kind', { kind: String(kind) });
 }
 
-/**
- * `simulate` request → Recipe, defaults filled in: model (Ågren), ECD threshold
- * (0.40 %C), shape (semi-infinite), β of each step (DEFAULT_BETA_M_PER_S).
- */
-export function readRecipe(request: unknown): Result<Recipe> {
-  const fields = asFields(request);
-  if (!fields.ok) return fields;
-  const f = fields.value;
+/** Everything of a cycle request but its steps: shared by `simulate` and `plan`. */
+export type CycleBase = Omit<Recipe, 'steps' | 'model' | 'thresholdCarbonPct' | 'shape'> &
+  Required<Pick<Recipe, 'model' | 'thresholdCarbonPct' | 'shape'>>;
+
+/** Steel, model, ECD threshold (above core) and shape of a request, defaults filled in, and its name. */
+export function readCycleBase(f: Fields): Result<CycleBase> {
   const steel = under('steel', readSteel(f.steel));
   if (!steel.ok) return steel;
   const model = readModel(f);
@@ -163,16 +161,25 @@ export function readRecipe(request: unknown): Result<Recipe> {
   }
   const shape = under('shape', readShape(f.shape));
   if (!shape.ok) return shape;
-  const steps = readSteps(f.steps);
-  if (!steps.ok) return steps;
-  const recipe: Recipe = {
-    steel: steel.value,
-    model: model.value,
-    thresholdCarbonPct,
-    shape: shape.value,
-    steps: steps.value,
-  };
+  const base: CycleBase = { steel: steel.value, model: model.value, thresholdCarbonPct, shape: shape.value };
   const name = text(f.name);
+  if (name !== undefined) base.name = name;
+  return ok(base);
+}
+
+/**
+ * `simulate` request → Recipe, defaults filled in: model (Ågren), ECD threshold
+ * (0.40 %C), shape (semi-infinite), β of each step (DEFAULT_BETA_M_PER_S).
+ */
+export function readRecipe(request: unknown): Result<Recipe> {
+  const fields = asFields(request);
+  if (!fields.ok) return fields;
+  const base = readCycleBase(fields.value);
+  if (!base.ok) return base;
+  const steps = readSteps(fields.value.steps);
+  if (!steps.ok) return steps;
+  const { name, ...rest } = base.value;
+  const recipe: Recipe = { ...rest, steps: steps.value };
   if (name !== undefined) recipe.name = name;
   return ok(recipe);
 }

@@ -1,0 +1,68 @@
+/**
+ * The forward model the planner searches: a boost/diffuse/hardening recipe from two times,
+ * simulated by the cycle solver with the furnace's calibration factor on D. Counts every
+ * simulation so the benchmark can report what a plan costs.
+ */
+import { DIFFUSIVITY_MODELS } from '../diffusivity';
+import { depthToCarbonM } from '../cycle/profile';
+import type { Recipe, RecipeStep, SimulationResult } from '../cycle/recipe';
+import { runCycle, solveRecipe } from '../cycle/simulate';
+import type { DiffusivityFunction } from '../cycle/plan';
+import type { PlanRequest, PotentialStep } from './readPlanRequest';
+
+/** Effective case depth and final surface carbon of one simulated plan. */
+export interface Probe {
+  ecdMm: number;
+  surfacePct: number;
+}
+
+/** Step labels of a planned recipe: stable words the cycle screen may translate. */
+export const PLAN_STEP_LABELS = { boost: 'boost', diffuse: 'diffuse', hardening: 'hardening' } as const;
+
+function soak(label: string, durationH: number, step: PotentialStep): RecipeStep {
+  const { temperatureC, carbonPotentialPct, betaMPerS } = step;
+  return { label, durationH, startTempC: temperatureC, endTempC: temperatureC, carbonPotentialPct, betaMPerS };
+}
+
+export class PlanModel {
+  /** Simulator runs so far. */
+  simulations = 0;
+  private readonly diffusivity: DiffusivityFunction;
+
+  constructor(readonly request: PlanRequest) {
+    const model = DIFFUSIVITY_MODELS[request.model].diffusivity;
+    const factor = request.diffusivityFactor;
+    this.diffusivity = factor === 1 ? model : (tempK, carbonPct) => factor * model(tempK, carbonPct);
+  }
+
+  /** Hours at hardening temperature (0 without a hardening step). */
+  get hardeningH(): number {
+    return this.request.hardening?.timeH ?? 0;
+  }
+
+  /** The recipe for these times; a step of zero length is left out. */
+  recipe(boostH: number, diffuseH: number): Recipe {
+    const { boost, diffuse, hardening, name, steel, model, thresholdCarbonPct, shape } = this.request;
+    const steps: RecipeStep[] = [];
+    if (boostH > 0) steps.push(soak(PLAN_STEP_LABELS.boost, boostH, boost));
+    if (diffuseH > 0) steps.push(soak(PLAN_STEP_LABELS.diffuse, diffuseH, diffuse));
+    if (hardening) steps.push(soak(PLAN_STEP_LABELS.hardening, hardening.timeH, { ...diffuse, temperatureC: hardening.temperatureC }));
+    return { ...(name === undefined ? {} : { name }), steel, model, thresholdCarbonPct, shape, steps };
+  }
+
+  /** ECD and surface carbon after `carburizeH` hours of boost and diffuse with `boostShare` of it boost. */
+  probe(boostShare: number, carburizeH: number, resolution: number): Probe {
+    this.simulations++;
+    const run = solveRecipe(this.recipe(boostShare * carburizeH, (1 - boostShare) * carburizeH), {
+      resolution,
+      diffusivity: this.diffusivity,
+    });
+    return { ecdMm: depthToCarbonM(run, this.request.thresholdCarbonPct) * 1e3, surfacePct: run.surfaceCarbonPct };
+  }
+
+  /** The full simulation of a recipe (profile, history, cautions) at `resolution`. */
+  simulate(recipe: Recipe, resolution: number): SimulationResult {
+    this.simulations++;
+    return runCycle(recipe, resolution, { diffusivity: this.diffusivity });
+  }
+}

@@ -54,5 +54,7 @@ export default defineConfig({
     include: ['test/**/*.test.ts', 'test/**/*.test.tsx'],
     exclude: ['test/e2e/**', 'node_modules/**'],
     environment: 'node',
+    // A guard against hangs, not a speed check: property tests run for seconds on a loaded 2-core machine.
+    testTimeout: 60_000,
   },
 });

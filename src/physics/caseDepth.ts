@@ -221,17 +221,30 @@ export function evaluateCaseDepth(spec: CaseSpec, temperatureC: number, timeH: n
   };
 }
 
-/** `depth`: case depths after `timeH` at `temperatureC`. */
-export function caseDepth(request: unknown): Result<CaseDepthResult> {
+type Check = (value: number, field: string) => Result<number>;
+
+/** Reads the two numbers a calculator request turns on, then the case spec (errors in that order). */
+function readCalculatorRequest(
+  request: unknown,
+  first: [string, Check],
+  second: [string, Check],
+): Result<[number, number, CaseSpec]> {
   const fields = asFields(request);
   if (!fields.ok) return fields;
-  const temperature = readChecked(fields.value, 'temperatureC', checkTemperatureC);
-  if (!temperature.ok) return temperature;
-  const time = readChecked(fields.value, 'timeH', checkTimeH);
-  if (!time.ok) return time;
+  const a = readChecked(fields.value, ...first);
+  if (!a.ok) return a;
+  const b = readChecked(fields.value, ...second);
+  if (!b.ok) return b;
   const spec = readCaseSpec(fields.value);
-  if (!spec.ok) return spec;
-  return ok(evaluateCaseDepth(spec.value, temperature.value, time.value));
+  return spec.ok ? ok([a.value, b.value, spec.value]) : spec;
+}
+
+/** `depth`: case depths after `timeH` at `temperatureC`. */
+export function caseDepth(request: unknown): Result<CaseDepthResult> {
+  const read = readCalculatorRequest(request, ['temperatureC', checkTemperatureC], ['timeH', checkTimeH]);
+  if (!read.ok) return read;
+  const [temperatureC, timeH, spec] = read.value;
+  return ok(evaluateCaseDepth(spec, temperatureC, timeH));
 }
 
 /** Time at temperature for the effective case depth to reach `depthMm`, h. */
@@ -243,21 +256,16 @@ export function timeForDepthH(spec: CaseSpec, temperatureC: number, depthMm: num
 
 /** `time`: how long at `temperatureC` for an effective case depth of `targetDepthMm`. */
 export function timeForCaseDepth(request: unknown): Result<TimeResult> {
-  const fields = asFields(request);
-  if (!fields.ok) return fields;
-  const temperature = readChecked(fields.value, 'temperatureC', checkTemperatureC);
-  if (!temperature.ok) return temperature;
-  const target = readChecked(fields.value, 'targetDepthMm', checkDepthMm);
-  if (!target.ok) return target;
-  const spec = readCaseSpec(fields.value);
-  if (!spec.ok) return spec;
-  const timeH = timeForDepthH(spec.value, temperature.value, target.value);
+  const read = readCalculatorRequest(request, ['temperatureC', checkTemperatureC], ['targetDepthMm', checkDepthMm]);
+  if (!read.ok) return read;
+  const [temperatureC, targetDepthMm, spec] = read.value;
+  const timeH = timeForDepthH(spec, temperatureC, targetDepthMm);
   const checkedTime = checkTimeH(timeH, 'targetDepthMm');
   if (!checkedTime.ok) return checkedTime;
-  const times = MODEL_IDS.map((id) => timeForDepthH(spec.value, temperature.value, target.value, id));
+  const times = MODEL_IDS.map((id) => timeForDepthH(spec, temperatureC, targetDepthMm, id));
   return ok({
-    ...evaluateCaseDepth(spec.value, temperature.value, timeH),
-    targetDepthMm: target.value,
+    ...evaluateCaseDepth(spec, temperatureC, timeH),
+    targetDepthMm,
     modelRangeH: { min: Math.min(...times), max: Math.max(...times) },
   });
 }
@@ -282,22 +290,17 @@ export function temperatureForDepthC(
 
 /** `temperature`: which temperature gives `targetDepthMm` in `timeH`. */
 export function temperatureForCaseDepth(request: unknown): Result<TemperatureResult> {
-  const fields = asFields(request);
-  if (!fields.ok) return fields;
-  const time = readChecked(fields.value, 'timeH', checkTimeH);
-  if (!time.ok) return time;
-  const target = readChecked(fields.value, 'targetDepthMm', checkDepthMm);
-  if (!target.ok) return target;
-  const spec = readCaseSpec(fields.value);
-  if (!spec.ok) return spec;
-  const temperature = temperatureForDepthC(spec.value, time.value, target.value);
+  const read = readCalculatorRequest(request, ['timeH', checkTimeH], ['targetDepthMm', checkDepthMm]);
+  if (!read.ok) return read;
+  const [timeH, targetDepthMm, spec] = read.value;
+  const temperature = temperatureForDepthC(spec, timeH, targetDepthMm);
   if (!temperature.ok) return temperature;
-  const temps = MODEL_IDS.map((id) => temperatureForDepthC(spec.value, time.value, target.value, id))
+  const temps = MODEL_IDS.map((id) => temperatureForDepthC(spec, timeH, targetDepthMm, id))
     .filter((r) => r.ok)
     .map((r) => r.value);
   return ok({
-    ...evaluateCaseDepth(spec.value, temperature.value, time.value),
-    targetDepthMm: target.value,
+    ...evaluateCaseDepth(spec, temperature.value, timeH),
+    targetDepthMm,
     ...(temps.length === MODEL_IDS.length ? { modelRangeC: { min: Math.min(...temps), max: Math.max(...temps) } } : {}),
   });
 }

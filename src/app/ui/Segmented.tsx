@@ -7,11 +7,13 @@ export interface SegmentedProps {
   value: string;
   choices: readonly Choice[];
   onChange: (value: string) => void;
+  /** Lets the options wrap onto more rows (five statuses on a phone). */
+  wrap?: boolean;
 }
 
-export function Segmented({ name, legend, value, choices, onChange }: SegmentedProps) {
+export function Segmented({ name, legend, value, choices, onChange, wrap }: SegmentedProps) {
   return (
-    <fieldset class="segmented">
+    <fieldset class={wrap ? 'segmented segmented-wrap' : 'segmented'}>
       <legend>{legend}</legend>
       <div class="segmented-options">
         {choices.map((c) => (

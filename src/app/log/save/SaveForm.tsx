@@ -1,0 +1,69 @@
+/** The "save to log" form: what the calculator records, and the few fields only the person knows. */
+import { useEffect, useRef, useState } from 'preact/hooks';
+import { persisted, patch } from '../../ui/persist';
+import { ResultList } from '../../ui/ResultList';
+import { useScreenContext } from '../../ui/screenContext';
+import { askPersistenceOnce, writeToLog } from '../db';
+import { formatCalendarDate } from '../dates';
+import type { LogEntry } from '../entry';
+import { JobFields, fieldLabelKey } from '../JobFields';
+import { draftOf, EMPTY_JOB_FORM, JOB_FORM_FIELDS, placeJobsError, type JobForm, type PlacedErrors } from '../jobForm';
+import { planRows, predictionRows } from '../jobRows';
+import { shiftConfig } from '../shifts';
+import type { PanelProps } from './LogActions';
+import '../log.css';
+
+/** What is being typed, kept across reloads; operator and furnace stay for the next load. */
+const draft = persisted<JobForm>('log.draft', EMPTY_JOB_FORM);
+
+export default function SaveForm({ value: entry, onDone }: PanelProps<LogEntry>) {
+  const ctx = useScreenContext();
+  const { t, locale } = ctx;
+  const form = draft.value;
+  const [placed, setPlaced] = useState<PlacedErrors | undefined>(undefined);
+  const [busy, setBusy] = useState(false);
+  const title = useRef<HTMLHeadingElement>(null);
+  useEffect(() => title.current?.focus(), []);
+  if (!entry) return null;
+  const wording = { t, show: ctx.show, locale };
+
+  const save = async (event: Event) => {
+    event.preventDefault();
+    setBusy(true);
+    const result = await writeToLog((store) => store.add(draftOf(form, entry), { shiftConfig: shiftConfig.value }));
+    setBusy(false);
+    if (!result.ok) {
+      setPlaced(placeJobsError(t, result.error, (f) => ((JOB_FORM_FIELDS as readonly string[]).includes(f) ? t(fieldLabelKey(f)) : undefined)));
+      return;
+    }
+    void askPersistenceOnce();
+    draft.value = { ...EMPTY_JOB_FORM, operator: form.operator, furnace: form.furnace };
+    const job = result.value;
+    onDone({ jobId: job.id, message: t('app.log.save.saved', { shift: t(`jobs.shift.${job.shift}`), date: formatCalendarDate(job.shiftDate, locale) }) });
+  };
+
+  return (
+    <form class="card log-form" aria-labelledby="log-save-title" onSubmit={(e) => void save(e)} noValidate>
+      <h2 id="log-save-title" ref={title} tabIndex={-1}>{t('app.log.save.title')}</h2>
+      <ResultList rows={predictionRows(entry.prediction, entry.inputs.kind, wording).slice(0, 2)} label={t('app.log.save.recorded')} />
+      <details class="log-details">
+        <summary>{t('app.log.save.recorded')}</summary>
+        <ResultList rows={[...planRows(entry.steel, entry.inputs, wording), ...predictionRows(entry.prediction, entry.inputs.kind, wording).slice(2)]} label={t('app.log.save.recorded')} />
+      </details>
+      <JobFields idPrefix="log-save" form={form} onChange={(changes) => patch(draft, changes)} errors={placed?.fields ?? {}} askGradeName={entry.steel.gradeName === undefined} withStatus />
+      {placed && (
+        <p class="error-note" role="alert">
+          {placed.general}
+        </p>
+      )}
+      <div class="button-row">
+        <button type="submit" class="button button-primary" disabled={busy}>
+          {t('app.log.save.submit')}
+        </button>
+        <button type="button" class="button" onClick={() => onDone(undefined)}>
+          {t('app.log.cancel')}
+        </button>
+      </div>
+    </form>
+  );
+}

@@ -10,7 +10,7 @@ import { writeToLog } from './db';
 import { formatCalendarDate, formatMoment } from './dates';
 import { DamagedRecords } from './DamagedRecords';
 import { JobFields, fieldLabelKey } from './JobFields';
-import { changesOf, formOfJob, JOB_FORM_FIELDS, placeJobsError, type JobForm, type PlacedErrors } from './jobForm';
+import { changesOf, formOfJob, JOB_FORM_FIELDS, missingFields, placeJobsError, placeMissing, type JobForm, type PlacedErrors } from './jobForm';
 import { comparisonRows, labRows, planRows, predictionRows } from './jobRows';
 import { LabEditor } from './LabEditor';
 import { useLogRead } from './useLog';
@@ -69,11 +69,11 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
   };
 
   const loadRows: ResultRow[] = [
-    { key: 'part', label: t('app.log.fields.partNumber'), value: job.partNumber },
-    { key: 'furnace', label: t('app.log.fields.furnace'), value: job.furnace },
-    { key: 'operator', label: t('app.log.fields.operator'), value: job.operator },
-    { key: 'shift', label: t('app.log.detail.shift'), value: t(`jobs.shift.${job.shift}`), detail: formatCalendarDate(job.shiftDate, locale) },
-    { key: 'created', label: t('app.log.detail.created'), value: formatMoment(job.createdAt, locale), detail: job.updatedAt !== job.createdAt ? t('app.log.detail.updated', { when: formatMoment(job.updatedAt, locale) }) : undefined },
+    { key: 'part', label: t('app.log.fields.partNumber'), value: job.partNumber, text: true },
+    { key: 'furnace', label: t('app.log.fields.furnace'), value: job.furnace, text: true },
+    { key: 'operator', label: t('app.log.fields.operator'), value: job.operator, text: true },
+    { key: 'shift', label: t('app.log.detail.shift'), value: t(`jobs.shift.${job.shift}`), detail: formatCalendarDate(job.shiftDate, locale), text: true },
+    { key: 'created', label: t('app.log.detail.created'), value: formatMoment(job.createdAt, locale), text: true, detail: job.updatedAt !== job.createdAt ? t('app.log.detail.updated', { when: formatMoment(job.updatedAt, locale) }) : undefined },
   ];
 
   return (
@@ -120,7 +120,8 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
       <section class="card" aria-labelledby="job-plan">
         <h2 id="job-plan">{t('app.log.detail.plan')}</h2>
         {job.prediction ? <ResultList rows={predictionRows(job.prediction, job.inputs?.kind, wording)} label={t('app.log.detail.plan')} /> : <p class="note">{t('app.log.detail.noPrediction')}</p>}
-        <ResultList rows={planRows(job.steel, job.inputs, wording)} label={t('app.log.detail.plan')} />
+        <h3 class="card-subheading">{t('app.common.inputs')}</h3>
+        <ResultList rows={planRows(job.steel, job.inputs, wording)} label={t('app.common.inputs')} />
         <p class="note">{t('app.common.estimateNote')}</p>
       </section>
     </>
@@ -134,6 +135,11 @@ function JobEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void
   const [busy, setBusy] = useState(false);
   const save = async (event: Event) => {
     event.preventDefault();
+    const missing = missingFields(form, true);
+    if (missing.length > 0) {
+      setPlaced(placeMissing(t, missing));
+      return;
+    }
     setBusy(true);
     const result = await writeToLog((store) => store.update(job.id, changesOf(job, form)));
     setBusy(false);

@@ -50,7 +50,7 @@ export function SummaryView() {
         <ResultList
           label={t('app.log.summary.loadsHeading')}
           rows={[
-            { key: 'furnaces', label: t('app.log.summary.furnaces'), value: summary.furnaces.join(', ') || NO_VALUE },
+            { key: 'furnaces', label: t('app.log.summary.furnaces'), value: summary.furnaces.join(', ') || NO_VALUE, text: true },
             ...JOB_STATUSES.map((s) => ({ key: s, label: t(`jobs.status.${s}`), value: String(summary.byStatus[s]) })),
           ]}
         />
@@ -79,7 +79,7 @@ export function SummaryView() {
               label={t('app.log.summary.ecdHeading')}
               rows={[
                 { key: 'mean', label: t('app.log.summary.meanDifference'), value: show.depthChange(summary.meanDifferenceMm ?? Number.NaN), detail: t('app.log.summary.meanAbs', { pct: signedPercent(summary.meanAbsDifferencePct ?? Number.NaN, locale).replace(/^\+/u, '') }) },
-                ...(withBand > 0 ? [{ key: 'band', label: t('app.log.compare.band'), value: t('app.log.summary.inBand', { inside: inBand, count: withBand }) }] : []),
+                ...(withBand > 0 ? [{ key: 'band', label: t('app.log.compare.band'), value: t('app.log.summary.inBand', { inside: inBand, count: withBand }), text: true }] : []),
               ]}
             />
             <PairsTable pairs={summary.ecdPairs} />

@@ -6,7 +6,6 @@
 import type { TFunction } from 'i18next';
 import {
   describeJobsError,
-  hintMessageKey,
   problemMessageKey,
   TEXT_LIMITS,
   type Job,
@@ -84,9 +83,21 @@ export interface PlacedErrors {
   general: string;
 }
 
+/** Fields the log requires that are still empty (checked before the store, for a plain "required"). */
+export function missingFields(form: JobForm, askGradeName: boolean): JobFormField[] {
+  const required: JobFormField[] = ['partNumber', 'furnace', 'operator', ...(askGradeName ? (['gradeName'] as const) : [])];
+  return required.filter((field) => form[field].trim() === '');
+}
+
+/** The "required" errors for `missing`, in the shape of a placed store error. */
+export function placeMissing(t: TFunction, missing: readonly JobFormField[]): PlacedErrors {
+  return { fields: Object.fromEntries(missing.map((field) => [field, t('app.log.fields.required')])), general: t('jobs.errors.record.invalid') };
+}
+
 /**
  * The store's error worded for a form: each validation problem beside its field (its path's
- * first part, mapped through `fieldOf`), named by the field's label, with a format example.
+ * first part, mapped through `fieldOf`), named by the field's label (format examples are the
+ * fields' own hints).
  */
 export function placeJobsError(t: TFunction, error: JobsError, labelOf: (field: string) => string | undefined, fieldOf: (path: string) => string = jobFieldOf): PlacedErrors {
   const fields: Partial<Record<string, string>> = {};
@@ -95,8 +106,7 @@ export function placeJobsError(t: TFunction, error: JobsError, labelOf: (field: 
     const label = labelOf(field);
     if (!label || fields[field]) continue;
     const { key, params } = problemMessageKey(issue);
-    const hint = hintMessageKey(issue);
-    fields[field] = [t(key, { ...params, path: label }), ...(hint ? [t(hint)] : [])].join(' ');
+    fields[field] = t(key, { ...params, path: label });
   }
   const placedAll = (error.issues ?? []).every((issue) => labelOf(fieldOf(issue.path)) !== undefined);
   return { fields, general: placedAll && error.issues?.length ? t(`jobs.errors.${error.code}`, error.params ?? {}) : describeJobsError(t, error) };

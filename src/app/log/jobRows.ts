@@ -13,12 +13,14 @@ export interface Wording {
 }
 
 const row = (key: string, label: string, value: string, detail?: string): ResultRow => ({ key, label, value, ...(detail ? { detail } : {}) });
+/** A row whose value is words (may wrap), not a figure. */
+const wordRow = (key: string, label: string, value: string, detail?: string): ResultRow => ({ ...row(key, label, value, detail), text: true });
 
 /** The steel and what the calculator was asked. */
 export function planRows(steel: Pick<Steel, 'coreCarbonPct'> & { gradeName?: string | undefined }, inputs: JobInputs | undefined, { t, show }: Wording): ResultRow[] {
   const rows: ResultRow[] = [];
-  if (inputs) rows.push(row('kind', t('app.log.plan.kind'), t(`jobs.inputKind.${inputs.kind}`)));
-  if (steel.gradeName) rows.push(row('steel', t('app.steel.grade'), steel.gradeName));
+  if (inputs) rows.push(wordRow('kind', t('app.log.plan.kind'), t(`jobs.inputKind.${inputs.kind}`)));
+  if (steel.gradeName) rows.push(wordRow('steel', t('app.steel.grade'), steel.gradeName));
   rows.push(row('core', t('app.fields.coreCarbon'), show.carbon(steel.coreCarbonPct)));
   if (!inputs) return rows;
   if (inputs.kind === 'cycle') {
@@ -46,7 +48,7 @@ export function predictionRows(prediction: Prediction, kind: JobInputs['kind'] |
   if (kind === 'temperature' && prediction.temperatureC !== undefined) rows.push(row('temperature', t('app.depth.temperatureNeeded'), show.temperature(prediction.temperatureC)));
   rows.push(row('total', t('app.log.prediction.total'), show.depth(prediction.totalCaseDepthMm)));
   rows.push(row('surface', t('app.depth.surfaceCarbon'), show.carbon(prediction.surfaceCarbonPct)));
-  rows.push(row('model', t('app.settings.model'), t(`app.models.${prediction.model}`), t('app.log.prediction.appVersion', { version: prediction.appVersion })));
+  rows.push(wordRow('model', t('app.settings.model'), t(`app.models.${prediction.model}`), t('app.log.prediction.appVersion', { version: prediction.appVersion })));
   return rows;
 }
 
@@ -61,8 +63,8 @@ export function labRows(lab: LabResult, { t, show, locale }: Wording): ResultRow
   if (lab.surfaceHardness) rows.push(row('surfaceHardness', t('app.log.lab.surfaceHardness'), hardnessText(lab.surfaceHardness, locale)));
   if (lab.coreHardness) rows.push(row('coreHardness', t('app.log.lab.coreHardness'), hardnessText(lab.coreHardness, locale)));
   if (lab.surfaceCarbonPct !== undefined) rows.push(row('surfaceCarbon', t('app.log.lab.surfaceCarbon'), show.carbon(lab.surfaceCarbonPct)));
-  if (lab.by) rows.push(row('by', t('app.log.lab.by'), lab.by));
-  if (lab.measuredAt) rows.push(row('at', t('app.log.lab.at'), formatMoment(lab.measuredAt, locale)));
+  if (lab.by) rows.push(wordRow('by', t('app.log.lab.by'), lab.by));
+  if (lab.measuredAt) rows.push(wordRow('at', t('app.log.lab.at'), formatMoment(lab.measuredAt, locale)));
   return rows;
 }
 
@@ -77,6 +79,6 @@ export function comparisonRows(job: Job, { t, show, locale }: Wording): ResultRo
   const pair = ecdComparison(job);
   if (!pair) return [];
   const rows = [row('difference', t('app.log.compare.difference'), show.depthChange(pair.differenceMm), signedPercent(pair.differencePct, locale))];
-  if (pair.withinBand !== undefined) rows.push(row('band', t('app.log.compare.band'), pair.withinBand ? t('app.log.compare.inside') : t('app.log.compare.outside')));
+  if (pair.withinBand !== undefined) rows.push(wordRow('band', t('app.log.compare.band'), pair.withinBand ? t('app.log.compare.inside') : t('app.log.compare.outside')));
   return rows;
 }

@@ -9,12 +9,14 @@ export interface SegmentedProps {
   onChange: (value: string) => void;
   /** Lets the options wrap onto more rows (five statuses on a phone). */
   wrap?: boolean;
+  /** Legend for screen readers only (the field beside it names the choice). */
+  hideLegend?: boolean;
 }
 
-export function Segmented({ name, legend, value, choices, onChange, wrap }: SegmentedProps) {
+export function Segmented({ name, legend, value, choices, onChange, wrap, hideLegend }: SegmentedProps) {
   return (
     <fieldset class={wrap ? 'segmented segmented-wrap' : 'segmented'}>
-      <legend>{legend}</legend>
+      <legend class={hideLegend ? 'visually-hidden' : undefined}>{legend}</legend>
       <div class="segmented-options">
         {choices.map((c) => (
           <label key={c.value} class={c.value === value ? 'segment segment-on' : 'segment'}>

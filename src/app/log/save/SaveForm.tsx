@@ -7,7 +7,7 @@ import { askPersistenceOnce, writeToLog } from '../db';
 import { formatCalendarDate } from '../dates';
 import type { LogEntry } from '../entry';
 import { JobFields, fieldLabelKey } from '../JobFields';
-import { draftOf, EMPTY_JOB_FORM, JOB_FORM_FIELDS, placeJobsError, type JobForm, type PlacedErrors } from '../jobForm';
+import { draftOf, EMPTY_JOB_FORM, JOB_FORM_FIELDS, missingFields, placeJobsError, placeMissing, type JobForm, type PlacedErrors } from '../jobForm';
 import { planRows, predictionRows } from '../jobRows';
 import { shiftConfig } from '../shifts';
 import type { PanelProps } from './LogActions';
@@ -27,8 +27,14 @@ export default function SaveForm({ value: entry, onDone }: PanelProps<LogEntry>)
   if (!entry) return null;
   const wording = { t, show: ctx.show, locale };
 
+  const askGradeName = entry.steel.gradeName === undefined;
   const save = async (event: Event) => {
     event.preventDefault();
+    const missing = missingFields(form, askGradeName);
+    if (missing.length > 0) {
+      setPlaced(placeMissing(t, missing));
+      return;
+    }
     setBusy(true);
     const result = await writeToLog((store) => store.add(draftOf(form, entry), { shiftConfig: shiftConfig.value }));
     setBusy(false);
@@ -50,7 +56,7 @@ export default function SaveForm({ value: entry, onDone }: PanelProps<LogEntry>)
         <summary>{t('app.log.save.recorded')}</summary>
         <ResultList rows={[...planRows(entry.steel, entry.inputs, wording), ...predictionRows(entry.prediction, entry.inputs.kind, wording).slice(2)]} label={t('app.log.save.recorded')} />
       </details>
-      <JobFields idPrefix="log-save" form={form} onChange={(changes) => patch(draft, changes)} errors={placed?.fields ?? {}} askGradeName={entry.steel.gradeName === undefined} withStatus />
+      <JobFields idPrefix="log-save" form={form} onChange={(changes) => patch(draft, changes)} errors={placed?.fields ?? {}} askGradeName={askGradeName} withStatus />
       {placed && (
         <p class="error-note" role="alert">
           {placed.general}

@@ -10,7 +10,7 @@ import { depthLogEntry } from '../../src/app/depth/logEntry';
 import { computeDepth } from '../../src/app/depth/results';
 import { DEFAULT_DEPTH_FORM, type DepthForm } from '../../src/app/depth/state';
 import { formatCalendarDate } from '../../src/app/log/dates';
-import { currentShiftForm, isCurrentShift, toJobFilter } from '../../src/app/log/filter';
+import { currentShiftForm, filterForm, followCurrentShift, isCurrentShift, showCurrentShift, toJobFilter } from '../../src/app/log/filter';
 import { changesOf, draftOf, EMPTY_JOB_FORM, missingFields, placeJobsError } from '../../src/app/log/jobForm';
 import { labFieldOf, labFormOf, readLabForm } from '../../src/app/log/labForm';
 import { appendLine } from '../../src/app/log/save/NoteForm';
@@ -99,6 +99,16 @@ describe('the log filter', () => {
     expect(isCurrentShift(form, new Date(2025, 2, 5, 2, 30))).toBe(true);
     expect(isCurrentShift({ ...form, text: 'oil' }, new Date(2025, 2, 5, 2, 30))).toBe(false);
     expect(toJobFilter(form)).toEqual({ fromDate: '2025-03-04', toDate: '2025-03-04', shift: 'C' });
+  });
+
+  it('an untouched filter moves on with the shift; one the person changed stays', () => {
+    showCurrentShift(new Date(2025, 2, 5, 13, 50));
+    expect(filterForm.value).toMatchObject({ shift: 'A', fromDate: '2025-03-05' });
+    followCurrentShift(new Date(2025, 2, 5, 14, 10));
+    expect(filterForm.value).toMatchObject({ shift: 'B', fromDate: '2025-03-05' });
+    filterForm.value = { ...filterForm.value, furnace: 'F2' };
+    followCurrentShift(new Date(2025, 2, 5, 22, 5));
+    expect(filterForm.value).toMatchObject({ shift: 'B', furnace: 'F2' });
   });
 
   it('turns empty entries into no condition, "open" into the open statuses, and trims the words', () => {

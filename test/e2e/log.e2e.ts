@@ -74,10 +74,19 @@ describe('job log', () => {
     await page.click('button:has-text("Save lab result")');
     await page.waitForSelector('.log-saved:has-text("Lab result saved.")');
 
+    // An upset worked out on the recovery screen goes into the notes of this open job.
+    await page.click('a[href="#/recovery"]');
+    await page.click('#log-note button');
+    await page.waitForSelector('#log-note-job');
+    assert.equal(await page.inputValue('#log-note-job'), id);
+    await page.click('form.log-form button[type=submit]');
+    await page.waitForSelector('.log-saved:has-text("Added to the notes of WO-E2E-1")');
+
+    await page.goto(`${BASE_URL}#/log/job/${id}`);
     await page.reload();
     await page.waitForSelector('text=Job WO-E2E-1');
     const text = await mainText(page);
-    for (const expected of ['In furnace · KR-2231 · F2', 'Load 20 min late.', 'Measured ECD0.86 mm', 'Surface hardness61.0 HRC', 'Core hardness360 HV', 'Measured byQL', `Predicted ECD${predicted}`, `Casefront ${version}`]) {
+    for (const expected of ['In furnace · KR-2231 · F2', 'Load 20 min late.\nUpset: 0 h 40 min on the clock counted as', 'Measured ECD0.86 mm', 'Surface hardness61.0 HRC', 'Core hardness360 HV', 'Measured byQL', `Predicted ECD${predicted}`, `Casefront ${version}`]) {
       assert.ok(text.replace(/\u202f/gu, ' ').includes(expected.replace(/\u202f/gu, ' ')), `job page shows "${expected}"`);
     }
     assert.match(text, /Predicted − measured[−+]?\d\.\d\d\smm[−+]?\d+\.\d\s%Measured ECD in the predicted range(Inside|Outside)/u);
@@ -186,6 +195,44 @@ describe('job log', () => {
     await context.close();
   });
 
+  it('a full device: saving and importing are refused in plain words, nothing is stored, nothing typed is lost', async () => {
+    const { context, recorder } = await phoneContext(browser);
+    const page = await context.newPage();
+    await openScreen(page, 'depth');
+    await page.evaluate(() => navigator.serviceWorker.ready);
+    // Chromium's own quota override: the origin may store barely more than it already does.
+    // (Chromium applies it when the database is opened, so it is set before the log is first used.)
+    const cdp = await context.newCDPSession(page);
+    const origin = new URL(BASE_URL).origin;
+    const { usage } = await page.evaluate(() => navigator.storage.estimate());
+    await cdp.send('Storage.overrideQuotaForOrigin', { origin, quotaSize: (usage ?? 0) + 2000 });
+    const full = 'The device storage is full. Nothing was saved. Free some space or export and remove old jobs, then try again.';
+
+    await page.click('#log-save button');
+    await page.fill('#log-save-work-order', 'WO-FULL-1');
+    await page.fill('#log-save-part', 'KR-0907');
+    await page.fill('#log-save-furnace', 'F3');
+    await page.fill('#log-save-operator', 'LS');
+    await page.click('form.log-form button[type=submit]');
+    await page.waitForSelector('form.log-form .error-note');
+    assert.equal(await page.textContent('form.log-form .error-note'), full);
+    assert.equal(await page.inputValue('#log-save-work-order'), 'WO-FULL-1');
+    assert.deepEqual(await storedRecords(page), []);
+    assert.equal(await importFile(page, backupText(demoLog(200, 0))), full);
+    assert.deepEqual(await storedRecords(page), []);
+
+    // Space again: the same form saves, with what was typed.
+    await cdp.send('Storage.overrideQuotaForOrigin', { origin });
+    await page.goto(`${BASE_URL}#/depth`);
+    await page.click('#log-save button');
+    assert.equal(await page.inputValue('#log-save-work-order'), 'WO-FULL-1');
+    await page.click('form.log-form button[type=submit]');
+    await page.waitForSelector('.log-saved');
+    assert.deepEqual((await storedRecords(page)).map((r) => r.workOrder), ['WO-FULL-1']);
+    assert.deepEqual(recorder.problems, []);
+    await context.close();
+  });
+
   it('an imported note written as markup is shown as text: no script runs, no request is made', async () => {
     const { context, recorder } = await phoneContext(browser);
     const page = await context.newPage();
@@ -231,14 +278,18 @@ describe('job log', () => {
 });
 
 describe('job log views: accessibility, touch targets, screenshots', () => {
-  for (const [language, locale] of [
-    ['en', 'en-US'],
-    ['es', 'es-ES'],
+  for (const [language, locale, theme] of [
+    ['en', 'en-US', 'dark'],
+    ['es', 'es-ES', 'dark'],
+    ['en', 'en-US', 'light'],
+    ['en', 'en-US', 'contrast'],
   ] as const) {
-    it(`list, filter, job, lab form, summary, files and the save form in ${language}: axe, 48 px targets, no overflow, screenshots`, async () => {
+    const shots = theme === 'dark';
+    it(`list, filter, job, lab form, summary, files and the save form in ${language}, ${theme}: axe, 48 px targets, no overflow${shots ? ', screenshots' : ''}`, async () => {
       mkdirSync('test-results', { recursive: true });
       const { context, recorder } = await phoneContext(browser, locale);
       const page = await context.newPage();
+      await page.addInitScript((th) => localStorage.setItem('casefront.settings', JSON.stringify({ theme: th })), theme);
       await openScreen(page, 'log');
       const jobs = demoLog(60, 6, 3);
       await importFile(page, backupText(jobs));
@@ -251,8 +302,8 @@ describe('job log views: accessibility, touch targets, screenshots', () => {
         assert.deepEqual(await smallTargets(page, '.job-card, .log-tabs a, .back-link, .log-details > summary, .quick-pick'), [], `${language} ${name}: small targets`);
         const { violations } = await runAxe(page);
         lines.push(`${name}: ${violations.length}${violations.length ? ` [${violations.map((v) => `${v.id}/${v.impact}`).join(', ')}]` : ''}`);
-        assert.deepEqual(violations.filter((v) => v.impact === 'serious' || v.impact === 'critical'), [], `${language} ${name}`);
-        await page.screenshot({ path: `test-results/${language}-log-${name}.png`, fullPage });
+        assert.deepEqual(violations.filter((v) => v.impact === 'serious' || v.impact === 'critical'), [], `${language} ${theme} ${name}`);
+        if (shots) await page.screenshot({ path: `test-results/${language}-log-${name}.png`, fullPage });
       };
       await page.goto(`${BASE_URL}#/log`);
       await page.waitForSelector('a.job-card');
@@ -277,7 +328,7 @@ describe('job log views: accessibility, touch targets, screenshots', () => {
       // The form's fields in view, below the sticky answer.
       await page.evaluate(() => window.scrollTo(0, document.querySelector('#log-save-title')!.getBoundingClientRect().top + window.scrollY - 150));
       await check('save');
-      console.log(`axe ${language}: ${lines.join('; ')}`);
+      console.log(`axe ${language} ${theme}: ${lines.join('; ')}`);
       assert.deepEqual(foreignRequests(recorder), []);
       assert.deepEqual(recorder.problems, []);
       await context.close();

@@ -5,7 +5,7 @@ import { Segmented } from '../ui/Segmented';
 import { TextField } from '../ui/TextField';
 import { useScreenContext } from '../ui/screenContext';
 import { formatCalendarDate } from './dates';
-import { currentShiftForm, filterForm, isCurrentShift, type FilterForm, type StatusChoice } from './filter';
+import { filterForm, isCurrentShift, showCurrentShift, type FilterForm, type StatusChoice } from './filter';
 
 /** Furnaces and parts offered by the filter: those seen in the log this session and the demo plant's. */
 export function FilterPanel({ furnaces, parts }: { furnaces: readonly string[]; parts: readonly string[] }) {
@@ -34,7 +34,7 @@ export function FilterPanel({ furnaces, parts }: { furnaces: readonly string[]; 
           </div>
           <ChoiceField id="log-status" label={t('app.log.fields.status')} value={form.status} choices={statusChoices} onChange={(v) => set({ status: v as StatusChoice })} />
           <div class="button-row">
-            <button type="button" class="button" disabled={isCurrentShift(form)} onClick={() => (filterForm.value = currentShiftForm())}>
+            <button type="button" class="button" disabled={isCurrentShift(form)} onClick={() => showCurrentShift()}>
               {t('app.log.filter.currentShift')}
             </button>
             <button type="button" class="button" onClick={() => set({ fromDate: '', toDate: '', shift: '' })}>

@@ -4,6 +4,7 @@ import { useT } from '../../i18n/useT';
 import { hrefFor, subPath } from '../shell/route';
 import { persistence, refreshPersistence } from './db';
 import { DetailView } from './DetailView';
+import { followCurrentShift } from './filter';
 import { FilesView } from './FilesView';
 import { ListView } from './ListView';
 import { SummaryView } from './SummaryView';
@@ -23,7 +24,10 @@ export default function LogScreen() {
   const { view, jobId } = viewOf(subPath.value);
   const shownKey = `${view}/${jobId ?? ''}`;
   const previous = useRef(shownKey);
-  useEffect(() => void refreshPersistence(), []);
+  useEffect(() => {
+    followCurrentShift();
+    void refreshPersistence();
+  }, []);
   useEffect(() => {
     // Moving between the log's views: start at the top, focus on the new heading.
     if (previous.current === shownKey) return;

@@ -25,12 +25,35 @@ export function currentShiftForm(now: Date = new Date()): FilterForm {
   return { fromDate: shiftDate, toDate: shiftDate, shift, furnace: '', partNumber: '', status: '', text: '' };
 }
 
-export const filterForm = signal<FilterForm>(currentShiftForm());
+/** The current-shift filter last put in place, to tell whether the person has changed it since. */
+let placedShift = currentShiftForm();
+
+export const filterForm = signal<FilterForm>(placedShift);
+
+const sameForm = (a: FilterForm, b: FilterForm) => (Object.keys(a) as (keyof FilterForm)[]).every((key) => a[key] === b[key]);
+
+/**
+ * Called when the log is opened: a filter still showing the shift that was current when it was
+ * set moves on to the shift running now (an app left open over a shift change); a filter the
+ * person changed stays as it is.
+ */
+export function followCurrentShift(now: Date = new Date()): void {
+  const current = currentShiftForm(now);
+  if (sameForm(filterForm.value, placedShift) && !sameForm(current, placedShift)) {
+    placedShift = current;
+    filterForm.value = current;
+  }
+}
+
+/** Back to the shift running now (the "current shift" button). */
+export function showCurrentShift(now: Date = new Date()): void {
+  placedShift = currentShiftForm(now);
+  filterForm.value = placedShift;
+}
 
 /** Whether the filter shows exactly the shift running now and nothing narrower. */
 export function isCurrentShift(form: FilterForm, now: Date = new Date()): boolean {
-  const current = currentShiftForm(now);
-  return (Object.keys(current) as (keyof FilterForm)[]).every((key) => form[key] === current[key]);
+  return sameForm(form, currentShiftForm(now));
 }
 
 /** The store's filter for the form; empty entries filter nothing. */

@@ -9,8 +9,9 @@ import { hrefFor } from '../shell/route';
 import { writeToLog } from './db';
 import { formatCalendarDate, formatMoment } from './dates';
 import { DamagedRecords } from './DamagedRecords';
-import { JobFields, fieldLabelKey } from './JobFields';
-import { changesOf, formOfJob, JOB_FORM_FIELDS, missingFields, placeJobsError, placeMissing, type JobForm, type PlacedErrors } from './jobForm';
+import { FormActions } from './FormActions';
+import { JobFields, jobFieldLabel } from './JobFields';
+import { changesOf, formOfJob, missingFields, placeJobsError, placeMissing, type JobForm, type PlacedErrors } from './jobForm';
 import { comparisonRows, labRows, planRows, predictionRows } from './jobRows';
 import { LabEditor } from './LabEditor';
 import { useLogRead } from './useLog';
@@ -144,7 +145,7 @@ function JobEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void
     const result = await writeToLog((store) => store.update(job.id, changesOf(job, form)));
     setBusy(false);
     if (!result.ok) {
-      setPlaced(placeJobsError(t, result.error, (f) => ((JOB_FORM_FIELDS as readonly string[]).includes(f) ? t(fieldLabelKey(f)) : undefined)));
+      setPlaced(placeJobsError(t, result.error, jobFieldLabel(t)));
       return;
     }
     onDone(true);
@@ -153,19 +154,7 @@ function JobEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void
     <form class="card log-form" aria-labelledby="job-edit" onSubmit={(e) => void save(e)} noValidate>
       <h2 id="job-edit">{t('app.log.detail.editTitle')}</h2>
       <JobFields idPrefix="job-edit" form={form} onChange={(changes) => setForm({ ...form, ...changes })} errors={placed?.fields ?? {}} askGradeName withStatus={false} />
-      {placed && (
-        <p class="error-note" role="alert">
-          {placed.general}
-        </p>
-      )}
-      <div class="button-row">
-        <button type="submit" class="button button-primary" disabled={busy}>
-          {t('app.log.detail.saveEdit')}
-        </button>
-        <button type="button" class="button" onClick={() => onDone(false)}>
-          {t('app.log.cancel')}
-        </button>
-      </div>
+      <FormActions error={placed?.general} submitLabel={t('app.log.detail.saveEdit')} disabled={busy} onCancel={() => onDone(false)} />
     </form>
   );
 }

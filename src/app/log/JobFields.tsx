@@ -1,10 +1,11 @@
 /** The fields a person types for a job, shared by "save to log" and editing a job. */
+import type { TFunction } from 'i18next';
 import { JOB_STATUSES, type JobStatus } from '../../jobs';
 import { DEMO_FURNACES, DEMO_PART_NUMBERS } from '../../jobs/demo';
 import { useT } from '../../i18n/useT';
 import { Segmented } from '../ui/Segmented';
 import { QuickPicks, TextAreaField, TextField } from '../ui/TextField';
-import { TEXT_MAX, type JobForm } from './jobForm';
+import { JOB_FORM_FIELDS, TEXT_MAX, type JobForm } from './jobForm';
 
 export interface JobFieldsProps {
   idPrefix: string;
@@ -17,7 +18,8 @@ export interface JobFieldsProps {
   withStatus: boolean;
 }
 
-export const fieldLabelKey = (field: string) => `app.log.fields.${field}`;
+/** The label of a job form field by its name (undefined for names that are not form fields). */
+export const jobFieldLabel = (t: TFunction) => (field: string) => ((JOB_FORM_FIELDS as readonly string[]).includes(field) ? t(`app.log.fields.${field}`) : undefined);
 
 export function JobFields({ idPrefix, form, onChange, errors, askGradeName, withStatus }: JobFieldsProps) {
   const t = useT();

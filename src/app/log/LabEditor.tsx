@@ -7,6 +7,7 @@ import { Segmented } from '../ui/Segmented';
 import { TextField } from '../ui/TextField';
 import { useScreenContext } from '../ui/screenContext';
 import { writeToLog } from './db';
+import { FormActions } from './FormActions';
 import { placeJobsError, type PlacedErrors } from './jobForm';
 import { LAB_FIELDS, labFieldOf, labFormOf, readLabForm, type LabForm } from './labForm';
 
@@ -49,19 +50,7 @@ export function LabEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) 
       <NumberField id="lab-surface-carbon" label={t('app.log.lab.surfaceCarbon')} unitLabel={UNIT_SYMBOLS.pctC} value={form.surfaceCarbon} hint={t('app.log.lab.surfaceCarbonHint')} onInput={(v) => set({ surfaceCarbon: v })} error={fieldError('surfaceCarbon')} />
       <TextField id="lab-by" label={t('app.log.lab.by')} value={form.by} onInput={(v) => set({ by: v })} error={fieldError('by')} />
       <TextField id="lab-at" type="date" label={t('app.log.lab.at')} value={form.at} onInput={(v) => set({ at: v })} error={fieldError('at')} />
-      {placed && (
-        <p class="error-note" role="alert">
-          {placed.general}
-        </p>
-      )}
-      <div class="button-row">
-        <button type="submit" class="button button-primary" disabled={busy}>
-          {t('app.log.lab.save')}
-        </button>
-        <button type="button" class="button" onClick={() => onDone(false)}>
-          {t('app.log.cancel')}
-        </button>
-      </div>
+      <FormActions error={placed?.general} submitLabel={t('app.log.lab.save')} disabled={busy} onCancel={() => onDone(false)} />
     </form>
   );
 }

@@ -1,5 +1,6 @@
 /** Labelled free-text inputs (a step's name, a work order, a date, notes) with a hint and an error beside them. */
 import type { ComponentChildren } from 'preact';
+import { describedBy, FieldNotes } from './FieldNotes';
 
 export interface TextFieldProps {
   id: string;
@@ -16,27 +17,6 @@ export interface TextFieldProps {
   autoCapitalize?: 'characters' | 'sentences' | 'off';
   /** Shown under the box (quick picks). */
   children?: ComponentChildren;
-}
-
-function describedBy(id: string, hint: string | undefined, error: string | undefined): string | undefined {
-  return [hint ? `${id}-hint` : '', error ? `${id}-error` : ''].filter(Boolean).join(' ') || undefined;
-}
-
-function FieldNotes({ id, hint, error }: { id: string; hint: string | undefined; error: string | undefined }) {
-  return (
-    <>
-      {hint && (
-        <p id={`${id}-hint`} class="field-hint">
-          {hint}
-        </p>
-      )}
-      {error && (
-        <p id={`${id}-error`} class="field-error">
-          {error}
-        </p>
-      )}
-    </>
-  );
 }
 
 export function TextField({ id, label, value, onInput, placeholder, maxLength = 40, type = 'text', hint, error, autoCapitalize, children }: TextFieldProps) {

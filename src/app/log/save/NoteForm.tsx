@@ -5,6 +5,7 @@ import { ChoiceField } from '../../ui/ChoiceField';
 import { useScreenContext } from '../../ui/screenContext';
 import { writeToLog } from '../db';
 import { formatClockTime } from '../dates';
+import { FormActions } from '../FormActions';
 import { currentShift } from '../shifts';
 import { useLogRead } from '../useLog';
 import type { PanelProps } from './LogActions';
@@ -54,19 +55,7 @@ export default function NoteForm({ value: note, onDone }: PanelProps<string>) {
       {jobs.length > 0 && (
         <ChoiceField id="log-note-job" label={t('app.log.note.job')} value={jobId} choices={jobs.map((job) => ({ value: job.id, label: label(job) }))} onChange={setChosen} hint={t('app.log.note.jobHint')} />
       )}
-      {error && (
-        <p class="error-note" role="alert">
-          {error}
-        </p>
-      )}
-      <div class="button-row">
-        <button type="submit" class="button button-primary" disabled={busy || !jobId}>
-          {t('app.log.note.submit')}
-        </button>
-        <button type="button" class="button" onClick={() => onDone(undefined)}>
-          {t('app.log.cancel')}
-        </button>
-      </div>
+      <FormActions error={error} submitLabel={t('app.log.note.submit')} disabled={busy || !jobId} onCancel={() => onDone(undefined)} />
     </form>
   );
 }

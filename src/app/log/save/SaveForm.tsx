@@ -6,8 +6,9 @@ import { useScreenContext } from '../../ui/screenContext';
 import { askPersistenceOnce, writeToLog } from '../db';
 import { formatCalendarDate } from '../dates';
 import type { LogEntry } from '../entry';
-import { JobFields, fieldLabelKey } from '../JobFields';
-import { draftOf, EMPTY_JOB_FORM, JOB_FORM_FIELDS, missingFields, placeJobsError, placeMissing, type JobForm, type PlacedErrors } from '../jobForm';
+import { FormActions } from '../FormActions';
+import { JobFields, jobFieldLabel } from '../JobFields';
+import { draftOf, EMPTY_JOB_FORM, missingFields, placeJobsError, placeMissing, type JobForm, type PlacedErrors } from '../jobForm';
 import { planRows, predictionRows } from '../jobRows';
 import { shiftConfig } from '../shifts';
 import type { PanelProps } from './LogActions';
@@ -39,7 +40,7 @@ export default function SaveForm({ value: entry, onDone }: PanelProps<LogEntry>)
     const result = await writeToLog((store) => store.add(draftOf(form, entry), { shiftConfig: shiftConfig.value }));
     setBusy(false);
     if (!result.ok) {
-      setPlaced(placeJobsError(t, result.error, (f) => ((JOB_FORM_FIELDS as readonly string[]).includes(f) ? t(fieldLabelKey(f)) : undefined)));
+      setPlaced(placeJobsError(t, result.error, jobFieldLabel(t)));
       return;
     }
     void askPersistenceOnce();
@@ -57,19 +58,7 @@ export default function SaveForm({ value: entry, onDone }: PanelProps<LogEntry>)
         <ResultList rows={[...planRows(entry.steel, entry.inputs, wording), ...predictionRows(entry.prediction, entry.inputs.kind, wording).slice(2)]} label={t('app.log.save.recorded')} />
       </details>
       <JobFields idPrefix="log-save" form={form} onChange={(changes) => patch(draft, changes)} errors={placed?.fields ?? {}} askGradeName={askGradeName} withStatus />
-      {placed && (
-        <p class="error-note" role="alert">
-          {placed.general}
-        </p>
-      )}
-      <div class="button-row">
-        <button type="submit" class="button button-primary" disabled={busy}>
-          {t('app.log.save.submit')}
-        </button>
-        <button type="button" class="button" onClick={() => onDone(undefined)}>
-          {t('app.log.cancel')}
-        </button>
-      </div>
+      <FormActions error={placed?.general} submitLabel={t('app.log.save.submit')} disabled={busy} onCancel={() => onDone(undefined)} />
     </form>
   );
 }

@@ -35,6 +35,9 @@ const PARTS: readonly DemoPart[] = [
   { partNumber: 'KR-0907', gradeId: 'sae-1018', targetEcdMm: 0.32, carbonPotentialPct: 0.85, temperaturesC: [900, 910], furnaces: ['F3', 'F1'] },
 ];
 
+/** Part numbers of the demo plant, offered as quick picks when a job is logged. */
+export const DEMO_PART_NUMBERS: readonly string[] = PARTS.map((p) => p.partNumber);
+
 const OPERATORS = ['MK', 'JR', 'AT', 'LS', 'PW', 'DN', 'EH', 'RB', 'CO'];
 const LAB_INITIALS = ['QL', 'HV', 'TS'];
 const NOTES = [
@@ -50,6 +53,8 @@ const NOTES = [
 ];
 /** Invented furnace offsets of the lab depth against the prediction. */
 const FURNACE_BIAS: Record<string, number> = { F1: 0.02, F2: -0.04, F3: 0.0 };
+/** The demo plant's furnaces, offered as quick picks when a job is logged. */
+export const DEMO_FURNACES: readonly string[] = Object.keys(FURNACE_BIAS);
 
 function uuidFrom(random: () => number): string {
   const hex = Array.from({ length: 32 }, () => Math.floor(random() * 16).toString(16));

@@ -25,3 +25,15 @@ export async function requestPersistentStorage(
     return 'denied';
   }
 }
+
+/** Whether the log is already kept for good, without asking (nothing is shown to the user). */
+export async function persistentStorageStatus(
+  storage: StorageManagerLike | undefined = storageManager(),
+): Promise<PersistOutcome> {
+  if (!storage || typeof storage.persisted !== 'function') return 'unsupported';
+  try {
+    return (await storage.persisted()) ? 'granted' : 'denied';
+  } catch {
+    return 'denied';
+  }
+}

@@ -6,15 +6,9 @@
 import * as v from 'valibot';
 import { failWith, succeed, type JobsResult } from './result';
 import { issuesOf } from './issues';
+import { SHIFT_IDS, DEFAULT_SHIFT_CONFIG, type ShiftConfig, type ShiftId } from './shiftNames';
 
-export const SHIFT_IDS = ['A', 'B', 'C'] as const;
-export type ShiftId = (typeof SHIFT_IDS)[number];
-
-/** Local start time of each shift, "HH:MM" (what a time input gives). */
-export type ShiftConfig = Record<ShiftId, string>;
-
-/** The demo plant's shifts: A 06–14, B 14–22, C 22–06. */
-export const DEFAULT_SHIFT_CONFIG: ShiftConfig = { A: '06:00', B: '14:00', C: '22:00' };
+export { SHIFT_IDS, DEFAULT_SHIFT_CONFIG, type ShiftConfig, type ShiftId } from './shiftNames';
 
 const ClockTime = v.pipe(v.string(), v.regex(/^(?:[01]\d|2[0-3]):[0-5]\d$/u));
 

@@ -11,7 +11,7 @@ import { JOBS_STORE, LATEST_DB_VERSION, runMigrations } from './migrations';
 import { applyChanges, nextTimestamp, tidyEntry } from './normalize';
 import { compareNewestFirst, matchesFilter, planQuery, searchWords, type JobFilter } from './query';
 import { failWith, succeed, type FieldIssue, type JobsResult } from './result';
-import { JobChangesSchema, JobDraftSchema, JobSchema, type Job } from './schema';
+import { JobChangesSchema, JobDraftSchema, JobSchema, type Job, type JobChanges } from './schema';
 import { DEFAULT_SHIFT_CONFIG, shiftOf, type ShiftConfig } from './shift';
 import { rootCause, storageFailure } from './storageErrors';
 
@@ -212,11 +212,38 @@ export class JobStore {
   async update(id: string, changes: unknown, options: { now?: Date } = {}): Promise<JobsResult<Job>> {
     const parsed = v.safeParse(JobChangesSchema, tidyEntry(changes));
     if (!parsed.success) return failWith('record.invalid', undefined, issuesOf(parsed.issues));
+    return this.edit(id, () => succeed(parsed.output), options.now);
+  }
+
+  /**
+   * Edits a job from its stored state at the moment of writing (read and written in one
+   * transaction): a note appended from two tabs at once keeps both lines.
+   */
+  async modify(id: string, change: (current: Job) => unknown, options: { now?: Date } = {}): Promise<JobsResult<Job>> {
+    return this.edit(
+      id,
+      (raw) => {
+        const current = validated(raw);
+        if (!current.ok) return failWith('record.invalid', { id }, current.corrupt.issues);
+        const parsed = v.safeParse(JobChangesSchema, tidyEntry(change(current.job)));
+        return parsed.success ? succeed(parsed.output) : failWith('record.invalid', undefined, issuesOf(parsed.issues));
+      },
+      options.now,
+    );
+  }
+
+  private async edit(
+    id: string,
+    changesFor: (raw: Record<string, unknown>) => JobsResult<JobChanges>,
+    now: Date = new Date(),
+  ): Promise<JobsResult<Job>> {
     return this.write(async (store) => {
       const raw: unknown = await store.get(id);
       if (typeof raw !== 'object' || raw === null) return failWith('record.notFound', { id });
-      const merged = applyChanges(raw as Record<string, unknown>, parsed.output);
-      merged.updatedAt = nextTimestamp(options.now ?? new Date(), (raw as Record<string, unknown>).updatedAt);
+      const changes = changesFor(raw as Record<string, unknown>);
+      if (!changes.ok) return changes;
+      const merged = applyChanges(raw as Record<string, unknown>, changes.value);
+      merged.updatedAt = nextTimestamp(now, (raw as Record<string, unknown>).updatedAt);
       const job = v.safeParse(JobSchema, merged);
       if (!job.success) return failWith('record.invalid', undefined, issuesOf(job.issues));
       await store.put(job.output);

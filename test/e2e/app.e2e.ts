@@ -6,7 +6,7 @@ import type { Browser, Page } from 'playwright-core';
 import { formatQuantity } from '../../src/app/ui/format';
 import { caseDepth } from '../../src/physics';
 import { runAxe } from './axe';
-import { BASE_URL, cspViolations, foreignRequests, launch, openScreen, phoneContext, SCREENS, type Recorder } from './browser';
+import { BASE_URL, cspViolations, foreignRequests, launch, openScreen, phoneContext, SCREENS, smallTargets, type Recorder } from './browser';
 
 let browser: Browser;
 before(async () => {
@@ -152,13 +152,7 @@ describe('keyboard and touch', () => {
     const { page, close } = await freshPage();
     for (const id of SCREENS) {
       await openScreen(page, id);
-      const small = await page.evaluate(() =>
-        [...document.querySelectorAll<HTMLElement>('button, .bottom-nav a, .safety-link, .field-box, label.segment, label.check')]
-          .filter((el) => el.offsetParent !== null || getComputedStyle(el).position === 'fixed')
-          .map((el) => ({ what: el.className || el.tagName, rect: el.getBoundingClientRect() }))
-          .filter(({ rect }) => rect.height < 47.5 || rect.width < 47.5)
-          .map(({ what, rect }) => `${what} ${Math.round(rect.width)}×${Math.round(rect.height)}`),
-      );
+      const small = await smallTargets(page);
       assert.deepEqual(small, [], `${id}: small targets`);
     }
     await close();

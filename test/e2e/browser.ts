@@ -65,4 +65,22 @@ export function foreignRequests(recorder: Recorder): string[] {
   return recorder.requests.filter((url) => !url.startsWith('data:') && !url.startsWith('blob:') && new URL(url).origin !== origin);
 }
 
-export const SCREENS = ['depth', 'cycle', 'recovery', 'convert', 'settings', 'safety'] as const;
+export const SCREENS = ['depth', 'cycle', 'recovery', 'log', 'convert', 'settings', 'safety'] as const;
+
+/** Waits until the service worker has cached the app (the header says "ready offline"). */
+export async function waitUntilOfflineReady(page: Page): Promise<void> {
+  await page.evaluate(() => navigator.serviceWorker.ready);
+  await page.waitForSelector('[data-offline-state="ready"]');
+}
+
+/** Visible touch targets smaller than 48 px (the header, the bottom bar, inputs, buttons, links drawn as buttons). */
+export async function smallTargets(page: Page, extraSelectors = ''): Promise<string[]> {
+  return page.evaluate((extra) => {
+    const selector = `button, .bottom-nav a, .safety-link, .field-box, label.segment, label.check${extra ? `, ${extra}` : ''}`;
+    return [...document.querySelectorAll<HTMLElement>(selector)]
+      .filter((el) => el.offsetParent !== null || getComputedStyle(el).position === 'fixed')
+      .map((el) => ({ what: el.className || el.tagName, rect: el.getBoundingClientRect() }))
+      .filter(({ rect }) => rect.height < 47.5 || rect.width < 47.5)
+      .map(({ what, rect }) => `${what} ${Math.round(rect.width)}×${Math.round(rect.height)}`);
+  }, extraSelectors);
+}

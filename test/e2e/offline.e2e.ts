@@ -6,8 +6,8 @@
 import assert from 'node:assert/strict';
 import { readFileSync, writeFileSync } from 'node:fs';
 import { after, before, describe, it } from 'node:test';
-import type { Browser, Page } from 'playwright-core';
-import { foreignRequests, launch, openScreen, phoneContext } from './browser';
+import type { Browser } from 'playwright-core';
+import { foreignRequests, launch, openScreen, phoneContext, waitUntilOfflineReady } from './browser';
 
 let browser: Browser;
 before(async () => {
@@ -16,11 +16,6 @@ before(async () => {
 after(async () => {
   await browser?.close();
 });
-
-async function waitUntilOfflineReady(page: Page): Promise<void> {
-  await page.evaluate(() => navigator.serviceWorker.ready);
-  await page.waitForSelector('[data-offline-state="ready"]');
-}
 
 describe('offline', () => {
   it('after the first visit the app works in airplane mode, every screen opens, and the inputs are still there', async () => {
@@ -37,7 +32,7 @@ describe('offline', () => {
     assert.equal(await page.inputValue('#depth-time'), '7,5');
     assert.equal(await page.textContent('.answer-value'), online);
     assert.equal(await page.getAttribute('.offline-status', 'data-offline-state'), 'offline');
-    for (const id of ['cycle', 'recovery', 'convert', 'settings', 'safety']) {
+    for (const id of ['cycle', 'recovery', 'log', 'convert', 'settings', 'safety']) {
       await page.click(id === 'safety' ? '.safety-link' : `a[href="#/${id}"]`);
       await page.waitForFunction((screen) => location.hash === `#/${screen}` && !document.querySelector('.screen-loading'), id);
     }

@@ -12,6 +12,8 @@ import { useScreenContext } from '../ui/screenContext';
 import { SteelFields } from '../ui/SteelFields';
 import { ProfileChart } from './ProfileChart';
 import { ProfileTable } from './ProfileTable';
+import { LogSaveButton } from '../log/save/LogActions';
+import { cycleLogEntry } from './logEntry';
 import { cycleOutcome } from './results';
 import { addStep, cycleForm, duplicateStep, MAX_STEPS, moveStep, removeStep, SHAPES, updateStep } from './state';
 import { StepCard } from './StepCard';
@@ -26,6 +28,7 @@ export default function CycleScreen() {
   const errors = outcome.errors;
   const result = outcome.result;
   const view = useMemo(() => (result ? cycleView(result, t, show, units) : undefined), [result, t, units]);
+  const logEntry = useMemo(() => (result ? cycleLogEntry(result) : undefined), [result]);
   const canAdd = form.steps.length < MAX_STEPS;
   const set = (next: typeof form) => (cycleForm.value = next);
   const modelChoices = [
@@ -87,6 +90,7 @@ export default function CycleScreen() {
         {view && <ProfileChart data={view.chart} label={t('app.cycle.chartLabel')} theme={theme.value} />}
         {result && <ProfileTable profile={result.simulation.profile} ctx={ctx} />}
       </ResultsCard>
+      <LogSaveButton entry={logEntry} />
     </div>
   );
 }

@@ -8,6 +8,8 @@ import { ThresholdField } from '../ui/ThresholdField';
 import { Segmented } from '../ui/Segmented';
 import { SteelFields } from '../ui/SteelFields';
 import { useScreenContext } from '../ui/screenContext';
+import { LogSaveButton } from '../log/save/LogActions';
+import { depthLogEntry } from './logEntry';
 import { depthOutcome, solveFor, usesField } from './results';
 import { depthView } from './rows';
 import { CARBON_SOURCES, depthForm, SOLVE_FOR } from './state';
@@ -20,6 +22,7 @@ export default function DepthScreen() {
   const outcome = depthOutcome.value;
   const errors = outcome.errors;
   const view = outcome.result ? depthView(outcome.result, t, show, defaults.value.totalCaseMarginPct) : undefined;
+  const logEntry = outcome.result ? depthLogEntry(outcome.result, form.steel.grade) : undefined;
   const modeChoices = SOLVE_FOR.map((m) => ({ value: m, label: t(`app.depth.solveFor.${m}`) }));
   const carbonChoices = CARBON_SOURCES.map((c) => ({ value: c, label: t(`app.depth.carbonSource.${c}`) }));
   const carbonLabel = form.carbonSource === 'surface' ? t('app.fields.surfaceCarbon') : t('app.fields.carbonPotential');
@@ -93,6 +96,7 @@ export default function DepthScreen() {
       </section>
 
       <ResultsCard id="depth-results" error={word(outcome.general)} view={view} />
+      <LogSaveButton entry={logEntry} />
     </div>
   );
 }

@@ -10,6 +10,7 @@ import {
   timeForCaseDepth,
   totalCaseDepthForMarginMm,
   type CaseDepthResult,
+  type Composition,
   type DiffusivityModelId,
   type TemperatureResult,
   type TimeResult,
@@ -21,10 +22,28 @@ import { readComposition } from '../ui/steel';
 import { PHYSICS_UNITS } from '../ui/units';
 import { depthForm, type DepthForm, type SolveFor } from './state';
 
+/** The request sent to physics (°C, h, mm, %C): what a saved job records as its inputs. */
+export interface DepthRequest {
+  temperatureC?: number;
+  timeH?: number;
+  targetDepthMm?: number;
+  carbonPotentialPct?: number;
+  surfaceCarbonPct?: number;
+  coreCarbonPct: number;
+  thresholdCarbonPct: number;
+  model: DiffusivityModelId;
+  composition: Composition;
+}
+
+interface Solved {
+  totalCaseMm: number | undefined;
+  request: DepthRequest;
+}
+
 export type DepthResult =
-  | { solveFor: 'depth'; figures: CaseDepthResult; totalCaseMm: number | undefined }
-  | { solveFor: 'time'; figures: TimeResult; totalCaseMm: number | undefined }
-  | { solveFor: 'temperature'; figures: TemperatureResult; totalCaseMm: number | undefined };
+  | ({ solveFor: 'depth'; figures: CaseDepthResult } & Solved)
+  | ({ solveFor: 'time'; figures: TimeResult } & Solved)
+  | ({ solveFor: 'temperature'; figures: TemperatureResult } & Solved);
 
 export interface DepthDefaults {
   model: DiffusivityModelId;
@@ -74,9 +93,9 @@ export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<
   const corePct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
   const thresholdPct = read.value(readOptionalField(form.threshold, 'threshold'));
   const composition = read.value(readComposition(form.steel));
-  if (read.failed) return { errors: read.errors };
+  if (read.failed || corePct === undefined || carbonPct === undefined || composition === undefined) return { errors: read.errors };
 
-  const request = {
+  const request: DepthRequest = {
     ...(temperatureC === undefined ? {} : { temperatureC }),
     ...(timeH === undefined ? {} : { timeH }),
     ...(targetDepthMm === undefined ? {} : { targetDepthMm }),
@@ -91,7 +110,7 @@ export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<
   if (!calculated.ok) return placeError(calculated.error, FIELD_MAP, FORM_FIELDS);
   const total = totalCaseDepthForMarginMm(calculated.value, settings.totalCaseMarginPct);
   const totalCaseMm = total.ok ? total.value : undefined;
-  return { errors: {}, result: { solveFor: mode, figures: calculated.value, totalCaseMm } as DepthResult };
+  return { errors: {}, result: { solveFor: mode, figures: calculated.value, totalCaseMm, request } as DepthResult };
 }
 
 export const depthOutcome = computed(() =>

@@ -6,6 +6,8 @@ import { ErrorNote } from '../ui/Notices';
 import { patch } from '../ui/persist';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { useScreenContext } from '../ui/screenContext';
+import { LogNoteButton } from '../log/save/LogActions';
+import { recoveryNote } from './logNote';
 import { recoveryOutcome } from './results';
 import { addReading, MAX_READINGS, recoveryForm, removeReading, setReading } from './state';
 import './screen.css';
@@ -23,6 +25,7 @@ export default function RecoveryScreen() {
         { key: 'lost', label: r.lostTimeH >= 0 ? t('app.recovery.lostTime') : t('app.recovery.gainedTime'), value: show.time(Math.abs(r.lostTimeH)), detail: show.hoursMinutes(Math.abs(r.lostTimeH)) },
       ]
     : [];
+  const note = r ? recoveryNote(r, t, show) : undefined;
   const generalReadingsError = word(outcome.general ?? outcome.errors.history);
   return (
     <div class="screen recovery">
@@ -73,6 +76,7 @@ export default function RecoveryScreen() {
         {!r && !generalReadingsError && <p class="note">{t('app.common.fixInputs')}</p>}
         <p class="note">{t('app.recovery.method')}</p>
       </section>
+      <LogNoteButton note={note} />
     </div>
   );
 }

@@ -1,5 +1,6 @@
-/** Settings: units (system and per-quantity overrides), language, model, defaults, theme. */
+/** Settings: units (system and per-quantity overrides), language, model, defaults, shift hours, theme. */
 import { LANGUAGES, type Language } from '../../i18n/i18n';
+import { parseShiftConfig, SHIFT_IDS } from '../../jobs/shift';
 import { language } from '../../i18n/useT';
 import { MODEL_IDS } from '../../physics';
 import { ChoiceField } from '../ui/ChoiceField';
@@ -7,6 +8,7 @@ import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
 import { Segmented } from '../ui/Segmented';
+import { TextField } from '../ui/TextField';
 import { useScreenContext } from '../ui/screenContext';
 import { UNIT_CHOICES, UNIT_SYSTEMS, type DisplayQuantity, type UnitSystem } from '../ui/units';
 import { readBeta, readMargin, readThreshold, setLanguage, settings, THEMES } from './state';
@@ -26,6 +28,7 @@ export default function SettingsScreen() {
     { value: 'auto', label: t('app.settings.followSystem') },
     ...UNIT_CHOICES[q].map((u) => ({ value: u, label: UNIT_SYMBOLS[u] ?? u })),
   ];
+  const shiftsValid = parseShiftConfig(s.shiftStarts).ok;
   const setOverride = (q: DisplayQuantity, value: string) => patch(settings, { overrides: { ...s.overrides, [q]: value } });
 
   return (
@@ -94,6 +97,27 @@ export default function SettingsScreen() {
             hint={t('app.settings.betaHint')}
           />
         </div>
+      </section>
+      <section class="card" aria-labelledby="settings-shifts">
+        <h2 id="settings-shifts">{t('app.settings.shiftsHeading')}</h2>
+        <div class="field-grid shift-grid">
+          {SHIFT_IDS.map((shift) => (
+            <TextField
+              key={shift}
+              id={`settings-shift-${shift}`}
+              type="time"
+              label={t('app.settings.shiftStart', { shift: t(`jobs.shift.${shift}`) })}
+              value={s.shiftStarts[shift]}
+              onInput={(v) => patch(settings, { shiftStarts: { ...s.shiftStarts, [shift]: v } })}
+            />
+          ))}
+        </div>
+        {!shiftsValid && (
+          <p class="field-error" role="alert">
+            {t('jobs.errors.shiftConfig.invalid')}
+          </p>
+        )}
+        <p class="note">{t('app.settings.shiftsHint')}</p>
       </section>
       <section class="card" aria-labelledby="settings-theme">
         <h2 id="settings-theme">{t('app.settings.themeHeading')}</h2>

@@ -1,6 +1,6 @@
 /**
  * App-wide settings: units, language, diffusivity model, defaults for β and the
- * depth thresholds, theme. Persisted; the language and theme are applied to the page here.
+ * depth thresholds, theme, shift start times. Persisted; the language and theme are applied to the page here.
  */
 import { computed, effect } from '@preact/signals';
 import type { Language } from '../../i18n/i18n';
@@ -13,6 +13,7 @@ import {
   type DiffusivityModelId,
   type Result,
 } from '../../physics';
+import { DEFAULT_SHIFT_CONFIG, type ShiftConfig } from '../../jobs/shiftNames';
 import { DEFAULT_BETA_M_PER_S } from '../../physics/cycle/recipe';
 import { checkBeta, checkCarbonPct } from '../../physics/validate';
 import { field, readField, type FieldText } from '../ui/fieldText';
@@ -34,6 +35,8 @@ export interface Settings {
   ecdThreshold: FieldText;
   totalCaseMargin: FieldText;
   theme: string;
+  /** Local start time of each shift, "HH:MM" (checked where it is used: the job log). */
+  shiftStarts: ShiftConfig;
 }
 
 export const DEFAULT_SETTINGS: Settings = {
@@ -45,6 +48,7 @@ export const DEFAULT_SETTINGS: Settings = {
   ecdThreshold: field(String(DEFAULT_ECD_THRESHOLD_PCT)),
   totalCaseMargin: field(String(TOTAL_CASE_MARGIN_PCT)),
   theme: 'dark',
+  shiftStarts: DEFAULT_SHIFT_CONFIG,
 };
 
 export const settings = persisted<Settings>('settings', DEFAULT_SETTINGS);

@@ -11,6 +11,7 @@ type Loader = () => Promise<{ default: ComponentType }>;
 export const LOADERS: Record<Exclude<ScreenId, 'depth'>, Loader> = {
   cycle: () => import('../cycle/Screen'),
   recovery: () => import('../recovery/Screen'),
+  log: () => import('../log/Screen'),
   convert: () => import('../convert/Screen'),
   settings: () => import('../settings/Screen'),
   safety: () => import('../safety/Screen'),
@@ -19,4 +20,4 @@ export const LOADERS: Record<Exclude<ScreenId, 'depth'>, Loader> = {
 export const FIRST_SCREEN = DepthScreen;
 
 /** Screens in the bottom navigation, in order (safety sits in the header). */
-export const NAV_SCREENS = ['depth', 'cycle', 'recovery', 'convert', 'settings'] as const satisfies readonly ScreenId[];
+export const NAV_SCREENS = ['depth', 'cycle', 'recovery', 'log', 'convert', 'settings'] as const satisfies readonly ScreenId[];

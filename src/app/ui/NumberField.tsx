@@ -1,6 +1,7 @@
 /** A labelled numeric input: accepts a decimal comma, shows its unit and its error in words beside it. */
 import { language } from '../../i18n/useT';
 import { displayText, type FieldText } from './fieldText';
+import { describedBy, FieldNotes } from './FieldNotes';
 import { UNIT_SYMBOLS } from './format';
 
 export interface NumberFieldProps {
@@ -22,7 +23,6 @@ export interface NumberFieldProps {
 export function NumberField({ id, label, value, unit = '', unitLabel, onInput, error, hint, placeholder, compact, hideLabel }: NumberFieldProps) {
   const shown = displayText(value, unit, language.value);
   const symbol = unitLabel ?? (unit ? (UNIT_SYMBOLS[unit] ?? unit) : '');
-  const described = [hint ? `${id}-hint` : '', error ? `${id}-error` : ''].filter(Boolean).join(' ');
   return (
     <div class={compact ? 'field field-compact' : 'field'}>
       <label for={id} class={hideLabel ? 'visually-hidden' : undefined}>
@@ -39,7 +39,7 @@ export function NumberField({ id, label, value, unit = '', unitLabel, onInput, e
           value={shown}
           placeholder={placeholder}
           aria-invalid={error ? 'true' : undefined}
-          aria-describedby={described || undefined}
+          aria-describedby={describedBy(id, hint, error)}
           onInput={(e) => onInput({ text: e.currentTarget.value, unit })}
         />
         {symbol && (
@@ -48,16 +48,7 @@ export function NumberField({ id, label, value, unit = '', unitLabel, onInput, e
           </span>
         )}
       </div>
-      {hint && (
-        <p id={`${id}-hint`} class="field-hint">
-          {hint}
-        </p>
-      )}
-      {error && (
-        <p id={`${id}-error`} class="field-error">
-          {error}
-        </p>
-      )}
+      <FieldNotes id={id} hint={hint} error={error} />
     </div>
   );
 }

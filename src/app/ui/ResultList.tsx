@@ -5,13 +5,15 @@ export interface ResultRow {
   value: string;
   detail?: string | undefined;
   main?: boolean;
+  /** A word rather than a figure (a grade, a calculation): may wrap onto more lines. */
+  text?: boolean;
 }
 
 export function ResultList({ rows, label }: { rows: readonly ResultRow[]; label: string }) {
   return (
     <dl class="results" aria-label={label}>
       {rows.map((row) => (
-        <div key={row.key} class={row.main ? 'result result-main' : 'result'} data-result={row.key}>
+        <div key={row.key} class={['result', row.main ? 'result-main' : '', row.text ? 'result-text' : ''].filter(Boolean).join(' ')} data-result={row.key}>
           <dt>{row.label}</dt>
           <dd>
             <span class="result-value">{row.value}</span>

@@ -7,12 +7,16 @@ export interface SegmentedProps {
   value: string;
   choices: readonly Choice[];
   onChange: (value: string) => void;
+  /** Lets the options wrap onto more rows (five statuses on a phone). */
+  wrap?: boolean;
+  /** Legend for screen readers only (the field beside it names the choice). */
+  hideLegend?: boolean;
 }
 
-export function Segmented({ name, legend, value, choices, onChange }: SegmentedProps) {
+export function Segmented({ name, legend, value, choices, onChange, wrap, hideLegend }: SegmentedProps) {
   return (
-    <fieldset class="segmented">
-      <legend>{legend}</legend>
+    <fieldset class={wrap ? 'segmented segmented-wrap' : 'segmented'}>
+      <legend class={hideLegend ? 'visually-hidden' : undefined}>{legend}</legend>
       <div class="segmented-options">
         {choices.map((c) => (
           <label key={c.value} class={c.value === value ? 'segment segment-on' : 'segment'}>

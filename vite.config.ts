@@ -51,7 +51,11 @@ export default defineConfig({
       // The stdlib math packages are pure CommonJS functions: let unused ones (e.g. erfcx,
       // needed only by the mass-transfer solution) drop out of the first screen's bundle; JSON
       // (the locales) is data, so the app's lazy locale loading is not undone by a static import.
-      treeshake: { moduleSideEffects: (id: string) => !id.includes('/node_modules/@stdlib/') && !id.endsWith('.json') },
+      // Physics is pure by design, so modules of it that a screen does not use drop out as well.
+      treeshake: {
+        moduleSideEffects: (id: string) =>
+          !id.includes('/node_modules/@stdlib/') && !id.endsWith('.json') && !id.includes('/src/physics/'),
+      },
     },
   },
   preview: { port: 4173, strictPort: true },

@@ -11,4 +11,5 @@ export * from './persist';
 export * from './backup';
 export * from './csv';
 export * from './transfer';
+export * from './calibration';
 export { INDEX, JOBS_STORE, LATEST_DB_VERSION } from './migrations';

@@ -18,4 +18,5 @@ export * from './planner/planner';
 export * from './cycle/recipe';
 export * from './cycle/readRecipe';
 export * from './cycle/simulate';
+export * from './cycle/band';
 export * from './totalCase';

@@ -11,6 +11,11 @@ import { rampProgress, RAMP_SAMPLES, stepEndTimes } from './timeSteps';
 /** D(T, C) in m²/s for T in K and carbon in wt%: a published model, or a stand-in in tests. */
 export type DiffusivityFunction = (tempK: number, carbonPct: number) => number;
 
+/** A model's D times a furnace calibration factor (the model itself when the factor is 1). */
+export function scaledDiffusivity(diffusivity: DiffusivityFunction, factor: number): DiffusivityFunction {
+  return factor === 1 ? diffusivity : (tempK, carbonPct) => factor * diffusivity(tempK, carbonPct);
+}
+
 /** Below the eutectoid there is no austenite: no diffusion, no carbon uptake (Fe–Fe₃C diagram). */
 export const EUTECTOID_TEMP_K = celsiusToKelvin(EUTECTOID_TEMP_C);
 

@@ -83,11 +83,11 @@ function allFinite(result: SimulationResult): boolean {
   );
 }
 
-/** `simulate`: request → validated recipe → simulation, or a typed error. */
-export function simulateCycle(request: unknown): Result<SimulationResult> {
+/** `simulate`: request → validated recipe → simulation, or a typed error. `options` may replace D (a calibrated furnace). */
+export function simulateCycle(request: unknown, options: Omit<CycleOptions, 'resolution'> = {}): Result<SimulationResult> {
   const recipe = readRecipe(request);
   if (!recipe.ok) return recipe;
-  const result = runCycle(recipe.value);
+  const result = runCycle(recipe.value, 1, options);
   return allFinite(result) ? ok(result) : fail('solve.noConvergence', 'steps');
 }
 

@@ -7,7 +7,7 @@ import { DIFFUSIVITY_MODELS } from '../diffusivity';
 import { depthToCarbonM } from '../cycle/profile';
 import type { Recipe, RecipeStep, SimulationResult } from '../cycle/recipe';
 import { runCycle, solveRecipe } from '../cycle/simulate';
-import type { DiffusivityFunction } from '../cycle/plan';
+import { scaledDiffusivity, type DiffusivityFunction } from '../cycle/plan';
 import type { PlanRequest, PotentialStep } from './readPlanRequest';
 
 /** Effective case depth and final surface carbon of one simulated plan. */
@@ -30,9 +30,7 @@ export class PlanModel {
   private readonly diffusivity: DiffusivityFunction;
 
   constructor(readonly request: PlanRequest) {
-    const model = DIFFUSIVITY_MODELS[request.model].diffusivity;
-    const factor = request.diffusivityFactor;
-    this.diffusivity = factor === 1 ? model : (tempK, carbonPct) => factor * model(tempK, carbonPct);
+    this.diffusivity = scaledDiffusivity(DIFFUSIVITY_MODELS[request.model].diffusivity, request.diffusivityFactor);
   }
 
   /** Hours at hardening temperature (0 without a hardening step). */

@@ -1,0 +1,102 @@
+/**
+ * Furnace calibration from the job log. Each job of one furnace that has a lab ECD and the
+ * inputs it was planned with becomes a calibration sample whose prediction re-runs that
+ * calculation with D × k: a closed-form request with `diffusivityFactor: k` at the time and
+ * temperature it ran, or the recorded cycle with the model's D scaled by k. Physics fits k.
+ * k is relative to one diffusivity model: `model` re-runs every job with it (the app passes the
+ * model it calculates with), otherwise each job keeps its own.
+ */
+import { fitDiffusivityFactor, type CalibrationFit, type CalibrationSample } from '../physics/calibration';
+import { depthFigures, readCaseSpec } from '../physics/caseDepth';
+import { scaledDiffusivity } from '../physics/cycle/plan';
+import { readRecipe } from '../physics/cycle/readRecipe';
+import { runCycle } from '../physics/cycle/simulate';
+import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, type DiffusivityModelId } from '../physics/diffusivity';
+import type { Result } from '../physics/result';
+import { physicsRequestOf } from './inputs';
+import { compareNewestFirst } from './query';
+import type { Job } from './schema';
+
+/** Most recent lab results used per furnace (our choice: a furnace drifts, so old traverses weigh less than new ones). */
+export const DEFAULT_CALIBRATION_JOBS = 30;
+
+export interface CalibrationOptions {
+  /** Re-run every job with this model (default: each job's own). */
+  model?: DiffusivityModelId;
+  /** Use only the newest this many usable jobs (default DEFAULT_CALIBRATION_JOBS). */
+  maxJobs?: number;
+}
+
+/** Why a measured job of the furnace could not be used. */
+export type SkipReason = 'noInputs' | 'noRunConditions' | 'invalidInputs';
+
+export interface SkippedJob {
+  id: string;
+  reason: SkipReason;
+}
+
+export interface SampleSet {
+  samples: CalibrationSample[];
+  skipped: SkippedJob[];
+}
+
+export interface FurnaceCalibration {
+  furnace: string;
+  fit: Result<CalibrationFit>;
+  skipped: SkippedJob[];
+}
+
+type Predictor = (factor: number) => number;
+
+const measuredEcdMm = (job: Job): number | undefined => {
+  const ecd = job.lab?.ecdMm;
+  return ecd !== undefined && ecd > 0 ? ecd : undefined;
+};
+
+/** A closed-form job: re-run at the temperature and time it ran (for a time or temperature request: the answer). */
+function closedFormPredictor(job: Job, model: DiffusivityModelId | undefined): Predictor | SkipReason {
+  const inputs = job.inputs!;
+  if (inputs.kind === 'cycle') return 'invalidInputs';
+  const temperatureC = inputs.kind === 'temperature' ? job.prediction?.temperatureC : inputs.temperatureC;
+  const timeH = inputs.kind === 'time' ? job.prediction?.timeH : inputs.timeH;
+  if (temperatureC === undefined || timeH === undefined) return 'noRunConditions';
+  const spec = readCaseSpec({ ...physicsRequestOf(inputs), ...(model ? { model } : {}), diffusivityFactor: 1 });
+  if (!spec.ok) return 'invalidInputs';
+  return (factor) => depthFigures({ ...spec.value, diffusivityFactor: factor }, temperatureC, timeH).effectiveCaseDepthMm;
+}
+
+/** A cycle job: the recorded recipe through the simulator with D × k. */
+function cyclePredictor(job: Job, model: DiffusivityModelId | undefined): Predictor | SkipReason {
+  const inputs = job.inputs!;
+  if (inputs.kind !== 'cycle') return 'invalidInputs';
+  const recipe = readRecipe(model ? { ...inputs.recipe, model } : inputs.recipe);
+  if (!recipe.ok) return 'invalidInputs';
+  const diffusivity = DIFFUSIVITY_MODELS[recipe.value.model ?? DEFAULT_MODEL].diffusivity;
+  return (factor) => runCycle(recipe.value, 1, { diffusivity: scaledDiffusivity(diffusivity, factor) }).effectiveCaseDepthMm;
+}
+
+/** The calibration samples of one furnace (newest first), and the measured jobs that could not be used. */
+export function calibrationSamples(jobs: readonly Job[], furnace: string, options: CalibrationOptions = {}): SampleSet {
+  const maxJobs = options.maxJobs ?? DEFAULT_CALIBRATION_JOBS;
+  const measured = jobs.filter((job) => job.furnace === furnace && measuredEcdMm(job) !== undefined).sort(compareNewestFirst);
+  const samples: CalibrationSample[] = [];
+  const skipped: SkippedJob[] = [];
+  for (const job of measured) {
+    if (samples.length >= maxJobs) break;
+    const predictor = !job.inputs ? 'noInputs' : job.inputs.kind === 'cycle' ? cyclePredictor(job, options.model) : closedFormPredictor(job, options.model);
+    if (typeof predictor === 'string') skipped.push({ id: job.id, reason: predictor });
+    else samples.push({ id: job.id, measuredEcdMm: measuredEcdMm(job)!, predictEcdMm: predictor });
+  }
+  return { samples, skipped };
+}
+
+/** Fits the diffusivity factor of one furnace from its lab results. */
+export function calibrateFurnace(jobs: readonly Job[], furnace: string, options: CalibrationOptions = {}): FurnaceCalibration {
+  const { samples, skipped } = calibrationSamples(jobs, furnace, options);
+  return { furnace, fit: fitDiffusivityFactor(samples), skipped };
+}
+
+/** Furnaces with at least one lab ECD, sorted. */
+export function furnacesWithLabDepth(jobs: readonly Job[]): string[] {
+  return [...new Set(jobs.filter((job) => measuredEcdMm(job) !== undefined).map((job) => job.furnace))].sort();
+}

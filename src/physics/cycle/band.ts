@@ -2,7 +2,7 @@
  * The likely range of a cycle's effective case depth: `depthBand` over the cycle simulator.
  * Each case runs the whole recipe with one diffusivity model, every step temperature moved by
  * the furnace tolerance, and (at the β corners) every carburizing step's β set to one end of
- * the β range. Identical cases are simulated once (23 runs with a β range, 7 without).
+ * the β range. Identical cases are simulated once (23 runs with a β range, 9 without).
  */
 import { DIFFUSIVITY_MODELS, DEFAULT_MODEL } from '../diffusivity';
 import { DEFAULT_ECD_THRESHOLD_PCT } from '../steel';

@@ -5,7 +5,7 @@ import { DEFAULT_DEPTH_FORM, type DepthForm } from '../../src/app/depth/state';
 import { field } from '../../src/app/ui/fieldText';
 import { caseDepth, timeForCaseDepth, TOTAL_CASE_MARGIN_PCT } from '../../src/physics';
 
-const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: TOTAL_CASE_MARGIN_PCT };
+const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: TOTAL_CASE_MARGIN_PCT, temperatureToleranceC: 8 };
 const form = (changes: Partial<DepthForm>): DepthForm => ({ ...DEFAULT_DEPTH_FORM, ...changes });
 const physicsRequest = {
   temperatureC: 925,
@@ -15,6 +15,7 @@ const physicsRequest = {
   thresholdCarbonPct: 0.4,
   model: 'agren',
   composition: { Si: 0.25, Mn: 0.8, Cr: 0.5, Ni: 0.55, Mo: 0.2 },
+  temperatureToleranceC: 8,
 };
 
 describe('computeDepth', () => {

@@ -29,7 +29,7 @@ import * as v from 'valibot';
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 
-const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: TOTAL_CASE_MARGIN_PCT };
+const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: TOTAL_CASE_MARGIN_PCT, temperatureToleranceC: 8 };
 const typed = { ...EMPTY_JOB_FORM, workOrder: 'WO-024117', partNumber: 'KR-2231', furnace: 'F1', operator: 'MK' };
 const t = createI18n('en').t;
 

@@ -65,7 +65,7 @@ export function foreignRequests(recorder: Recorder): string[] {
   return recorder.requests.filter((url) => !url.startsWith('data:') && !url.startsWith('blob:') && new URL(url).origin !== origin);
 }
 
-export const SCREENS = ['depth', 'cycle', 'recovery', 'log', 'convert', 'settings', 'safety'] as const;
+export const SCREENS = ['depth', 'cycle', 'plan', 'recovery', 'log', 'convert', 'settings', 'safety'] as const;
 
 /** Waits until the service worker has cached the app (the header says "ready offline"). */
 export async function waitUntilOfflineReady(page: Page): Promise<void> {

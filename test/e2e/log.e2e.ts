@@ -299,7 +299,7 @@ describe('job log views: accessibility, touch targets, screenshots', () => {
         assert.equal(await page.evaluate(() => document.documentElement.lang), language);
         const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
         assert.ok(overflow <= 0, `${language} ${name}: ${overflow} px wider than the screen`);
-        assert.deepEqual(await smallTargets(page, '.job-card, .log-tabs a, .back-link, .log-details > summary, .quick-pick'), [], `${language} ${name}: small targets`);
+        assert.deepEqual(await smallTargets(page, '.job-card, .view-tabs a, .back-link, .disclosure > summary, .quick-pick'), [], `${language} ${name}: small targets`);
         const { violations } = await runAxe(page);
         lines.push(`${name}: ${violations.length}${violations.length ? ` [${violations.map((v) => `${v.id}/${v.impact}`).join(', ')}]` : ''}`);
         assert.deepEqual(violations.filter((v) => v.impact === 'serious' || v.impact === 'critical'), [], `${language} ${theme} ${name}`);
@@ -308,7 +308,7 @@ describe('job log views: accessibility, touch targets, screenshots', () => {
       await page.goto(`${BASE_URL}#/log`);
       await page.waitForSelector('a.job-card');
       await check('list');
-      await page.click('.log-details > summary');
+      await page.click('.disclosure > summary');
       await check('filter', true);
       await page.goto(`${BASE_URL}#/log/job/${measured.id}`);
       await page.waitForSelector('.job-notes');

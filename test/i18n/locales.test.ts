@@ -7,6 +7,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { LANGUAGES, RESOURCES } from '../../src/i18n/i18n';
 import { ERROR_CODES, WARNING_CODES } from '../../src/physics/result';
+import { UNIT_WARNINGS } from '../../src/app/ui/warningText';
 
 function leafKeys(node: unknown, prefix = ''): string[] {
   if (typeof node !== 'object' || node === null) return [prefix];
@@ -61,7 +62,10 @@ describe('locales', () => {
     // The templates used in the app and the values they take (from the code's own lists).
     const templates: [string, readonly string[]][] = [
       ['app.nav.', ['depth', 'cycle', 'recovery', 'log', 'convert', 'settings', 'safety']],
-      ['app.log.tabs.', ['list', 'summary', 'files']],
+      ['app.log.tabs.', ['list', 'summary', 'calibration', 'files']],
+      ['app.cycleTabs.', ['cycle', 'plan']],
+      ['app.plan.steps.', ['boost', 'diffuse', 'hardening']],
+      ['app.unitWarnings.', Object.keys(UNIT_WARNINGS)],
       ['app.log.fields.', ['workOrder', 'partNumber', 'furnace', 'operator', 'status', 'notes', 'gradeName']],
       ['app.log.lab.', ['ecd', 'surfaceHardness', 'coreHardness', 'surfaceCarbon', 'by', 'at']],
       ['app.models.', ['agren', 'tibbetts', 'wells-batz-mehl']],
@@ -77,6 +81,10 @@ describe('locales', () => {
     ];
     const missing = templates.flatMap(([prefix, values]) => values.map((v) => prefix + v)).filter((key) => !english.has(key));
     expect(missing).toEqual([]);
+    // A unit-aware warning takes exactly the placeholders of the physics message it replaces.
+    const placeholders = (key: string) => [...String(lookup(RESOURCES.en, key)).matchAll(/{{\s*(\w+)/g)].map((m) => m[1]).sort().join();
+    const mismatched = Object.keys(UNIT_WARNINGS).filter((code) => placeholders(`app.unitWarnings.${code}`) !== placeholders(`warnings.${code}`));
+    expect(mismatched).toEqual([]);
     const notes = ['atmosphere', 'purge', 'quench', 'estimates'].flatMap((n) => [`app.safety.notes.${n}.title`, `app.safety.notes.${n}.text`]);
     expect(notes.filter((key) => !english.has(key))).toEqual([]);
   });

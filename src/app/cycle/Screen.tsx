@@ -1,21 +1,25 @@
-/** Cycle editor: steps (add, remove, reorder, duplicate), part shape, steel, model, threshold; results, chart and table. */
+/** Cycle editor: steps (add, remove, reorder, duplicate), part shape, steel, model, threshold, furnace; results, range, chart and table. */
 import { useMemo } from 'preact/hooks';
-import { MODEL_IDS } from '../../physics';
+import { isModelId, MODEL_IDS } from '../../physics';
+import { factorOf } from '../settings/calibration';
 import { defaults, model, theme } from '../settings/state';
+import { Answer } from '../ui/Answer';
 import { ChoiceField } from '../ui/ChoiceField';
-import { NO_VALUE } from '../ui/format';
-import { NumberField } from '../ui/NumberField';
+import { CycleBand } from '../ui/CycleBand';
+import { FurnaceField } from '../ui/FurnaceField';
 import { patch } from '../ui/persist';
 import { ResultsCard } from '../ui/ResultsCard';
 import { ThresholdField } from '../ui/ThresholdField';
 import { useScreenContext } from '../ui/screenContext';
+import { ShapeFields } from '../ui/ShapeFields';
 import { SteelFields } from '../ui/SteelFields';
+import { CycleTabs } from './CycleTabs';
 import { ProfileChart } from './ProfileChart';
 import { ProfileTable } from './ProfileTable';
 import { LogSaveButton } from '../log/save/LogActions';
 import { cycleLogEntry } from './logEntry';
 import { cycleOutcome } from './results';
-import { addStep, cycleForm, duplicateStep, MAX_STEPS, moveStep, removeStep, SHAPES, updateStep } from './state';
+import { addStep, cycleForm, duplicateStep, MAX_STEPS, moveStep, removeStep, updateStep } from './state';
 import { StepCard } from './StepCard';
 import { cycleView } from './view';
 import './screen.css';
@@ -37,11 +41,9 @@ export default function CycleScreen() {
   ];
   return (
     <div class="screen cycle">
+      <CycleTabs current="cycle" />
       <h1 tabIndex={-1}>{t('app.cycle.title')}</h1>
-      <div class="answer" aria-live="polite">
-        <span class="answer-label">{view ? t('app.depth.answerDepth') : t('app.common.noResult')}</span>
-        <span class="answer-value">{view ? view.answer : NO_VALUE}</span>
-      </div>
+      <Answer label={view ? t('app.depth.answerDepth') : t('app.common.noResult')} value={view?.answer} note={view?.answerNote} />
 
       <section aria-labelledby="cycle-steps">
         <h2 id="cycle-steps">{t('app.cycle.stepsHeading')}</h2>
@@ -70,23 +72,15 @@ export default function CycleScreen() {
 
       <section class="card" aria-labelledby="cycle-part">
         <h2 id="cycle-part">{t('app.cycle.partHeading')}</h2>
-        <ChoiceField id="cycle-shape" label={t('app.cycle.shape')} value={form.shape} choices={SHAPES.map((s) => ({ value: s, label: t(`app.cycle.shapes.${s}`) }))} onChange={(v) => patch(cycleForm, { shape: v })} />
-        {(form.shape === 'plate' || form.shape === 'bar') && (
-          <NumberField
-            id="cycle-size"
-            label={form.shape === 'plate' ? t('app.cycle.thickness') : t('app.cycle.diameter')}
-            unit={units.depth}
-            value={form.size}
-            onInput={(v) => patch(cycleForm, { size: v })}
-            error={word(errors.size)}
-          />
-        )}
+        <ShapeFields idPrefix="cycle" shape={form.shape} size={form.size} onChange={(changes) => patch(cycleForm, changes)} error={word(errors.size)} ctx={ctx} />
         <SteelFields idPrefix="cycle-steel" steel={form.steel} onChange={(s) => patch(cycleForm, { steel: s })} errors={errors} word={word} />
         <ChoiceField id="cycle-model" label={t('app.settings.model')} value={form.model} choices={modelChoices} onChange={(v) => patch(cycleForm, { model: v })} />
         <ThresholdField id="cycle-threshold" value={form.threshold} onInput={(v) => patch(cycleForm, { threshold: v })} error={word(errors.threshold)} show={show} />
+        <FurnaceField id="cycle-furnace" model={isModelId(form.model) ? form.model : model.value} ctx={ctx} />
       </section>
 
       <ResultsCard id="cycle-results" error={word(outcome.general)} view={view}>
+        <CycleBand id="cycle-band" recipe={result?.recipe} diffusivityFactor={result ? factorOf(result.calibration) : 1} ctx={ctx} />
         {view && <ProfileChart data={view.chart} label={t('app.cycle.chartLabel')} theme={theme.value} />}
         {result && <ProfileTable profile={result.simulation.profile} ctx={ctx} />}
       </ResultsCard>

@@ -1,12 +1,23 @@
-/** The simulated cycle as a job-log entry: the whole recipe and what it predicted (no band: the solver gives none). */
+/**
+ * A simulated or planned cycle as a job-log entry: the whole recipe and what it predicted (no band:
+ * the likely range of a cycle is worked out on demand only), and the furnace chosen for it.
+ */
 import { DEFAULT_MODEL, findGrade } from '../../physics';
+import type { Recipe, SimulationResult } from '../../physics/cycle/recipe';
 import type { LogEntry } from '../log/entry';
+import type { CalibrationState } from '../settings/calibration';
 import { APP_VERSION } from '../version';
-import type { CycleResult } from './results';
 
-export function cycleLogEntry({ recipe, simulation }: CycleResult): LogEntry {
+export interface CycleOutcomeForLog {
+  recipe: Recipe;
+  simulation: Pick<SimulationResult, 'effectiveCaseDepthMm' | 'totalCaseDepthMm' | 'surfaceCarbonPct'>;
+  calibration: CalibrationState;
+}
+
+export function cycleLogEntry({ recipe, simulation, calibration }: CycleOutcomeForLog): LogEntry {
   const grade = findGrade(recipe.steel.grade ?? '');
   return {
+    ...(calibration.kind === 'none' ? {} : { furnace: calibration.furnace }),
     steel: {
       ...(grade ? { gradeId: grade.id, gradeName: grade.name } : {}),
       coreCarbonPct: recipe.steel.coreCarbonPct,

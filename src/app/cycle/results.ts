@@ -1,10 +1,12 @@
 /** Reads the cycle form into a Recipe (°C, h, mm, m/s) and runs it through the simulate adapter. */
 import { computed } from '@preact/signals';
-import { ALLOY_ELEMENTS, fail, isModelId, type DiffusivityModelId } from '../../physics';
-import type { PartShape, Recipe, RecipeStep, SimulationResult } from '../../physics/cycle/recipe';
+import { ALLOY_ELEMENTS, isModelId, type DiffusivityModelId } from '../../physics';
+import type { Recipe, RecipeStep, SimulationResult } from '../../physics/cycle/recipe';
+import { calibrations, calibrationState, chosenFurnace, factorOf, type CalibrationState } from '../settings/calibration';
 import { BETA_INPUT_SCALE, defaults, model } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
 import { FieldReader, placeError, type Outcome } from '../ui/outcome';
+import { readShape } from '../ui/shape';
 import { readComposition } from '../ui/steel';
 import { PHYSICS_UNITS } from '../ui/units';
 import { simulate } from './simulate';
@@ -14,11 +16,14 @@ export interface CycleDefaults {
   model: DiffusivityModelId;
   ecdThresholdPct: number;
   betaMPerS: number;
+  /** The chosen furnace's calibration for a model (none: uncalibrated). */
+  calibrationFor?: (model: DiffusivityModelId) => CalibrationState;
 }
 
 export interface CycleResult {
   recipe: Recipe;
   simulation: SimulationResult;
+  calibration: CalibrationState;
 }
 
 /** Recipe field names → form field names where they differ. */
@@ -38,17 +43,6 @@ export function formFields(form: CycleForm): ReadonlySet<string> {
     ...ALLOY_ELEMENTS.map((e) => `composition.${e}`),
     ...form.steps.flatMap((_, i) => ['durationH', 'startTempC', 'endTempC', 'carbonPotentialPct', 'betaMPerS'].map((f) => `steps.${i}.${f}`)),
   ]);
-}
-
-function readShape(form: CycleForm, read: FieldReader): PartShape | undefined {
-  if (form.shape !== 'plate' && form.shape !== 'bar') return { kind: 'semi-infinite' };
-  const sizeMm = read.value(readField(form.size, 'size', PHYSICS_UNITS.depth));
-  if (sizeMm === undefined) return undefined;
-  if (!(sizeMm > 0)) {
-    read.value(fail('depth.notPositive', 'size', { value: sizeMm }));
-    return undefined;
-  }
-  return form.shape === 'plate' ? { kind: 'plate', thicknessMm: sizeMm } : { kind: 'bar', diameterMm: sizeMm };
 }
 
 export function buildRecipe(form: CycleForm, settings: CycleDefaults): { recipe?: Recipe; errors: FieldReader['errors'] } {
@@ -72,7 +66,7 @@ export function buildRecipe(form: CycleForm, settings: CycleDefaults): { recipe?
   const coreCarbonPct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
   const composition = read.value(readComposition(form.steel));
   const threshold = read.value(readOptionalField(form.threshold, 'threshold'));
-  const shape = readShape(form, read);
+  const shape = readShape(form.shape, form.size, read);
   if (read.failed || coreCarbonPct === undefined || !shape) return { errors: read.errors };
   return {
     errors: {},
@@ -89,11 +83,22 @@ export function buildRecipe(form: CycleForm, settings: CycleDefaults): { recipe?
 export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<CycleResult> {
   const { recipe, errors } = buildRecipe(form, settings);
   if (!recipe) return { errors };
-  const simulation = simulate(recipe);
+  const calibration: CalibrationState = settings.calibrationFor?.(recipe.model ?? settings.model) ?? { kind: 'none' };
+  const simulation = simulate(recipe, factorOf(calibration));
   if (!simulation.ok) return placeError(simulation.error, FIELD_MAP, formFields(form));
-  return { errors: {}, result: { recipe, simulation: simulation.value } };
+  return { errors: {}, result: { recipe, simulation: simulation.value, calibration } };
 }
 
-export const cycleOutcome = computed(() =>
-  computeCycle(cycleForm.value, { model: model.value, ecdThresholdPct: defaults.value.ecdThresholdPct, betaMPerS: defaults.value.betaMPerS }),
-);
+/** The settings a cycle calculation reads, with the chosen furnace's calibration (shared by the planner). */
+export const cycleDefaults = computed<CycleDefaults>(() => {
+  const list = calibrations.value;
+  const furnace = chosenFurnace.value;
+  return {
+    model: model.value,
+    ecdThresholdPct: defaults.value.ecdThresholdPct,
+    betaMPerS: defaults.value.betaMPerS,
+    calibrationFor: (m) => calibrationState(list, furnace, m),
+  };
+});
+
+export const cycleOutcome = computed(() => computeCycle(cycleForm.value, cycleDefaults.value));

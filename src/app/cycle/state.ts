@@ -17,9 +17,6 @@ export interface StepForm {
   beta: FieldText;
 }
 
-export const SHAPES = ['semi-infinite', 'plate', 'bar'] as const;
-export type ShapeKind = (typeof SHAPES)[number];
-
 export interface CycleForm {
   steps: StepForm[];
   shape: string;

@@ -1,7 +1,10 @@
 /** Case depth: from time and temperature, or the time or the temperature for a target depth. */
-import { NO_VALUE, UNIT_SYMBOLS } from '../ui/format';
+import { Answer } from '../ui/Answer';
+import { BandMethod } from '../ui/BandMethod';
+import { UNIT_SYMBOLS } from '../ui/format';
+import { FurnaceField } from '../ui/FurnaceField';
 import { patch } from '../ui/persist';
-import { defaults } from '../settings/state';
+import { defaults, model } from '../settings/state';
 import { NumberField } from '../ui/NumberField';
 import { ResultsCard } from '../ui/ResultsCard';
 import { ThresholdField } from '../ui/ThresholdField';
@@ -16,7 +19,8 @@ import { CARBON_SOURCES, depthForm, SOLVE_FOR } from './state';
 import './screen.css';
 
 export default function DepthScreen() {
-  const { t, units, show, word } = useScreenContext();
+  const ctx = useScreenContext();
+  const { t, units, show, word } = ctx;
   const form = depthForm.value;
   const mode = solveFor(form);
   const outcome = depthOutcome.value;
@@ -30,13 +34,7 @@ export default function DepthScreen() {
   return (
     <div class="screen depth">
       <h1 tabIndex={-1}>{t('app.depth.title')}</h1>
-      <div class="answer" aria-live="polite">
-        <span class="answer-label">{view ? view.answerLabel : t('app.common.noResult')}</span>
-        <span class="answer-value" data-answer>
-          {view ? view.answer : NO_VALUE}
-        </span>
-        {view?.answerDetail && <span class="answer-detail">{view.answerDetail}</span>}
-      </div>
+      <Answer label={view ? view.answerLabel : t('app.common.noResult')} value={view?.answer} detail={view?.answerDetail} note={view?.answerNote} />
 
       <Segmented name="depth-mode" legend={t('app.depth.solveForLegend')} value={mode} choices={modeChoices} onChange={(v) => patch(depthForm, { solveFor: v })} />
 
@@ -93,9 +91,12 @@ export default function DepthScreen() {
           <ThresholdField id="depth-threshold" value={form.threshold} onInput={(v) => patch(depthForm, { threshold: v })} error={word(errors.threshold)} show={show} />
         </div>
         <SteelFields idPrefix="depth-steel" steel={form.steel} onChange={(s) => patch(depthForm, { steel: s })} errors={errors} word={word} />
+        <FurnaceField id="depth-furnace" model={model.value} ctx={ctx} />
       </section>
 
-      <ResultsCard id="depth-results" error={word(outcome.general)} view={view} />
+      <ResultsCard id="depth-results" error={word(outcome.general)} view={view}>
+        {view && <BandMethod show={show} withBeta={false} />}
+      </ResultsCard>
       <LogSaveButton entry={logEntry} />
     </div>
   );

@@ -14,6 +14,8 @@ export function depthLogEntry(result: DepthResult, gradeId: string): LogEntry {
     thresholdCarbonPct: request.thresholdCarbonPct,
     model: request.model,
     composition: request.composition,
+    ...(request.diffusivityFactor === undefined ? {} : { diffusivityFactor: request.diffusivityFactor }),
+    temperatureToleranceC: request.temperatureToleranceC,
   };
   const inputs: JobInputs =
     result.solveFor === 'time'
@@ -23,6 +25,7 @@ export function depthLogEntry(result: DepthResult, gradeId: string): LogEntry {
         : { kind: 'depth', temperatureC: f.temperatureC, timeH: f.timeH, ...common };
   const grade = findGrade(gradeId);
   return {
+    ...(result.calibration.kind === 'none' ? {} : { furnace: result.calibration.furnace }),
     steel: {
       ...(grade ? { gradeId: grade.id, gradeName: grade.name } : {}),
       coreCarbonPct: request.coreCarbonPct,

@@ -15,6 +15,7 @@ import {
   type TemperatureResult,
   type TimeResult,
 } from '../../physics';
+import { calibrations, calibrationState, chosenFurnace, factorOf, type CalibrationState } from '../settings/calibration';
 import { defaults, model } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
 import { FieldReader, placeError, type Outcome } from '../ui/outcome';
@@ -33,11 +34,15 @@ export interface DepthRequest {
   thresholdCarbonPct: number;
   model: DiffusivityModelId;
   composition: Composition;
+  /** The chosen furnace's calibration factor on D, when one is applied. */
+  diffusivityFactor?: number;
+  temperatureToleranceC: number;
 }
 
 interface Solved {
   totalCaseMm: number | undefined;
   request: DepthRequest;
+  calibration: CalibrationState;
 }
 
 export type DepthResult =
@@ -49,6 +54,9 @@ export interface DepthDefaults {
   model: DiffusivityModelId;
   ecdThresholdPct: number;
   totalCaseMarginPct: number;
+  temperatureToleranceC: number;
+  /** The chosen furnace's calibration (none: uncalibrated). */
+  calibration?: CalibrationState;
 }
 
 /** Physics request fields → form fields. */
@@ -95,6 +103,8 @@ export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<
   const composition = read.value(readComposition(form.steel));
   if (read.failed || corePct === undefined || carbonPct === undefined || composition === undefined) return { errors: read.errors };
 
+  const calibration = settings.calibration ?? { kind: 'none' };
+  const factor = factorOf(calibration);
   const request: DepthRequest = {
     ...(temperatureC === undefined ? {} : { temperatureC }),
     ...(timeH === undefined ? {} : { timeH }),
@@ -104,13 +114,15 @@ export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<
     thresholdCarbonPct: thresholdPct ?? settings.ecdThresholdPct,
     model: settings.model,
     composition,
+    ...(factor === 1 ? {} : { diffusivityFactor: factor }),
+    temperatureToleranceC: settings.temperatureToleranceC,
   };
   const calculated =
     mode === 'time' ? timeForCaseDepth(request) : mode === 'temperature' ? temperatureForCaseDepth(request) : caseDepth(request);
   if (!calculated.ok) return placeError(calculated.error, FIELD_MAP, FORM_FIELDS);
   const total = totalCaseDepthForMarginMm(calculated.value, settings.totalCaseMarginPct);
   const totalCaseMm = total.ok ? total.value : undefined;
-  return { errors: {}, result: { solveFor: mode, figures: calculated.value, totalCaseMm, request } as DepthResult };
+  return { errors: {}, result: { solveFor: mode, figures: calculated.value, totalCaseMm, request, calibration } as DepthResult };
 }
 
 export const depthOutcome = computed(() =>
@@ -118,5 +130,7 @@ export const depthOutcome = computed(() =>
     model: model.value,
     ecdThresholdPct: defaults.value.ecdThresholdPct,
     totalCaseMarginPct: defaults.value.totalCaseMarginPct,
+    temperatureToleranceC: defaults.value.temperatureToleranceC,
+    calibration: calibrationState(calibrations.value, chosenFurnace.value, model.value),
   }),
 );

@@ -1,21 +1,29 @@
 /** The depth screen's result rows, worded and formatted (kept out of the JSX). */
 import type { TFunction } from 'i18next';
-import { warningMessage } from '../../i18n/i18n';
 import { DIFFUSIVITY_MODELS, MODEL_IDS } from '../../physics';
+import { bandRow } from '../ui/band';
+import { calibrationWords } from '../ui/calibration';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
+import { wordWarning } from '../ui/warningText';
 import type { DepthResult } from './results';
 
 export interface DepthView {
   answerLabel: string;
   answer: string;
   answerDetail?: string;
+  /** The calibration applied, in short, under the answer. */
+  answerNote?: string;
   rows: ResultRow[];
   cautions: string[];
 }
 
 export function depthView(result: DepthResult, t: TFunction, show: Show, marginPct: number): DepthView {
   const f = result.figures;
+  const calibration = calibrationWords(result.calibration, t, show);
+  const calibrationRows: ResultRow[] = calibration ? [{ key: 'calibration', label: t('app.calibration.label'), value: calibration.sentence, text: true }] : [];
+  const band = bandRow(f.uncertaintyMm, t, show);
+  const answerNote = calibration?.short;
   const byModel = MODEL_IDS.map((id) => `${t(`app.models.${id}`)} ${show.depth(f.modelRangeMm.byModel[id])}`).join(' · ');
   const ecdRow: ResultRow = {
     key: 'ecd',
@@ -58,19 +66,22 @@ export function depthView(result: DepthResult, t: TFunction, show: Show, marginP
       detail: t('app.depth.hardnessDetail', { hv: show.hardnessHv(f.surfaceHardnessHrc) }),
     },
   ];
-  const cautions = f.warnings.map((w) => warningMessage(t, w));
+  const cautions = f.warnings.map((w) => wordWarning(t, w, show));
   if (result.solveFor === 'time') {
     return {
       answerLabel: t('app.depth.answerTime', { depth: show.depth(result.figures.targetDepthMm) }),
       answer: show.hoursMinutes(f.timeH),
       answerDetail: show.time(f.timeH),
+      answerNote,
       rows: [
+        ...calibrationRows,
         { key: 'time', label: t('app.depth.timeNeeded'), value: show.time(f.timeH), detail: show.hoursMinutes(f.timeH), main: true },
         {
           key: 'timeRange',
           label: t('app.depth.timeRange'),
           value: show.timeRange(result.figures.modelRangeH.min, result.figures.modelRangeH.max),
         },
+        band,
         ...common,
       ],
       cautions,
@@ -81,13 +92,16 @@ export function depthView(result: DepthResult, t: TFunction, show: Show, marginP
     return {
       answerLabel: t('app.depth.answerTemperature', { depth: show.depth(result.figures.targetDepthMm) }),
       answer: show.temperature(f.temperatureC),
+      answerNote,
       rows: [
+        ...calibrationRows,
         { key: 'temperature', label: t('app.depth.temperatureNeeded'), value: show.temperature(f.temperatureC), main: true },
         {
           key: 'temperatureRange',
           label: t('app.depth.temperatureRange'),
           value: range ? show.temperatureRange(range.min, range.max) : t('app.depth.temperatureRangeNone'),
         },
+        band,
         ...common,
       ],
       cautions,
@@ -96,7 +110,9 @@ export function depthView(result: DepthResult, t: TFunction, show: Show, marginP
   return {
     answerLabel: t('app.depth.answerDepth'),
     answer: show.depth(f.effectiveCaseDepthMm),
-    rows: [{ ...ecdRow, main: true }, ...common],
+    answerDetail: t('app.band.likely', { range: band.value }),
+    answerNote,
+    rows: [...calibrationRows, { ...ecdRow, main: true }, band, ...common],
     cautions,
   };
 }

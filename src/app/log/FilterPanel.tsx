@@ -17,7 +17,7 @@ export function FilterPanel({ furnaces, parts }: { furnaces: readonly string[]; 
   return (
     <div class="log-filter">
       <TextField id="log-search" type="search" label={t('app.log.filter.search')} value={form.text} maxLength={80} hint={t('app.log.filter.searchHint')} onInput={(text) => set({ text })} />
-      <details class="log-details">
+      <details class="disclosure">
         <summary>
           <span>{t('app.log.filter.toggle')}</span>
           <span class="log-filter-summary">{describeFilter(form, t, locale)}</span>

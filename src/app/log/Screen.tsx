@@ -3,6 +3,7 @@ import { useEffect, useRef } from 'preact/hooks';
 import { useT } from '../../i18n/useT';
 import { hrefFor, subPath } from '../shell/route';
 import { persistence, refreshPersistence } from './db';
+import { CalibrationView } from './CalibrationView';
 import { DetailView } from './DetailView';
 import { followCurrentShift } from './filter';
 import { FilesView } from './FilesView';
@@ -10,12 +11,12 @@ import { ListView } from './ListView';
 import { SummaryView } from './SummaryView';
 import './log.css';
 
-const VIEWS = ['list', 'summary', 'files'] as const;
+const VIEWS = ['list', 'summary', 'calibration', 'files'] as const;
 type View = (typeof VIEWS)[number] | 'job';
 
 function viewOf(path: readonly string[]): { view: View; jobId?: string } {
   if (path[0] === 'job' && path[1]) return { view: 'job', jobId: path[1] };
-  if (path[0] === 'summary' || path[0] === 'files') return { view: path[0] };
+  if (path[0] === 'summary' || path[0] === 'calibration' || path[0] === 'files') return { view: path[0] };
   return { view: 'list' };
 }
 
@@ -38,14 +39,14 @@ export default function LogScreen() {
   const tab = view === 'job' ? 'list' : view;
   return (
     <div class="screen log">
-      <nav class="log-tabs" aria-label={t('app.log.tabs.label')}>
+      <nav class="view-tabs" aria-label={t('app.log.tabs.label')}>
         {VIEWS.map((v) => (
           <a key={v} href={v === 'list' ? hrefFor('log') : hrefFor('log', v)} aria-current={tab === v ? 'page' : undefined}>
             {t(`app.log.tabs.${v}`)}
           </a>
         ))}
       </nav>
-      {view === 'job' && jobId ? <DetailView id={jobId} /> : view === 'summary' ? <SummaryView /> : view === 'files' ? <FilesView /> : <ListView />}
+      {view === 'job' && jobId ? <DetailView id={jobId} /> : view === 'summary' ? <SummaryView /> : view === 'calibration' ? <CalibrationView /> : view === 'files' ? <FilesView /> : <ListView />}
       {persistence.value && (
         <p class="note log-persistence" data-persistence={persistence.value}>
           {t(`jobs.persist.${persistence.value}`)}

@@ -10,4 +10,6 @@ export interface LogEntry {
   steel: Omit<Steel, 'gradeName'> & { gradeName?: string };
   inputs: JobInputs;
   prediction: Prediction;
+  /** The furnace chosen in the calculator: the save form starts with it. */
+  furnace?: string;
 }

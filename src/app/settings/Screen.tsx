@@ -10,16 +10,20 @@ import { patch } from '../ui/persist';
 import { Segmented } from '../ui/Segmented';
 import { TextField } from '../ui/TextField';
 import { useScreenContext } from '../ui/screenContext';
+import { temperatureDifferenceText } from '../ui/fieldText';
 import { UNIT_CHOICES, UNIT_SYSTEMS, type DisplayQuantity, type UnitSystem } from '../ui/units';
-import { readBeta, readMargin, readThreshold, setLanguage, settings, THEMES } from './state';
+import { readBeta, readBetaRange, readMargin, readThreshold, readTolerance, setLanguage, settings, THEMES } from './state';
 import './screen.css';
 
 /** Each language names itself, so it can be found whatever the current language. */
 const LANGUAGE_NAMES: Record<Language, string> = { en: 'English', es: 'Español', de: 'Deutsch' };
 
 export default function SettingsScreen() {
-  const { t, word } = useScreenContext();
+  const { t, word, units, locale } = useScreenContext();
   const s = settings.value;
+  const tolerance = readTolerance(s.temperatureTolerance);
+  const betaRange = readBetaRange(s.betaRangeMin, s.betaRangeMax);
+  const betaRangeError = (field: string) => (!betaRange.ok && betaRange.error.field === field ? word(betaRange.error) : undefined);
   const beta = readBeta(s.beta);
   const threshold = readThreshold(s.ecdThreshold);
   const margin = readMargin(s.totalCaseMargin);
@@ -97,6 +101,23 @@ export default function SettingsScreen() {
             hint={t('app.settings.betaHint')}
           />
         </div>
+      </section>
+      <section class="card" aria-labelledby="settings-range">
+        <h2 id="settings-range">{t('app.settings.rangeHeading')}</h2>
+        <NumberField
+          id="settings-tolerance"
+          label={t('app.settings.tolerance')}
+          unitLabel={`±${UNIT_SYMBOLS[units.temperature]}`}
+          value={{ text: temperatureDifferenceText(s.temperatureTolerance, units.temperature, locale), unit: '' }}
+          onInput={(v) => patch(settings, { temperatureTolerance: { text: v.text, unit: units.temperature } })}
+          error={tolerance.ok ? undefined : word(tolerance.error)}
+          hint={t('app.settings.toleranceHint')}
+        />
+        <div class="field-grid">
+          <NumberField id="settings-beta-min" label={t('app.settings.betaRangeMin')} unitLabel={UNIT_SYMBOLS.beta7} value={s.betaRangeMin} onInput={(v) => patch(settings, { betaRangeMin: v })} error={betaRangeError('betaRangeMin')} />
+          <NumberField id="settings-beta-max" label={t('app.settings.betaRangeMax')} unitLabel={UNIT_SYMBOLS.beta7} value={s.betaRangeMax} onInput={(v) => patch(settings, { betaRangeMax: v })} error={betaRangeError('betaRangeMax')} />
+        </div>
+        <p class="note">{t('app.settings.betaRangeHint')}</p>
       </section>
       <section class="card" aria-labelledby="settings-shifts">
         <h2 id="settings-shifts">{t('app.settings.shiftsHeading')}</h2>

@@ -15,8 +15,10 @@ import {
 } from '../../physics';
 import { DEFAULT_SHIFT_CONFIG, type ShiftConfig } from '../../jobs/shiftNames';
 import { DEFAULT_BETA_M_PER_S } from '../../physics/cycle/recipe';
-import { checkBeta, checkCarbonPct } from '../../physics/validate';
-import { field, readField, type FieldText } from '../ui/fieldText';
+import { DEFAULT_BETA_RANGE_M_PER_S, DEFAULT_TEMPERATURE_TOLERANCE_C, type Range } from '../../physics/uncertainty';
+import { checkBeta, checkCarbonPct, checkTemperatureTolerance } from '../../physics/validate';
+import { fail } from '../../physics/result';
+import { field, readField, readTemperatureDifferenceC, type FieldText } from '../ui/fieldText';
 import { persisted } from '../ui/persist';
 import { displayUnits, type UnitOverrides, type UnitSystem } from '../ui/units';
 
@@ -34,6 +36,11 @@ export interface Settings {
   beta: FieldText;
   ecdThreshold: FieldText;
   totalCaseMargin: FieldText;
+  /** Furnace temperature tolerance for the likely range, typed in °C or °F (a difference). */
+  temperatureTolerance: FieldText;
+  /** Ends of the β range for the likely range of a cycle, in 10⁻⁷ m/s. */
+  betaRangeMin: FieldText;
+  betaRangeMax: FieldText;
   theme: string;
   /** Local start time of each shift, "HH:MM" (checked where it is used: the job log). */
   shiftStarts: ShiftConfig;
@@ -47,6 +54,9 @@ export const DEFAULT_SETTINGS: Settings = {
   beta: field(String(DEFAULT_BETA_M_PER_S / BETA_INPUT_SCALE)),
   ecdThreshold: field(String(DEFAULT_ECD_THRESHOLD_PCT)),
   totalCaseMargin: field(String(TOTAL_CASE_MARGIN_PCT)),
+  temperatureTolerance: field(String(DEFAULT_TEMPERATURE_TOLERANCE_C), 'C'),
+  betaRangeMin: field(String(DEFAULT_BETA_RANGE_M_PER_S.min / BETA_INPUT_SCALE)),
+  betaRangeMax: field(String(DEFAULT_BETA_RANGE_M_PER_S.max / BETA_INPUT_SCALE)),
   theme: 'dark',
   shiftStarts: DEFAULT_SHIFT_CONFIG,
 };
@@ -87,16 +97,39 @@ export function readMargin(value: FieldText): Result<number> | 'notPositive' {
   return typed.value > 0 ? checkCarbonPct(typed.value, 'totalCaseMargin') : 'notPositive';
 }
 
+/** Furnace temperature tolerance, ±°C. */
+export function readTolerance(value: FieldText): Result<number> {
+  const typed = readTemperatureDifferenceC(value, 'temperatureTolerance');
+  return typed.ok ? checkTemperatureTolerance(typed.value, 'temperatureTolerance') : typed;
+}
+
+/** The β range, m/s: each end positive, the lower not above the upper (errors on `betaRangeMin` / `betaRangeMax`). */
+export function readBetaRange(min: FieldText, max: FieldText): Result<Range> {
+  const low = readField(min, 'betaRangeMin');
+  if (!low.ok) return low;
+  const lowM = checkBeta(low.value * BETA_INPUT_SCALE, 'betaRangeMin');
+  if (!lowM.ok) return lowM;
+  const high = readField(max, 'betaRangeMax');
+  if (!high.ok) return high;
+  const highM = checkBeta(high.value * BETA_INPUT_SCALE, 'betaRangeMax');
+  if (!highM.ok) return highM;
+  return lowM.value <= highM.value ? { ok: true, value: { min: lowM.value, max: highM.value } } : fail('range.minAboveMax', 'betaRangeMax', { min: low.value, max: high.value });
+}
+
 /** Settings read for use: invalid entries fall back to the defaults (and are flagged on the settings screen). */
 export const defaults = computed(() => {
   const s = settings.value;
   const beta = readBeta(s.beta);
   const threshold = readThreshold(s.ecdThreshold);
   const margin = readMargin(s.totalCaseMargin);
+  const tolerance = readTolerance(s.temperatureTolerance);
+  const betaRange = readBetaRange(s.betaRangeMin, s.betaRangeMax);
   return {
     betaMPerS: beta.ok ? beta.value : DEFAULT_BETA_M_PER_S,
     ecdThresholdPct: threshold.ok ? threshold.value : DEFAULT_ECD_THRESHOLD_PCT,
     totalCaseMarginPct: margin !== 'notPositive' && margin.ok ? margin.value : TOTAL_CASE_MARGIN_PCT,
+    temperatureToleranceC: tolerance.ok ? tolerance.value : DEFAULT_TEMPERATURE_TOLERANCE_C,
+    betaRangeMPerS: betaRange.ok ? betaRange.value : { ...DEFAULT_BETA_RANGE_M_PER_S },
   };
 });
 

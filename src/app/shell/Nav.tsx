@@ -2,7 +2,7 @@
 import { useT } from '../../i18n/useT';
 import { Icon } from '../ui/Icon';
 import { hrefFor, route } from './route';
-import { NAV_SCREENS } from './screens';
+import { NAV_SCREENS, navItemOf } from './screens';
 
 export function Nav() {
   const t = useT();
@@ -11,7 +11,7 @@ export function Nav() {
       <ul>
         {NAV_SCREENS.map((id) => (
           <li key={id}>
-            <a href={hrefFor(id)} aria-current={route.value === id ? 'page' : undefined}>
+            <a href={hrefFor(id)} aria-current={navItemOf(route.value) === id ? 'page' : undefined}>
               <Icon name={id} />
               <span>{t(`app.nav.${id}`)}</span>
             </a>

@@ -1,7 +1,7 @@
 /** Which screen is shown: a hash route (#/depth), so every screen works from the precached index.html. */
 import { signal } from '@preact/signals';
 
-export const SCREEN_IDS = ['depth', 'cycle', 'recovery', 'log', 'convert', 'settings', 'safety'] as const;
+export const SCREEN_IDS = ['depth', 'cycle', 'plan', 'recovery', 'log', 'convert', 'settings', 'safety'] as const;
 export type ScreenId = (typeof SCREEN_IDS)[number];
 
 export const HOME: ScreenId = 'depth';

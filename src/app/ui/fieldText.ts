@@ -3,7 +3,7 @@
  * in. Values are converted to physics units only when read, so changing the unit
  * setting never rewrites what was typed, and a decimal comma is always accepted.
  */
-import { convert, fail, parseNumber, type Result } from '../../physics';
+import { convert, convertTemperatureDifference, fail, parseNumber, type Result } from '../../physics';
 import { formatInput } from './format';
 
 export interface FieldText {
@@ -35,4 +35,20 @@ export function displayText(value: FieldText, displayUnit: string, locale: strin
   if (!parsed.ok) return value.text;
   const converted = convert(parsed.value, value.unit, displayUnit);
   return converted.ok ? formatInput(converted.value, displayUnit, locale) : value.text;
+}
+
+const isTemperatureUnit = (unit: string): unit is 'C' | 'F' => unit === 'C' || unit === 'F';
+
+/** A temperature difference (a tolerance: no offset) typed in °C or °F, read in °C. */
+export function readTemperatureDifferenceC(value: FieldText, name: string): Result<number> {
+  const parsed = parseNumber(value.text);
+  if (!parsed.ok) return fail(parsed.error.code, name, parsed.error.params);
+  return isTemperatureUnit(value.unit) ? { ok: true, value: convertTemperatureDifference(parsed.value, value.unit, 'C') } : parsed;
+}
+
+/** The text of a temperature difference shown in `displayUnit`: as typed, or converted as a difference. */
+export function temperatureDifferenceText(value: FieldText, displayUnit: 'C' | 'F', locale: string): string {
+  if (!isTemperatureUnit(value.unit) || value.unit === displayUnit) return value.text;
+  const parsed = parseNumber(value.text);
+  return parsed.ok ? formatInput(convertTemperatureDifference(parsed.value, value.unit, displayUnit), displayUnit, locale) : value.text;
 }

@@ -18,6 +18,7 @@ export interface Show {
   timeRange(minH: number, maxH: number): string;
   hoursMinutes(h: number): string;
   carbon(pct: number): string;
+  carbonRange(minPct: number, maxPct: number): string;
   diffusivity(m2PerS: number): string;
   hardnessHrc(hrc: number): string;
   /** Approximate HV for an HRC value, or NO_VALUE outside the table. */
@@ -48,6 +49,7 @@ export function makeShow(units: DisplayUnits, locale: string): Show {
     timeRange: (a, b) => formatRange(time(a), time(b), units.time, locale),
     hoursMinutes: (h) => formatHoursMinutes(h, locale),
     carbon: (pct) => formatQuantity(pct, 'pctC', locale),
+    carbonRange: (a, b) => formatRange(a, b, 'pctC', locale),
     diffusivity: (d) => formatScientific(d, 'm2/s', locale),
     hardnessHrc: (hrc) => formatQuantity(hrc, 'HRC', locale),
     hardnessHv: (hrc) => formatQuantity(hrcToHv(hrc) ?? Number.NaN, 'HV', locale),

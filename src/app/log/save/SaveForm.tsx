@@ -24,7 +24,11 @@ export default function SaveForm({ value: entry, onDone }: PanelProps<LogEntry>)
   const [placed, setPlaced] = useState<PlacedErrors | undefined>(undefined);
   const [busy, setBusy] = useState(false);
   const title = useRef<HTMLHeadingElement>(null);
-  useEffect(() => title.current?.focus(), []);
+  useEffect(() => {
+    // The furnace chosen in the calculator is the one this load runs in.
+    if (entry?.furnace) patch(draft, { furnace: entry.furnace });
+    title.current?.focus();
+  }, []);
   if (!entry) return null;
   const wording = { t, show: ctx.show, locale };
 
@@ -53,7 +57,7 @@ export default function SaveForm({ value: entry, onDone }: PanelProps<LogEntry>)
     <form class="card log-form" aria-labelledby="log-save-title" onSubmit={(e) => void save(e)} noValidate>
       <h2 id="log-save-title" ref={title} tabIndex={-1}>{t('app.log.save.title')}</h2>
       <ResultList rows={predictionRows(entry.prediction, entry.inputs.kind, wording).slice(0, 2)} label={t('app.log.save.recorded')} />
-      <details class="log-details">
+      <details class="disclosure">
         <summary>{t('app.log.save.recorded')}</summary>
         <ResultList rows={[...planRows(entry.steel, entry.inputs, wording), ...predictionRows(entry.prediction, entry.inputs.kind, wording).slice(2)]} label={t('app.log.save.recorded')} />
       </details>

@@ -1,0 +1,135 @@
+/**
+ * Furnace calibration: per furnace, the factor on D fitted to its lab depths, its 95 % interval,
+ * the jobs and their residuals, and a switch to apply it to that furnace's predictions (off by
+ * default). The figures are kept with the settings, so the calculators never open the log.
+ */
+import { useMemo } from 'preact/hooks';
+import { DEFAULT_CALIBRATION_JOBS, describeJobsError, type Job } from '../../jobs';
+import { errorMessage } from '../../i18n/i18n';
+import type { CalibrationFit } from '../../physics';
+import { calibrations, setApplied, storeCalibration } from '../settings/calibration';
+import { model } from '../settings/state';
+import { hrefFor } from '../shell/route';
+import { ErrorNote } from '../ui/Notices';
+import { ResultList, type ResultRow } from '../ui/ResultList';
+import { useScreenContext, type ScreenContext } from '../ui/screenContext';
+import { CheckField } from '../ui/TextField';
+import { calibrationCards, type FurnaceCard } from './calibration';
+import { formatMoment } from './dates';
+import { useLogRead } from './useLog';
+
+export function CalibrationView() {
+  const ctx = useScreenContext();
+  const { t } = ctx;
+  const list = useLogRead((store) => store.list({}), []);
+  const jobs: Job[] = list.state === 'ready' ? list.value.jobs : [];
+  const stored = calibrations.value;
+  const current = model.value;
+  const cards = useMemo(() => calibrationCards(jobs, stored, current, new Date()), [jobs, stored, current]);
+  const byId = useMemo(() => new Map(jobs.map((job) => [job.id, job])), [jobs]);
+  return (
+    <>
+      <h1 tabIndex={-1}>{t('app.calibration.title')}</h1>
+      <p class="note">{t('app.calibration.intro', { count: DEFAULT_CALIBRATION_JOBS, model: t(`app.models.${current}`) })}</p>
+      {list.state === 'failed' && <ErrorNote message={describeJobsError(t, list.error)} />}
+      {list.state === 'ready' && cards.length === 0 && <p class="note">{t('app.calibration.noLabResults')}</p>}
+      {cards.map((card) => (
+        <FurnaceCalibrationCard key={card.furnace} card={card} byId={byId} ctx={ctx} />
+      ))}
+    </>
+  );
+}
+
+function FurnaceCalibrationCard({ card, byId, ctx }: { card: FurnaceCard; byId: ReadonlyMap<string, Job>; ctx: ScreenContext }) {
+  const { t, show, locale } = ctx;
+  const { furnace, calibration, stored, fresh, stale } = card;
+  const fit = calibration.fit;
+  const id = `calibration-${furnace.replace(/[^\w-]/gu, '_')}`;
+  const rows: ResultRow[] = fit.ok
+    ? [
+        {
+          key: 'factor',
+          label: t('app.calibration.factor'),
+          value: t('app.calibration.factorValue', { factor: show.number(fit.value.factor, 2) }),
+          detail: t('app.calibration.interval', { low: show.number(fit.value.interval95.low, 2), high: show.number(fit.value.interval95.high, 2) }),
+          main: true,
+        },
+        { key: 'jobs', label: t('app.calibration.jobs'), value: String(fit.value.jobCount) },
+        { key: 'rms', label: t('app.calibration.rms'), value: show.depth(fit.value.rmsResidualMm) },
+      ]
+    : [];
+  const apply = (on: boolean) => {
+    if (!on) setApplied(furnace, false);
+    else if (stored && !stale) setApplied(furnace, true);
+    else if (fresh) storeCalibration({ ...fresh, apply: true });
+    else if (stored) setApplied(furnace, true);
+  };
+  return (
+    <section class="card calibration-card" aria-labelledby={`${id}-title`} data-furnace={furnace}>
+      <h2 id={`${id}-title`}>{t('app.calibration.furnaceHeading', { furnace })}</h2>
+      {!fit.ok && <ErrorNote message={errorMessage(t, fit.error)} />}
+      {fit.ok && <ResultList rows={rows} label={t('app.calibration.furnaceHeading', { furnace })} />}
+      {calibration.skipped.length > 0 && <p class="note">{t('app.calibration.skipped', { count: calibration.skipped.length })}</p>}
+      {(fresh || stored) && (
+        <CheckField id={`${id}-apply`} label={t('app.calibration.apply', { furnace })} checked={stored?.apply ?? false} onChange={apply} />
+      )}
+      {stored && stale && (
+        <div class="calibration-stale">
+          <p class="note">
+            {t('app.calibration.storedFigures', {
+              factor: show.number(stored.factor, 2),
+              count: stored.jobCount,
+              date: formatMoment(stored.fittedAt, locale),
+              model: t(`app.models.${stored.model}`),
+            })}
+          </p>
+          {fresh && (
+            <button type="button" class="button" onClick={() => storeCalibration({ ...fresh, apply: stored.apply })}>
+              {t('app.calibration.keepNew')}
+            </button>
+          )}
+        </div>
+      )}
+      {fit.ok && <ResidualsTable fit={fit.value} byId={byId} ctx={ctx} />}
+    </section>
+  );
+}
+
+function ResidualsTable({ fit, byId, ctx }: { fit: CalibrationFit; byId: ReadonlyMap<string, Job>; ctx: ScreenContext }) {
+  const { t, show } = ctx;
+  return (
+    <details class="disclosure">
+      <summary>{t('app.calibration.residualsHeading', { count: fit.residuals.length })}</summary>
+      <div class="table-wrap">
+        <table class="numbers pairs">
+          <caption>{t('app.calibration.residualsCaption')}</caption>
+          <thead>
+            <tr>
+              <th scope="col">{t('app.log.summary.colJob')}</th>
+              <th scope="col">{t('app.log.summary.colMeasured')}</th>
+              <th scope="col">{t('app.log.summary.colPredicted')}</th>
+              <th scope="col">{t('app.log.summary.colDifference')}</th>
+            </tr>
+          </thead>
+          <tbody>
+            {fit.residuals.map((r) => {
+              const job = byId.get(r.id);
+              return (
+                <tr key={r.id}>
+                  <th scope="row">
+                    <a href={hrefFor('log', 'job', r.id)}>{job?.partNumber ?? r.id.slice(0, 8)}</a>
+                    {job?.workOrder && <span class="pair-furnace">{job.workOrder}</span>}
+                  </th>
+                  <td>{show.depth(r.measuredMm)}</td>
+                  <td>{show.depth(r.predictedMm)}</td>
+                  <td>{show.depthChange(-r.residualMm)}</td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+      </div>
+      <p class="note">{t('app.log.summary.differenceNote')}</p>
+    </details>
+  );
+}

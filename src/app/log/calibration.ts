@@ -1,0 +1,44 @@
+/**
+ * The calibration view's data: for each furnace with lab depths (or a stored calibration), the
+ * fit from the log as it is now, the figures kept in the settings, and whether those are out of
+ * date. Pure: the view renders it and stores figures only when the person asks.
+ */
+import { calibrateFurnace, furnacesWithLabDepth, type FurnaceCalibration, type Job } from '../../jobs';
+import type { CalibrationFit, DiffusivityModelId } from '../../physics';
+import type { StoredCalibration } from '../settings/calibration';
+
+export interface FurnaceCard {
+  furnace: string;
+  /** The fit from the log as it is now (with the jobs it skipped). */
+  calibration: FurnaceCalibration;
+  /** The figures kept in the settings, if any. */
+  stored?: StoredCalibration;
+  /** The current fit as figures to store (absent when the fit failed). */
+  fresh?: StoredCalibration;
+  /** Stored figures that differ from the current fit (other factor, jobs or model). */
+  stale: boolean;
+}
+
+/** A fit as the figures the settings keep. */
+export function storableFit(furnace: string, fit: CalibrationFit, model: DiffusivityModelId, fittedAt: string, apply: boolean): StoredCalibration {
+  return { furnace, factor: fit.factor, low: fit.interval95.low, high: fit.interval95.high, jobCount: fit.jobCount, rmsMm: fit.rmsResidualMm, fittedAt, model, apply };
+}
+
+const sameFit = (a: StoredCalibration, b: StoredCalibration) =>
+  a.model === b.model && a.jobCount === b.jobCount && Math.abs(a.factor - b.factor) <= 1e-9 * b.factor && Math.abs(a.low - b.low) <= 1e-9 * b.low;
+
+export function calibrationCards(jobs: readonly Job[], stored: readonly StoredCalibration[], model: DiffusivityModelId, now: Date): FurnaceCard[] {
+  const furnaces = [...new Set([...furnacesWithLabDepth(jobs), ...stored.map((s) => s.furnace)])].sort();
+  return furnaces.map((furnace) => {
+    const calibration = calibrateFurnace(jobs, furnace, { model });
+    const kept = stored.find((s) => s.furnace === furnace);
+    const fresh = calibration.fit.ok ? storableFit(furnace, calibration.fit.value, model, now.toISOString(), kept?.apply ?? false) : undefined;
+    return {
+      furnace,
+      calibration,
+      ...(kept ? { stored: kept } : {}),
+      ...(fresh ? { fresh } : {}),
+      stale: kept !== undefined && (fresh === undefined || !sameFit(kept, fresh)),
+    };
+  });
+}

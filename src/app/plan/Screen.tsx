@@ -1,0 +1,133 @@
+/**
+ * Plan a two-step cycle from the drawing: boost and diffuse times for a target effective case
+ * depth and surface carbon, worked out as you type; what binds when they are out of reach; the
+ * plan opened in the cycle editor or saved to the log.
+ */
+import { useMemo } from 'preact/hooks';
+import { isModelId, MODEL_IDS } from '../../physics';
+import { cycleFormOfRecipe } from '../cycle/fromRecipe';
+import { CycleTabs } from '../cycle/CycleTabs';
+import { cycleLogEntry } from '../cycle/logEntry';
+import { cycleForm } from '../cycle/state';
+import { LogSaveButton } from '../log/save/LogActions';
+import { factorOf } from '../settings/calibration';
+import { defaults, model } from '../settings/state';
+import { hrefFor } from '../shell/route';
+import { Answer } from '../ui/Answer';
+import { ChoiceField } from '../ui/ChoiceField';
+import { CycleBand } from '../ui/CycleBand';
+import { UNIT_SYMBOLS } from '../ui/format';
+import { FurnaceField } from '../ui/FurnaceField';
+import { NumberField } from '../ui/NumberField';
+import { patch } from '../ui/persist';
+import { ResultsCard } from '../ui/ResultsCard';
+import { useScreenContext } from '../ui/screenContext';
+import { ShapeFields } from '../ui/ShapeFields';
+import { SteelFields } from '../ui/SteelFields';
+import { CheckField } from '../ui/TextField';
+import { ThresholdField } from '../ui/ThresholdField';
+import { planOutcome } from './results';
+import { planForm } from './state';
+import { StepFields } from './StepFields';
+import { planView } from './view';
+import './screen.css';
+
+export default function PlanScreen() {
+  const ctx = useScreenContext();
+  const { t, units, show, word } = ctx;
+  const form = planForm.value;
+  const outcome = planOutcome.value;
+  const errors = outcome.errors;
+  const result = outcome.result;
+  const view = useMemo(() => (result ? planView(result, t, show) : undefined), [result, t, units]);
+  const logEntry = useMemo(() => (result?.plan.reachable ? cycleLogEntry({ recipe: result.plan.recipe, simulation: result.plan.predicted, calibration: result.calibration }) : undefined), [result]);
+  const formModel = isModelId(form.model) ? form.model : model.value;
+  const betaPlaceholder = show.number(defaults.value.betaMPerS / 1e-7, 2);
+  const modelChoices = [
+    { value: '', label: t('app.cycle.modelFromSettings', { model: t(`app.models.${model.value}`) }) },
+    ...MODEL_IDS.map((m) => ({ value: m, label: t(`app.models.${m}`) })),
+  ];
+  const openInEditor = () => {
+    if (!result) return;
+    cycleForm.value = cycleFormOfRecipe(result.plan.recipe, {
+      steel: form.steel,
+      model: form.model,
+      threshold: form.threshold,
+      size: form.size,
+      defaultBetaMPerS: defaults.value.betaMPerS,
+      labelOf: (label) => (label === 'boost' || label === 'diffuse' || label === 'hardening' ? t(`app.plan.steps.${label}`) : label),
+    });
+    location.hash = hrefFor('cycle');
+  };
+
+  return (
+    <div class="screen plan">
+      <CycleTabs current="plan" />
+      <h1 tabIndex={-1}>{t('app.plan.title')}</h1>
+      <Answer label={view ? view.answerLabel : t('app.common.noResult')} value={view?.answer} detail={view?.answerDetail} note={view?.answerNote} />
+
+      <section class="card" aria-labelledby="plan-targets">
+        <h2 id="plan-targets">{t('app.plan.targetsHeading')}</h2>
+        <div class="field-grid">
+          <NumberField id="plan-ecd-min" label={t('app.plan.ecdMin')} unit={units.depth} value={form.ecdMin} onInput={(v) => patch(planForm, { ecdMin: v })} error={word(errors['targetEcdMm.min'])} />
+          <NumberField id="plan-ecd-max" label={t('app.plan.ecdMax')} unit={units.depth} value={form.ecdMax} onInput={(v) => patch(planForm, { ecdMax: v })} error={word(errors['targetEcdMm.max'])} />
+          <NumberField id="plan-surface-min" label={t('app.plan.surfaceMin')} unitLabel={UNIT_SYMBOLS.pctC} value={form.surfaceMin} onInput={(v) => patch(planForm, { surfaceMin: v })} error={word(errors['targetSurfaceCarbonPct.min'])} />
+          <NumberField id="plan-surface-max" label={t('app.plan.surfaceMax')} unitLabel={UNIT_SYMBOLS.pctC} value={form.surfaceMax} onInput={(v) => patch(planForm, { surfaceMax: v })} error={word(errors['targetSurfaceCarbonPct.max'])} />
+        </div>
+        <ThresholdField id="plan-threshold" value={form.threshold} onInput={(v) => patch(planForm, { threshold: v })} error={word(errors.threshold)} show={show} />
+      </section>
+
+      <section class="card" aria-labelledby="plan-steps">
+        <h2 id="plan-steps">{t('app.plan.stepsHeading')}</h2>
+        <StepFields name="boost" step={form.boost} onChange={(boost) => patch(planForm, { boost })} errors={errors} betaPlaceholder={betaPlaceholder} ctx={ctx} />
+        <StepFields name="diffuse" step={form.diffuse} onChange={(diffuse) => patch(planForm, { diffuse })} errors={errors} betaPlaceholder={betaPlaceholder} ctx={ctx} />
+        <CheckField id="plan-hardening" label={t('app.plan.hardening')} checked={form.hardening} onChange={(hardening) => patch(planForm, { hardening })} />
+        {form.hardening && (
+          <div class="field-grid">
+            <NumberField id="plan-hardening-temperature" label={t('app.fields.temperature')} unit={units.temperature} value={form.hardeningTemp} onInput={(v) => patch(planForm, { hardeningTemp: v })} error={word(errors['hardening.temperatureC'])} />
+            <NumberField id="plan-hardening-time" label={t('app.cycle.duration')} unit={units.time} value={form.hardeningTime} onInput={(v) => patch(planForm, { hardeningTime: v })} error={word(errors['hardening.timeH'])} />
+          </div>
+        )}
+      </section>
+
+      <section class="card" aria-labelledby="plan-part">
+        <h2 id="plan-part">{t('app.cycle.partHeading')}</h2>
+        <ShapeFields idPrefix="plan" shape={form.shape} size={form.size} onChange={(changes) => patch(planForm, changes)} error={word(errors.size)} ctx={ctx} />
+        <SteelFields idPrefix="plan-steel" steel={form.steel} onChange={(s) => patch(planForm, { steel: s })} errors={errors} word={word} />
+        <ChoiceField id="plan-model" label={t('app.settings.model')} value={form.model} choices={modelChoices} onChange={(v) => patch(planForm, { model: v })} />
+        <FurnaceField id="plan-furnace" model={formModel} ctx={ctx} />
+      </section>
+
+      {view?.binding && (
+        <section class="card plan-findings" aria-labelledby="plan-findings">
+          <h2 id="plan-findings">{t('app.plan.bindingHeading')}</h2>
+          <p class="plan-binding">{view.binding}</p>
+          {view.suggestions.length > 0 && (
+            <>
+              <h3>{t('app.plan.suggestionsHeading')}</h3>
+              <ul class="plan-suggestions">
+                {view.suggestions.map((s, i) => (
+                  <li key={i}>{s}</li>
+                ))}
+              </ul>
+            </>
+          )}
+        </section>
+      )}
+
+      <ResultsCard id="plan-results" error={word(outcome.general)} view={view}>
+        <CycleBand id="plan-band" recipe={result?.plan.recipe} diffusivityFactor={result ? factorOf(result.calibration) : 1} ctx={ctx} />
+      </ResultsCard>
+      <div class="plan-actions">
+        <button type="button" class="button button-primary button-wide" disabled={!result} onClick={openInEditor} aria-describedby="plan-open-hint">
+          {t('app.plan.openInEditor')}
+        </button>
+        <p id="plan-open-hint" class="note">
+          {t('app.plan.openHint')}
+        </p>
+      </div>
+      <LogSaveButton entry={logEntry} />
+      {result && !result.plan.reachable && <p class="note">{t('app.plan.saveOnlyReachable')}</p>}
+    </div>
+  );
+}

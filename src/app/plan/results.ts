@@ -1,0 +1,112 @@
+/**
+ * Reads the planner's form into a `plan` request (°C, h, mm, %C, m/s) and plans it with the
+ * chosen furnace's calibration. A plan is a few milliseconds of simulation: it runs as you type,
+ * inside a `computed`, so it runs once per change that is shown and never queues up.
+ */
+import { computed } from '@preact/signals';
+import { ALLOY_ELEMENTS, isModelId, planTwoStepCycle, type PlanResult } from '../../physics';
+import { cycleDefaults, type CycleDefaults } from '../cycle/results';
+import { factorOf, type CalibrationState } from '../settings/calibration';
+import { BETA_INPUT_SCALE } from '../settings/state';
+import { readField, readOptionalField } from '../ui/fieldText';
+import { FieldReader, placeError, type Outcome } from '../ui/outcome';
+import { readShape } from '../ui/shape';
+import { readComposition } from '../ui/steel';
+import { timed } from '../ui/timing';
+import { PHYSICS_UNITS } from '../ui/units';
+import { planForm, type PlanForm, type PotentialStepForm } from './state';
+
+export interface PlanOutcome {
+  request: Record<string, unknown>;
+  plan: PlanResult;
+  calibration: CalibrationState;
+}
+
+/** Request field paths → form fields where they differ (other errors sit on the field of the same path). */
+const FIELD_MAP: Record<string, string> = {
+  'steel.coreCarbonPct': 'coreCarbon',
+  thresholdCarbonPct: 'threshold',
+  'shape.thicknessMm': 'size',
+  'shape.diameterMm': 'size',
+  targetEcdMm: 'targetEcdMm.max',
+  targetSurfaceCarbonPct: 'targetSurfaceCarbonPct.max',
+  ...Object.fromEntries(ALLOY_ELEMENTS.map((e) => [`steel.composition.${e}`, `composition.${e}`])),
+};
+
+const STEP_FIELDS = ['temperatureC', 'carbonPotentialPct', 'betaMPerS'];
+
+export const PLAN_FORM_FIELDS: ReadonlySet<string> = new Set([
+  'coreCarbon',
+  'threshold',
+  'size',
+  ...ALLOY_ELEMENTS.map((e) => `composition.${e}`),
+  ...['boost', 'diffuse'].flatMap((step) => STEP_FIELDS.map((f) => `${step}.${f}`)),
+  'hardening.temperatureC',
+  'hardening.timeH',
+  ...['targetEcdMm', 'targetSurfaceCarbonPct'].flatMap((range) => [`${range}.min`, `${range}.max`]),
+]);
+
+function readStep(step: PotentialStepForm, name: string, read: FieldReader, defaultBetaMPerS: number) {
+  const temperatureC = read.value(readField(step.temperature, `${name}.temperatureC`, PHYSICS_UNITS.temperature));
+  const carbonPotentialPct = read.value(readField(step.carbonPotential, `${name}.carbonPotentialPct`));
+  const beta = read.value(readOptionalField(step.beta, `${name}.betaMPerS`));
+  return { temperatureC, carbonPotentialPct, betaMPerS: beta === undefined ? defaultBetaMPerS : beta * BETA_INPUT_SCALE };
+}
+
+/** The `plan` request of the form (numbers still unchecked: physics checks ranges), or the fields it cannot read. */
+export function buildPlanRequest(form: PlanForm, settings: CycleDefaults): { request?: Record<string, unknown>; errors: FieldReader['errors'] } {
+  const read = new FieldReader();
+  const coreCarbonPct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
+  const composition = read.value(readComposition(form.steel));
+  const threshold = read.value(readOptionalField(form.threshold, 'threshold'));
+  const shape = readShape(form.shape, form.size, read);
+  const boost = readStep(form.boost, 'boost', read, settings.betaMPerS);
+  const diffuse = readStep(form.diffuse, 'diffuse', read, settings.betaMPerS);
+  const hardening = form.hardening
+    ? {
+        temperatureC: read.value(readField(form.hardeningTemp, 'hardening.temperatureC', PHYSICS_UNITS.temperature)),
+        timeH: read.value(readField(form.hardeningTime, 'hardening.timeH', PHYSICS_UNITS.time)),
+      }
+    : undefined;
+  const targetEcdMm = {
+    min: read.value(readField(form.ecdMin, 'targetEcdMm.min', PHYSICS_UNITS.depth)),
+    max: read.value(readField(form.ecdMax, 'targetEcdMm.max', PHYSICS_UNITS.depth)),
+  };
+  const targetSurfaceCarbonPct = {
+    min: read.value(readField(form.surfaceMin, 'targetSurfaceCarbonPct.min')),
+    max: read.value(readField(form.surfaceMax, 'targetSurfaceCarbonPct.max')),
+  };
+  if (read.failed || !shape) return { errors: read.errors };
+  return {
+    errors: {},
+    request: {
+      steel: { grade: form.steel.grade, coreCarbonPct, ...(composition ? { composition } : {}) },
+      model: isModelId(form.model) ? form.model : settings.model,
+      thresholdCarbonPct: threshold ?? settings.ecdThresholdPct,
+      shape,
+      boost,
+      diffuse,
+      ...(hardening ? { hardening } : {}),
+      targetEcdMm,
+      targetSurfaceCarbonPct,
+    },
+  };
+}
+
+export function computePlan(form: PlanForm, settings: CycleDefaults): Outcome<PlanOutcome> {
+  const built = buildPlanRequest(form, settings);
+  if (!built.request) return { errors: built.errors };
+  const model = isModelId(built.request.model) ? built.request.model : settings.model;
+  const calibration: CalibrationState = settings.calibrationFor?.(model) ?? { kind: 'none' };
+  const factor = factorOf(calibration);
+  const request = factor === 1 ? built.request : { ...built.request, diffusivityFactor: factor };
+  const plan = planTwoStepCycle(request);
+  if (!plan.ok) return placeError(plan.error, FIELD_MAP, PLAN_FORM_FIELDS);
+  return { errors: {}, result: { request, plan: plan.value, calibration } };
+}
+
+export const planOutcome = computed(() => {
+  const form = planForm.value;
+  const settings = cycleDefaults.value;
+  return timed('plan', () => computePlan(form, settings));
+});

@@ -1,0 +1,20 @@
+/** The furnace a calculation is for: one choice shared by the calculators, shown once a furnace has a calibration. */
+import type { DiffusivityModelId } from '../../physics';
+import { calibrations, calibrationState, chosenFurnace } from '../settings/calibration';
+import { calibrationWords } from './calibration';
+import { ChoiceField } from './ChoiceField';
+import type { ScreenContext } from './screenContext';
+
+export function FurnaceField({ id, model, ctx }: { id: string; model: DiffusivityModelId; ctx: ScreenContext }) {
+  const { t, show } = ctx;
+  const list = calibrations.value;
+  const furnace = chosenFurnace.value;
+  if (list.length === 0 && furnace === '') return null;
+  const names = list.map((c) => c.furnace);
+  const choices = [
+    { value: '', label: t('app.calibration.noFurnace') },
+    ...(furnace !== '' && !names.includes(furnace) ? [furnace] : []).concat(names).map((name) => ({ value: name, label: name })),
+  ];
+  const hint = calibrationWords(calibrationState(list, furnace, model), t, show)?.sentence ?? t('app.calibration.chooseHint');
+  return <ChoiceField id={id} label={t('app.calibration.furnace')} value={furnace} choices={choices} onChange={(v) => (chosenFurnace.value = v)} hint={hint} />;
+}

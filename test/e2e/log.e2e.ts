@@ -285,7 +285,7 @@ describe('job log views: accessibility, touch targets, screenshots', () => {
     ['en', 'en-US', 'contrast'],
   ] as const) {
     const shots = theme === 'dark';
-    it(`list, filter, job, lab form, summary, files and the save form in ${language}, ${theme}: axe, 48 px targets, no overflow${shots ? ', screenshots' : ''}`, async () => {
+    it(`list, filter, job, lab form, summary, calibration, files and the save form in ${language}, ${theme}: axe, 48 px targets, no overflow${shots ? ', screenshots' : ''}`, async () => {
       mkdirSync('test-results', { recursive: true });
       const { context, recorder } = await phoneContext(browser, locale);
       const page = await context.newPage();
@@ -319,6 +319,9 @@ describe('job log views: accessibility, touch targets, screenshots', () => {
       await page.goto(`${BASE_URL}#/log/summary`);
       await page.waitForSelector('table.pairs');
       await check('summary', true);
+      await page.goto(`${BASE_URL}#/log/calibration`);
+      await page.waitForSelector('.calibration-card');
+      await check('calibration', true);
       await page.goto(`${BASE_URL}#/log/files`);
       await page.waitForSelector('#files-import-input');
       await check('files');

@@ -62,7 +62,7 @@ describe('locales', () => {
     // The templates used in the app and the values they take (from the code's own lists).
     const templates: [string, readonly string[]][] = [
       ['app.nav.', ['depth', 'cycle', 'recovery', 'log', 'convert', 'settings', 'safety']],
-      ['app.log.tabs.', ['list', 'summary', 'calibration', 'files']],
+      ['app.log.tabs.', ['list', 'summary', 'files']],
       ['app.cycleTabs.', ['cycle', 'plan']],
       ['app.plan.steps.', ['boost', 'diffuse', 'hardening']],
       ['app.unitWarnings.', Object.keys(UNIT_WARNINGS)],

@@ -11,8 +11,9 @@ import { ListView } from './ListView';
 import { SummaryView } from './SummaryView';
 import './log.css';
 
-const VIEWS = ['list', 'summary', 'calibration', 'files'] as const;
-type View = (typeof VIEWS)[number] | 'job';
+const VIEWS = ['list', 'summary', 'files'] as const;
+/** Views without a tab of their own: one job (under the list) and furnace calibration (under the summary). */
+type View = (typeof VIEWS)[number] | 'job' | 'calibration';
 
 function viewOf(path: readonly string[]): { view: View; jobId?: string } {
   if (path[0] === 'job' && path[1]) return { view: 'job', jobId: path[1] };
@@ -36,7 +37,7 @@ export default function LogScreen() {
     window.scrollTo(0, 0);
     requestAnimationFrame(() => document.querySelector<HTMLElement>('main h1')?.focus());
   }, [shownKey]);
-  const tab = view === 'job' ? 'list' : view;
+  const tab = view === 'job' ? 'list' : view === 'calibration' ? 'summary' : view;
   return (
     <div class="screen log">
       <nav class="view-tabs" aria-label={t('app.log.tabs.label')}>

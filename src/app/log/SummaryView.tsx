@@ -86,6 +86,9 @@ export function SummaryView() {
           </>
         )}
         <p class="note">{t('app.log.summary.differenceNote')}</p>
+        <a class="button" href={hrefFor('log', 'calibration')}>
+          {t('app.log.summary.calibrate')}
+        </a>
       </section>
     </>
   );

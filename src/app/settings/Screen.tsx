@@ -12,6 +12,8 @@ import { TextField } from '../ui/TextField';
 import { useScreenContext } from '../ui/screenContext';
 import { temperatureDifferenceText } from '../ui/fieldText';
 import { UNIT_CHOICES, UNIT_SYSTEMS, type DisplayQuantity, type UnitSystem } from '../ui/units';
+import { hrefFor } from '../shell/route';
+import { calibrations } from './calibration';
 import { readBeta, readBetaRange, readMargin, readThreshold, readTolerance, setLanguage, settings, THEMES } from './state';
 import './screen.css';
 
@@ -19,7 +21,7 @@ import './screen.css';
 const LANGUAGE_NAMES: Record<Language, string> = { en: 'English', es: 'Español', de: 'Deutsch' };
 
 export default function SettingsScreen() {
-  const { t, word, units, locale } = useScreenContext();
+  const { t, word, units, locale, show } = useScreenContext();
   const s = settings.value;
   const tolerance = readTolerance(s.temperatureTolerance);
   const betaRange = readBetaRange(s.betaRangeMin, s.betaRangeMax);
@@ -113,11 +115,27 @@ export default function SettingsScreen() {
           error={tolerance.ok ? undefined : word(tolerance.error)}
           hint={t('app.settings.toleranceHint')}
         />
-        <div class="field-grid">
-          <NumberField id="settings-beta-min" label={t('app.settings.betaRangeMin')} unitLabel={UNIT_SYMBOLS.beta7} value={s.betaRangeMin} onInput={(v) => patch(settings, { betaRangeMin: v })} error={betaRangeError('betaRangeMin')} />
-          <NumberField id="settings-beta-max" label={t('app.settings.betaRangeMax')} unitLabel={UNIT_SYMBOLS.beta7} value={s.betaRangeMax} onInput={(v) => patch(settings, { betaRangeMax: v })} error={betaRangeError('betaRangeMax')} />
-        </div>
+        <NumberField id="settings-beta-min" label={t('app.settings.betaRangeMin')} unitLabel={UNIT_SYMBOLS.beta7} value={s.betaRangeMin} onInput={(v) => patch(settings, { betaRangeMin: v })} error={betaRangeError('betaRangeMin')} />
+        <NumberField id="settings-beta-max" label={t('app.settings.betaRangeMax')} unitLabel={UNIT_SYMBOLS.beta7} value={s.betaRangeMax} onInput={(v) => patch(settings, { betaRangeMax: v })} error={betaRangeError('betaRangeMax')} />
         <p class="note">{t('app.settings.betaRangeHint')}</p>
+      </section>
+      <section class="card" aria-labelledby="settings-calibration">
+        <h2 id="settings-calibration">{t('app.settings.calibrationHeading')}</h2>
+        {calibrations.value.length === 0 ? (
+          <p class="note">{t('app.settings.calibrationNone')}</p>
+        ) : (
+          <ul class="settings-calibrations">
+            {calibrations.value.map((c) => (
+              <li key={c.furnace}>
+                {t('app.calibration.furnaceHeading', { furnace: c.furnace })}: {t('app.calibration.factorValue', { factor: show.number(c.factor, 2) })} ·{' '}
+                {c.apply ? t('app.settings.calibrationOn') : t('app.settings.calibrationOff')}
+              </li>
+            ))}
+          </ul>
+        )}
+        <a class="button" href={hrefFor('log', 'calibration')}>
+          {t('app.settings.calibrationOpen')}
+        </a>
       </section>
       <section class="card" aria-labelledby="settings-shifts">
         <h2 id="settings-shifts">{t('app.settings.shiftsHeading')}</h2>

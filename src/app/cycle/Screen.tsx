@@ -1,12 +1,12 @@
 /** Cycle editor: steps (add, remove, reorder, duplicate), part shape, steel, model, threshold, furnace; results, range, chart and table. */
 import { useMemo } from 'preact/hooks';
-import { isModelId, MODEL_IDS } from '../../physics';
+import { isModelId } from '../../physics';
 import { factorOf } from '../settings/calibration';
 import { defaults, model, theme } from '../settings/state';
 import { Answer } from '../ui/Answer';
-import { ChoiceField } from '../ui/ChoiceField';
 import { CycleBand } from '../ui/CycleBand';
 import { FurnaceField } from '../ui/FurnaceField';
+import { ModelField } from '../ui/ModelField';
 import { patch } from '../ui/persist';
 import { ResultsCard } from '../ui/ResultsCard';
 import { ThresholdField } from '../ui/ThresholdField';
@@ -35,10 +35,6 @@ export default function CycleScreen() {
   const logEntry = useMemo(() => (result ? cycleLogEntry(result) : undefined), [result]);
   const canAdd = form.steps.length < MAX_STEPS;
   const set = (next: typeof form) => (cycleForm.value = next);
-  const modelChoices = [
-    { value: '', label: t('app.cycle.modelFromSettings', { model: t(`app.models.${model.value}`) }) },
-    ...MODEL_IDS.map((m) => ({ value: m, label: t(`app.models.${m}`) })),
-  ];
   return (
     <div class="screen cycle">
       <CycleTabs current="cycle" />
@@ -74,7 +70,7 @@ export default function CycleScreen() {
         <h2 id="cycle-part">{t('app.cycle.partHeading')}</h2>
         <ShapeFields idPrefix="cycle" shape={form.shape} size={form.size} onChange={(changes) => patch(cycleForm, changes)} error={word(errors.size)} ctx={ctx} />
         <SteelFields idPrefix="cycle-steel" steel={form.steel} onChange={(s) => patch(cycleForm, { steel: s })} errors={errors} word={word} />
-        <ChoiceField id="cycle-model" label={t('app.settings.model')} value={form.model} choices={modelChoices} onChange={(v) => patch(cycleForm, { model: v })} />
+        <ModelField id="cycle-model" value={form.model} onChange={(v) => patch(cycleForm, { model: v })} ctx={ctx} />
         <ThresholdField id="cycle-threshold" value={form.threshold} onInput={(v) => patch(cycleForm, { threshold: v })} error={word(errors.threshold)} show={show} />
         <FurnaceField id="cycle-furnace" model={isModelId(form.model) ? form.model : model.value} ctx={ctx} />
       </section>

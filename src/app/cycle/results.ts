@@ -26,8 +26,8 @@ export interface CycleResult {
   calibration: CalibrationState;
 }
 
-/** Recipe field names → form field names where they differ. */
-const FIELD_MAP: Record<string, string> = {
+/** Recipe field names → form field names where they differ (the planner's requests share them). */
+export const CYCLE_FIELD_MAP: Readonly<Record<string, string>> = {
   'steel.coreCarbonPct': 'coreCarbon',
   thresholdCarbonPct: 'threshold',
   'shape.thicknessMm': 'size',
@@ -43,6 +43,24 @@ export function formFields(form: CycleForm): ReadonlySet<string> {
     ...ALLOY_ELEMENTS.map((e) => `composition.${e}`),
     ...form.steps.flatMap((_, i) => ['durationH', 'startTempC', 'endTempC', 'carbonPotentialPct', 'betaMPerS'].map((f) => `steps.${i}.${f}`)),
   ]);
+}
+
+/** The form fields a cycle and a plan share: steel, model, ECD threshold, shape. */
+export type BaseForm = Pick<CycleForm, 'steel' | 'model' | 'threshold' | 'shape' | 'size'>;
+
+/** Steel, model, threshold and shape of a cycle or plan request (errors into `read`); undefined when a field cannot be read. */
+export function readBaseFields(form: BaseForm, settings: CycleDefaults, read: FieldReader): Omit<Recipe, 'steps' | 'name'> | undefined {
+  const coreCarbonPct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
+  const composition = read.value(readComposition(form.steel));
+  const threshold = read.value(readOptionalField(form.threshold, 'threshold'));
+  const shape = readShape(form.shape, form.size, read);
+  if (coreCarbonPct === undefined || !shape) return undefined;
+  return {
+    steel: { grade: form.steel.grade, coreCarbonPct, ...(composition ? { composition } : {}) },
+    model: isModelId(form.model) ? form.model : settings.model,
+    thresholdCarbonPct: threshold ?? settings.ecdThresholdPct,
+    shape,
+  };
 }
 
 export function buildRecipe(form: CycleForm, settings: CycleDefaults): { recipe?: Recipe; errors: FieldReader['errors'] } {
@@ -63,21 +81,9 @@ export function buildRecipe(form: CycleForm, settings: CycleDefaults): { recipe?
       betaMPerS: betaTyped === undefined ? settings.betaMPerS : betaTyped * BETA_INPUT_SCALE,
     };
   });
-  const coreCarbonPct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
-  const composition = read.value(readComposition(form.steel));
-  const threshold = read.value(readOptionalField(form.threshold, 'threshold'));
-  const shape = readShape(form.shape, form.size, read);
-  if (read.failed || coreCarbonPct === undefined || !shape) return { errors: read.errors };
-  return {
-    errors: {},
-    recipe: {
-      steel: { grade: form.steel.grade, coreCarbonPct, ...(composition ? { composition } : {}) },
-      model: isModelId(form.model) ? form.model : settings.model,
-      thresholdCarbonPct: threshold ?? settings.ecdThresholdPct,
-      shape,
-      steps: steps as RecipeStep[],
-    },
-  };
+  const base = readBaseFields(form, settings, read);
+  if (read.failed || !base) return { errors: read.errors };
+  return { errors: {}, recipe: { ...base, steps: steps as RecipeStep[] } };
 }
 
 export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<CycleResult> {
@@ -85,7 +91,7 @@ export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<
   if (!recipe) return { errors };
   const calibration: CalibrationState = settings.calibrationFor?.(recipe.model ?? settings.model) ?? { kind: 'none' };
   const simulation = simulate(recipe, factorOf(calibration));
-  if (!simulation.ok) return placeError(simulation.error, FIELD_MAP, formFields(form));
+  if (!simulation.ok) return placeError(simulation.error, CYCLE_FIELD_MAP, formFields(form));
   return { errors: {}, result: { recipe, simulation: simulation.value, calibration } };
 }
 

@@ -4,7 +4,7 @@
  * plan opened in the cycle editor or saved to the log.
  */
 import { useMemo } from 'preact/hooks';
-import { isModelId, MODEL_IDS } from '../../physics';
+import { isModelId } from '../../physics';
 import { cycleFormOfRecipe } from '../cycle/fromRecipe';
 import { CycleTabs } from '../cycle/CycleTabs';
 import { cycleLogEntry } from '../cycle/logEntry';
@@ -14,10 +14,10 @@ import { factorOf } from '../settings/calibration';
 import { defaults, model } from '../settings/state';
 import { hrefFor } from '../shell/route';
 import { Answer } from '../ui/Answer';
-import { ChoiceField } from '../ui/ChoiceField';
 import { CycleBand } from '../ui/CycleBand';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { FurnaceField } from '../ui/FurnaceField';
+import { ModelField } from '../ui/ModelField';
 import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
 import { ResultsCard } from '../ui/ResultsCard';
@@ -43,10 +43,6 @@ export default function PlanScreen() {
   const logEntry = useMemo(() => (result?.plan.reachable ? cycleLogEntry({ recipe: result.plan.recipe, simulation: result.plan.predicted, calibration: result.calibration }) : undefined), [result]);
   const formModel = isModelId(form.model) ? form.model : model.value;
   const betaPlaceholder = show.number(defaults.value.betaMPerS / 1e-7, 2);
-  const modelChoices = [
-    { value: '', label: t('app.cycle.modelFromSettings', { model: t(`app.models.${model.value}`) }) },
-    ...MODEL_IDS.map((m) => ({ value: m, label: t(`app.models.${m}`) })),
-  ];
   const openInEditor = () => {
     if (!result) return;
     cycleForm.value = cycleFormOfRecipe(result.plan.recipe, {
@@ -94,7 +90,7 @@ export default function PlanScreen() {
         <h2 id="plan-part">{t('app.cycle.partHeading')}</h2>
         <ShapeFields idPrefix="plan" shape={form.shape} size={form.size} onChange={(changes) => patch(planForm, changes)} error={word(errors.size)} ctx={ctx} />
         <SteelFields idPrefix="plan-steel" steel={form.steel} onChange={(s) => patch(planForm, { steel: s })} errors={errors} word={word} />
-        <ChoiceField id="plan-model" label={t('app.settings.model')} value={form.model} choices={modelChoices} onChange={(v) => patch(planForm, { model: v })} />
+        <ModelField id="plan-model" value={form.model} onChange={(v) => patch(planForm, { model: v })} ctx={ctx} />
         <FurnaceField id="plan-furnace" model={formModel} ctx={ctx} />
       </section>
 

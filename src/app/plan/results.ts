@@ -5,13 +5,11 @@
  */
 import { computed } from '@preact/signals';
 import { ALLOY_ELEMENTS, isModelId, planTwoStepCycle, type PlanResult } from '../../physics';
-import { cycleDefaults, type CycleDefaults } from '../cycle/results';
+import { CYCLE_FIELD_MAP, cycleDefaults, readBaseFields, type CycleDefaults } from '../cycle/results';
 import { factorOf, type CalibrationState } from '../settings/calibration';
 import { BETA_INPUT_SCALE } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
 import { FieldReader, placeError, type Outcome } from '../ui/outcome';
-import { readShape } from '../ui/shape';
-import { readComposition } from '../ui/steel';
 import { timed } from '../ui/timing';
 import { PHYSICS_UNITS } from '../ui/units';
 import { planForm, type PlanForm, type PotentialStepForm } from './state';
@@ -23,15 +21,7 @@ export interface PlanOutcome {
 }
 
 /** Request field paths → form fields where they differ (other errors sit on the field of the same path). */
-const FIELD_MAP: Record<string, string> = {
-  'steel.coreCarbonPct': 'coreCarbon',
-  thresholdCarbonPct: 'threshold',
-  'shape.thicknessMm': 'size',
-  'shape.diameterMm': 'size',
-  targetEcdMm: 'targetEcdMm.max',
-  targetSurfaceCarbonPct: 'targetSurfaceCarbonPct.max',
-  ...Object.fromEntries(ALLOY_ELEMENTS.map((e) => [`steel.composition.${e}`, `composition.${e}`])),
-};
+const FIELD_MAP: Record<string, string> = { ...CYCLE_FIELD_MAP, targetEcdMm: 'targetEcdMm.max', targetSurfaceCarbonPct: 'targetSurfaceCarbonPct.max' };
 
 const STEP_FIELDS = ['temperatureC', 'carbonPotentialPct', 'betaMPerS'];
 
@@ -56,10 +46,7 @@ function readStep(step: PotentialStepForm, name: string, read: FieldReader, defa
 /** The `plan` request of the form (numbers still unchecked: physics checks ranges), or the fields it cannot read. */
 export function buildPlanRequest(form: PlanForm, settings: CycleDefaults): { request?: Record<string, unknown>; errors: FieldReader['errors'] } {
   const read = new FieldReader();
-  const coreCarbonPct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
-  const composition = read.value(readComposition(form.steel));
-  const threshold = read.value(readOptionalField(form.threshold, 'threshold'));
-  const shape = readShape(form.shape, form.size, read);
+  const base = readBaseFields(form, settings, read);
   const boost = readStep(form.boost, 'boost', read, settings.betaMPerS);
   const diffuse = readStep(form.diffuse, 'diffuse', read, settings.betaMPerS);
   const hardening = form.hardening
@@ -76,14 +63,11 @@ export function buildPlanRequest(form: PlanForm, settings: CycleDefaults): { req
     min: read.value(readField(form.surfaceMin, 'targetSurfaceCarbonPct.min')),
     max: read.value(readField(form.surfaceMax, 'targetSurfaceCarbonPct.max')),
   };
-  if (read.failed || !shape) return { errors: read.errors };
+  if (read.failed || !base) return { errors: read.errors };
   return {
     errors: {},
     request: {
-      steel: { grade: form.steel.grade, coreCarbonPct, ...(composition ? { composition } : {}) },
-      model: isModelId(form.model) ? form.model : settings.model,
-      thresholdCarbonPct: threshold ?? settings.ecdThresholdPct,
-      shape,
+      ...base,
       boost,
       diffuse,
       ...(hardening ? { hardening } : {}),

@@ -1,0 +1,14 @@
+/** A calculation's own diffusivity model, or the one in the settings (the empty choice). */
+import { MODEL_IDS } from '../../physics';
+import { model } from '../settings/state';
+import { ChoiceField } from './ChoiceField';
+import type { ScreenContext } from './screenContext';
+
+export function ModelField({ id, value, onChange, ctx }: { id: string; value: string; onChange: (value: string) => void; ctx: ScreenContext }) {
+  const { t } = ctx;
+  const choices = [
+    { value: '', label: t('app.cycle.modelFromSettings', { model: t(`app.models.${model.value}`) }) },
+    ...MODEL_IDS.map((m) => ({ value: m, label: t(`app.models.${m}`) })),
+  ];
+  return <ChoiceField id={id} label={t('app.settings.model')} value={value} choices={choices} onChange={onChange} />;
+}

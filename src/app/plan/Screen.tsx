@@ -64,12 +64,20 @@ export default function PlanScreen() {
 
       <section class="card" aria-labelledby="plan-targets">
         <h2 id="plan-targets">{t('app.plan.targetsHeading')}</h2>
-        <div class="field-grid">
-          <NumberField id="plan-ecd-min" label={t('app.plan.ecdMin')} unit={units.depth} value={form.ecdMin} onInput={(v) => patch(planForm, { ecdMin: v })} error={word(errors['targetEcdMm.min'])} />
-          <NumberField id="plan-ecd-max" label={t('app.plan.ecdMax')} unit={units.depth} value={form.ecdMax} onInput={(v) => patch(planForm, { ecdMax: v })} error={word(errors['targetEcdMm.max'])} />
-          <NumberField id="plan-surface-min" label={t('app.plan.surfaceMin')} unitLabel={UNIT_SYMBOLS.pctC} value={form.surfaceMin} onInput={(v) => patch(planForm, { surfaceMin: v })} error={word(errors['targetSurfaceCarbonPct.min'])} />
-          <NumberField id="plan-surface-max" label={t('app.plan.surfaceMax')} unitLabel={UNIT_SYMBOLS.pctC} value={form.surfaceMax} onInput={(v) => patch(planForm, { surfaceMax: v })} error={word(errors['targetSurfaceCarbonPct.max'])} />
-        </div>
+        <fieldset class="plan-group plan-range">
+          <legend>{t('app.plan.ecdTarget')}</legend>
+          <div class="field-grid">
+            <NumberField id="plan-ecd-min" label={t('app.plan.atLeast')} unit={units.depth} value={form.ecdMin} onInput={(v) => patch(planForm, { ecdMin: v })} error={word(errors['targetEcdMm.min'])} />
+            <NumberField id="plan-ecd-max" label={t('app.plan.atMost')} unit={units.depth} value={form.ecdMax} onInput={(v) => patch(planForm, { ecdMax: v })} error={word(errors['targetEcdMm.max'])} />
+          </div>
+        </fieldset>
+        <fieldset class="plan-group plan-range">
+          <legend>{t('app.plan.surfaceTarget')}</legend>
+          <div class="field-grid">
+            <NumberField id="plan-surface-min" label={t('app.plan.atLeast')} unitLabel={UNIT_SYMBOLS.pctC} value={form.surfaceMin} onInput={(v) => patch(planForm, { surfaceMin: v })} error={word(errors['targetSurfaceCarbonPct.min'])} />
+            <NumberField id="plan-surface-max" label={t('app.plan.atMost')} unitLabel={UNIT_SYMBOLS.pctC} value={form.surfaceMax} onInput={(v) => patch(planForm, { surfaceMax: v })} error={word(errors['targetSurfaceCarbonPct.max'])} />
+          </div>
+        </fieldset>
         <ThresholdField id="plan-threshold" value={form.threshold} onInput={(v) => patch(planForm, { threshold: v })} error={word(errors.threshold)} show={show} />
       </section>
 

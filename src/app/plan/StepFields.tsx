@@ -19,7 +19,7 @@ export function StepFields({ name, step, onChange, errors, betaPlaceholder, ctx 
   const id = `plan-${name}`;
   const err = (field: string) => word(errors[`${name}.${field}`]);
   return (
-    <fieldset class="plan-step">
+    <fieldset class="plan-group plan-step">
       <legend>{t(`app.plan.steps.${name}`)}</legend>
       <div class="field-grid">
         <NumberField id={`${id}-temperature`} label={t('app.fields.temperature')} unit={units.temperature} value={step.temperature} onInput={(v) => onChange({ ...step, temperature: v })} error={err('temperatureC')} />

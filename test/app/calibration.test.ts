@@ -10,6 +10,7 @@ import { computeDepth } from '../../src/app/depth/results';
 import { depthView } from '../../src/app/depth/rows';
 import { DEFAULT_DEPTH_FORM } from '../../src/app/depth/state';
 import { calibrationCards } from '../../src/app/log/calibration';
+import { planRows } from '../../src/app/log/jobRows';
 import { calibrationState, factorOf, readCalibrations, type StoredCalibration } from '../../src/app/settings/calibration';
 import { makeShow } from '../../src/app/ui/show';
 import { createI18n } from '../../src/i18n/i18n';
@@ -75,6 +76,8 @@ describe('the calculators with a calibrated furnace', () => {
     const entry = depthLogEntry(out, 'sae-8620');
     expect(entry.furnace).toBe('F1');
     expect(entry.inputs).toMatchObject({ kind: 'depth', diffusivityFactor: 1.21, temperatureToleranceC: 8 });
+    // The saved job shows the factor it was predicted with.
+    expect(planRows(entry.steel, entry.inputs, { t, show, locale: 'en' }).find((r) => r.key === 'factor')?.value).toBe('D × 1.21');
   });
 
   it('depth: a calibration turned off changes nothing but is named; no furnace, no words', () => {

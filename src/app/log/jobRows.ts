@@ -36,6 +36,10 @@ export function planRows(steel: Pick<Steel, 'coreCarbonPct'> & { gradeName?: str
   if (inputs.carbonPotentialPct !== undefined) rows.push(row('potential', t('app.fields.carbonPotential'), show.carbon(inputs.carbonPotentialPct)));
   if (inputs.surfaceCarbonPct !== undefined) rows.push(row('surfaceSet', t('app.fields.surfaceCarbon'), show.carbon(inputs.surfaceCarbonPct)));
   if (inputs.thresholdCarbonPct !== undefined) rows.push(row('threshold', t('app.fields.threshold'), show.carbon(inputs.thresholdCarbonPct)));
+  // Predicted with a furnace's calibration: the record says so.
+  if (inputs.diffusivityFactor !== undefined && inputs.diffusivityFactor !== 1) {
+    rows.push(row('factor', t('app.calibration.factor'), t('app.calibration.factorValue', { factor: show.number(inputs.diffusivityFactor, 2) })));
+  }
   return rows;
 }
 

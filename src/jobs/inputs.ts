@@ -7,7 +7,7 @@ import * as v from 'valibot';
 import { MODEL_IDS } from '../physics/diffusivity';
 import type { Recipe } from '../physics/cycle/recipe';
 import { ALLOY_ELEMENT_MAX_PCT, MAX_CARBON_PCT } from '../physics/steel';
-import { DIFFUSIVITY_FACTOR_LIMITS, MAX_TEMPERATURE_TOLERANCE_C } from '../physics/validate';
+import { DIFFUSIVITY_FACTOR_LIMITS, MAX_TEMPERATURE_TOLERANCE_C, MAX_TOTAL_CASE_MARGIN_PCT } from '../physics/validate';
 
 export const ModelIdSchema = v.picklist(MODEL_IDS);
 
@@ -17,6 +17,8 @@ export const positiveNumber = () => v.pipe(v.number(), v.finite(), v.gtValue(0))
 export const textUpTo = (max: number) => v.pipe(v.string(), v.maxLength(max));
 
 export const CarbonPctSchema = numberBetween(0, MAX_CARBON_PCT);
+/** Total case ends this far above core carbon, %C (physics checkTotalCaseMargin). */
+const TotalCaseMarginSchema = v.pipe(v.number(), v.finite(), v.gtValue(0), v.maxValue(MAX_TOTAL_CASE_MARGIN_PCT));
 
 const elementPct = () => numberBetween(0, ALLOY_ELEMENT_MAX_PCT);
 export const CompositionSchema = v.strictObject({
@@ -39,6 +41,7 @@ const caseSpecEntries = {
   diffusivityFactor: v.optional(numberBetween(DIFFUSIVITY_FACTOR_LIMITS.min, DIFFUSIVITY_FACTOR_LIMITS.max)),
   /** Furnace temperature tolerance for the uncertainty band, ±°C. */
   temperatureToleranceC: v.optional(numberBetween(0, MAX_TEMPERATURE_TOLERANCE_C)),
+  totalCaseMarginPct: v.optional(TotalCaseMarginSchema),
 };
 
 export const DepthInputSchema = v.strictObject({
@@ -86,6 +89,7 @@ export const RecipeSchema = v.strictObject({
   }),
   model: v.optional(ModelIdSchema),
   thresholdCarbonPct: v.optional(CarbonPctSchema),
+  totalCaseMarginPct: v.optional(TotalCaseMarginSchema),
   shape: v.optional(PartShapeSchema),
   steps: v.pipe(v.array(RecipeStepSchema), v.minLength(1), v.maxLength(50)),
 });

@@ -15,7 +15,13 @@ import { asQuenchedHardnessHrc } from './hardness';
 import { fail, ok, type Result, type Warning } from './result';
 import { brentRoot } from './rootFinding';
 import { harrisTotalCaseDepthMm } from './rulesOfThumb';
-import { alloyFactor, DEFAULT_ECD_THRESHOLD_PCT, totalCaseThresholdPct, type Composition } from './steel';
+import {
+  alloyFactor,
+  DEFAULT_ECD_THRESHOLD_PCT,
+  TOTAL_CASE_MARGIN_PCT,
+  totalCaseThresholdPct,
+  type Composition,
+} from './steel';
 import { depthBand, DEFAULT_TEMPERATURE_TOLERANCE_C, type DepthBand } from './uncertainty';
 import { celsiusToKelvin, SECONDS_PER_HOUR } from './units';
 import {
@@ -25,6 +31,7 @@ import {
   checkDiffusivityFactor,
   checkTemperatureC,
   checkTemperatureTolerance,
+  checkTotalCaseMargin,
   checkTimeH,
   readChecked,
   readComposition,
@@ -54,6 +61,8 @@ export interface CaseSpec {
   diffusivityFactor: number;
   /** Furnace temperature tolerance for the uncertainty band, ±°C. */
   temperatureToleranceC: number;
+  /** Total case ends this far above core carbon, %C. */
+  totalCaseMarginPct: number;
 }
 
 export interface DepthFigures {
@@ -143,7 +152,12 @@ export function readCaseSpec(fields: Fields): Result<CaseSpec> {
   if (!tolerance.ok) return tolerance;
   const toleranceC = checkTemperatureTolerance(tolerance.value ?? DEFAULT_TEMPERATURE_TOLERANCE_C, 'temperatureToleranceC');
   if (!toleranceC.ok) return toleranceC;
+  const margin = readOptionalNumber(fields, 'totalCaseMarginPct');
+  if (!margin.ok) return margin;
+  const marginPct = checkTotalCaseMargin(margin.value ?? TOTAL_CASE_MARGIN_PCT, 'totalCaseMarginPct');
+  if (!marginPct.ok) return marginPct;
   return ok({
+    totalCaseMarginPct: marginPct.value,
     diffusivityFactor: diffusivityFactor.value,
     temperatureToleranceC: toleranceC.value,
     surfaceCarbonPct: surface.value,
@@ -166,7 +180,7 @@ function specDiffusivity(spec: CaseSpec, temperatureC: number, model: Diffusivit
 export function depthFigures(spec: CaseSpec, temperatureC: number, timeH: number, model = spec.model): DepthFigures {
   const D = specDiffusivity(spec, temperatureC, model);
   const timeS = timeH * SECONDS_PER_HOUR;
-  const totalThreshold = totalCaseThresholdPct(spec.coreCarbonPct);
+  const totalThreshold = totalCaseThresholdPct(spec.coreCarbonPct, spec.totalCaseMarginPct);
   const depthMm = (thresholdPct: number) =>
     thresholdPct >= spec.surfaceCarbonPct
       ? 0
@@ -195,7 +209,7 @@ export function evaluateCaseDepth(spec: CaseSpec, temperatureC: number, timeH: n
     carbonPotentialPct: spec.carbonPotentialPct,
     coreCarbonPct: spec.coreCarbonPct,
     thresholdCarbonPct: spec.thresholdCarbonPct,
-    totalCaseThresholdPct: totalCaseThresholdPct(spec.coreCarbonPct),
+    totalCaseThresholdPct: totalCaseThresholdPct(spec.coreCarbonPct, spec.totalCaseMarginPct),
     alloyFactor: spec.alloyFactor,
     diffusivityFactor: spec.diffusivityFactor,
     model: spec.model,

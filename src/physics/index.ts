@@ -19,4 +19,3 @@ export * from './cycle/recipe';
 export * from './cycle/readRecipe';
 export * from './cycle/simulate';
 export * from './cycle/band';
-export * from './totalCase';

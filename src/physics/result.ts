@@ -29,6 +29,7 @@ export const ERROR_CODES = [
   'beta.notPositive',
   'diffusivityFactor.outOfRange',
   'temperatureTolerance.outOfRange',
+  'totalCaseMargin.outOfRange',
   'solve.temperatureBelowRange',
   'solve.temperatureAboveRange',
   'solve.noConvergence',

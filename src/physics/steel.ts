@@ -53,8 +53,9 @@ export const DEFAULT_ECD_THRESHOLD_PCT = 0.4;
 /** Total case ends where carbon is core + 0.05 %C (common practice), wt%. */
 export const TOTAL_CASE_MARGIN_PCT = 0.05;
 
-export function totalCaseThresholdPct(coreCarbonPct: number): number {
-  return coreCarbonPct + TOTAL_CASE_MARGIN_PCT;
+/** Carbon where the total case ends: core plus a margin (default core + 0.05 %C, common practice). */
+export function totalCaseThresholdPct(coreCarbonPct: number, marginPct = TOTAL_CASE_MARGIN_PCT): number {
+  return coreCarbonPct + marginPct;
 }
 
 /** Highest carbon content accepted anywhere: the eutectic point of Fe–Fe₃C, 2.11 %C. */

@@ -71,6 +71,15 @@ export function checkDiffusivityFactor(value: number, field: string): Result<num
   return inRange(value, field, min, max, 'diffusivityFactor.outOfRange');
 }
 
+/** Largest total-case margin above core carbon accepted, %C. */
+export const MAX_TOTAL_CASE_MARGIN_PCT = 1;
+
+export function checkTotalCaseMargin(value: number, field: string): Result<number> {
+  return value > 0 && value <= MAX_TOTAL_CASE_MARGIN_PCT
+    ? ok(value)
+    : fail('totalCaseMargin.outOfRange', field, { value, max: MAX_TOTAL_CASE_MARGIN_PCT });
+}
+
 /** Widest furnace temperature tolerance accepted for the uncertainty band, ±°C. */
 export const MAX_TEMPERATURE_TOLERANCE_C = 50;
 

@@ -106,7 +106,7 @@ describe('the calculators with a calibrated furnace', () => {
   });
 
   it('cycle: the simulation runs with the model’s D × k, for the form’s own model', () => {
-    const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, betaMPerS: 1.5e-7 };
+    const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: 0.05, betaMPerS: 1.5e-7 };
     const out = computeCycle(DEFAULT_CYCLE_FORM, { ...settings, calibrationFor: (m) => calibrationState([f1], 'F1', m) }).result!;
     const direct = runCycle(out.recipe, 1, { diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS.agren.diffusivity, 1.21) });
     expect(out.simulation.effectiveCaseDepthMm).toBeCloseTo(direct.effectiveCaseDepthMm, 12);

@@ -7,7 +7,7 @@ import { addStep, DEFAULT_CYCLE_FORM, duplicateStep, MAX_STEPS, moveStep, remove
 import { field } from '../../src/app/ui/fieldText';
 import { caseDepth } from '../../src/physics';
 
-const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, betaMPerS: 1.5e-7 };
+const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: 0.05, betaMPerS: 1.5e-7 };
 
 describe('cycle step list', () => {
   const f = DEFAULT_CYCLE_FORM;

@@ -16,6 +16,7 @@ const physicsRequest = {
   model: 'agren',
   composition: { Si: 0.25, Mn: 0.8, Cr: 0.5, Ni: 0.55, Mo: 0.2 },
   temperatureToleranceC: 8,
+  totalCaseMarginPct: 0.05,
 };
 
 describe('computeDepth', () => {
@@ -24,7 +25,6 @@ describe('computeDepth', () => {
     const expected = caseDepth(physicsRequest);
     expect(expected.ok).toBe(true);
     expect(out.result?.figures).toEqual(expected.ok ? expected.value : undefined);
-    expect(out.result?.totalCaseMm).toBeCloseTo(expected.ok ? expected.value.totalCaseDepthMm : Number.NaN, 12);
   });
 
   it('accepts a decimal comma and reads °F and minutes in their units (1697 °F = 925 °C, 360 min = 6 h)', () => {
@@ -56,8 +56,8 @@ describe('computeDepth', () => {
   });
 
   it('a wider total-case margin gives a shallower total case', () => {
-    const narrow = computeDepth(DEFAULT_DEPTH_FORM, settings).result?.totalCaseMm ?? Number.NaN;
-    const wide = computeDepth(DEFAULT_DEPTH_FORM, { ...settings, totalCaseMarginPct: 0.1 }).result?.totalCaseMm ?? Number.NaN;
+    const narrow = computeDepth(DEFAULT_DEPTH_FORM, settings).result?.figures.totalCaseDepthMm ?? Number.NaN;
+    const wide = computeDepth(DEFAULT_DEPTH_FORM, { ...settings, totalCaseMarginPct: 0.1 }).result?.figures.totalCaseDepthMm ?? Number.NaN;
     expect(wide).toBeLessThan(narrow);
   });
 });

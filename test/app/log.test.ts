@@ -74,7 +74,7 @@ describe('what the calculators hand to the log', () => {
   });
 
   it('the cycle editor hands over its whole recipe and the simulated depths (no band)', () => {
-    const outcome = computeCycle(DEFAULT_CYCLE_FORM, { model: 'agren', ecdThresholdPct: 0.4, betaMPerS: 1.5e-7 });
+    const outcome = computeCycle(DEFAULT_CYCLE_FORM, { model: 'agren', ecdThresholdPct: 0.4, totalCaseMarginPct: 0.05, betaMPerS: 1.5e-7 });
     expect(outcome.result).toBeDefined();
     const entry = cycleLogEntry(outcome.result!);
     expect(v.safeParse(JobDraftSchema, draftOf(typed, entry)).success).toBe(true);

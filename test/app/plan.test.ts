@@ -12,7 +12,7 @@ import { makeShow } from '../../src/app/ui/show';
 import { createI18n } from '../../src/i18n/i18n';
 import { planTwoStepCycle, runCycle, type Recipe } from '../../src/physics';
 
-const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, betaMPerS: 1.5e-7 };
+const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: 0.05, betaMPerS: 1.5e-7 };
 const form = (changes: Partial<PlanForm>): PlanForm => ({ ...DEFAULT_PLAN_FORM, ...changes });
 const t = createI18n('en').t;
 const metric = makeShow({ temperature: 'C', depth: 'mm', time: 'h' }, 'en');

@@ -107,6 +107,20 @@ describe('properties', () => {
   });
 });
 
+describe('total-case margin', () => {
+  it('defaults to core + 0.05 %C (common practice); a wider margin gives a shallower total case', () => {
+    const standard = value(caseDepth(base));
+    const wide = value(caseDepth({ ...base, totalCaseMarginPct: 0.1 }));
+    expect(standard.totalCaseThresholdPct).toBeCloseTo(0.25, 12);
+    expect(wide.totalCaseThresholdPct).toBeCloseTo(0.3, 12);
+    expect(wide.totalCaseDepthMm).toBeLessThan(standard.totalCaseDepthMm);
+    expect(wide.effectiveCaseDepthMm).toBe(standard.effectiveCaseDepthMm);
+  });
+  it('a margin reaching the surface carbon leaves no total case', () => {
+    expect(value(caseDepth({ ...base, totalCaseMarginPct: 0.8 })).totalCaseDepthMm).toBe(0);
+  });
+});
+
 describe('furnace calibration factor on D', () => {
   it('a factor k scales the closed-form depth by √k', () => {
     const plain = ecd(base);

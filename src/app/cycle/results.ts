@@ -15,6 +15,7 @@ import { cycleForm, type CycleForm } from './state';
 export interface CycleDefaults {
   model: DiffusivityModelId;
   ecdThresholdPct: number;
+  totalCaseMarginPct: number;
   betaMPerS: number;
   /** The chosen furnace's calibration for a model (none: uncalibrated). */
   calibrationFor?: (model: DiffusivityModelId) => CalibrationState;
@@ -59,6 +60,7 @@ export function readBaseFields(form: BaseForm, settings: CycleDefaults, read: Fi
     steel: { grade: form.steel.grade, coreCarbonPct, ...(composition ? { composition } : {}) },
     model: isModelId(form.model) ? form.model : settings.model,
     thresholdCarbonPct: threshold ?? settings.ecdThresholdPct,
+    totalCaseMarginPct: settings.totalCaseMarginPct,
     shape,
   };
 }
@@ -102,6 +104,7 @@ export const cycleDefaults = computed<CycleDefaults>(() => {
   return {
     model: model.value,
     ecdThresholdPct: defaults.value.ecdThresholdPct,
+    totalCaseMarginPct: defaults.value.totalCaseMarginPct,
     betaMPerS: defaults.value.betaMPerS,
     calibrationFor: (m) => calibrationState(list, furnace, m),
   };

@@ -34,7 +34,7 @@ export function depthLogEntry(result: DepthResult, gradeId: string): LogEntry {
     inputs,
     prediction: {
       effectiveCaseDepthMm: f.effectiveCaseDepthMm,
-      totalCaseDepthMm: result.totalCaseMm ?? f.totalCaseDepthMm,
+      totalCaseDepthMm: f.totalCaseDepthMm,
       surfaceCarbonPct: f.surfaceCarbonPct,
       model: f.model,
       timeH: f.timeH,

@@ -8,7 +8,6 @@ import {
   caseDepth,
   temperatureForCaseDepth,
   timeForCaseDepth,
-  totalCaseDepthForMarginMm,
   type CaseDepthResult,
   type Composition,
   type DiffusivityModelId,
@@ -37,10 +36,10 @@ export interface DepthRequest {
   /** The chosen furnace's calibration factor on D, when one is applied. */
   diffusivityFactor?: number;
   temperatureToleranceC: number;
+  totalCaseMarginPct: number;
 }
 
 interface Solved {
-  totalCaseMm: number | undefined;
   request: DepthRequest;
   calibration: CalibrationState;
 }
@@ -116,13 +115,12 @@ export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<
     composition,
     ...(factor === 1 ? {} : { diffusivityFactor: factor }),
     temperatureToleranceC: settings.temperatureToleranceC,
+    totalCaseMarginPct: settings.totalCaseMarginPct,
   };
   const calculated =
     mode === 'time' ? timeForCaseDepth(request) : mode === 'temperature' ? temperatureForCaseDepth(request) : caseDepth(request);
   if (!calculated.ok) return placeError(calculated.error, FIELD_MAP, FORM_FIELDS);
-  const total = totalCaseDepthForMarginMm(calculated.value, settings.totalCaseMarginPct);
-  const totalCaseMm = total.ok ? total.value : undefined;
-  return { errors: {}, result: { solveFor: mode, figures: calculated.value, totalCaseMm, request, calibration } as DepthResult };
+  return { errors: {}, result: { solveFor: mode, figures: calculated.value, request, calibration } as DepthResult };
 }
 
 export const depthOutcome = computed(() =>

@@ -34,7 +34,7 @@ export function depthView(result: DepthResult, t: TFunction, show: Show, marginP
     {
       key: 'total',
       label: t('app.depth.totalCase', { margin: show.carbon(marginPct) }),
-      value: result.totalCaseMm === undefined ? show.depth(Number.NaN) : show.depth(result.totalCaseMm),
+      value: show.depth(f.totalCaseDepthMm),
     },
     { key: 'sqrtDt', label: t('app.depth.sqrtDt'), value: show.depth(f.sqrtDtMm), detail: t('app.depth.sqrtDtDetail') },
     { key: 'harris', label: t('app.depth.harris'), value: show.depth(f.harrisDepthMm), detail: t('app.depth.harrisDetail') },

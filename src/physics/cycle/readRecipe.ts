@@ -9,6 +9,7 @@ import {
   asFields,
   checkBeta,
   checkCarbonPct,
+  checkTotalCaseMargin,
   checkTimeH,
   MAX_TIME_H,
   readChecked,
@@ -161,7 +162,14 @@ export function readCycleBase(f: Fields): Result<CycleBase> {
   }
   const shape = under('shape', readShape(f.shape));
   if (!shape.ok) return shape;
+  const margin = readOptionalNumber(f, 'totalCaseMarginPct');
+  if (!margin.ok) return margin;
   const base: CycleBase = { steel: steel.value, model: model.value, thresholdCarbonPct, shape: shape.value };
+  if (margin.value !== undefined) {
+    const checked = checkTotalCaseMargin(margin.value, 'totalCaseMarginPct');
+    if (!checked.ok) return checked;
+    base.totalCaseMarginPct = checked.value;
+  }
   const name = text(f.name);
   if (name !== undefined) base.name = name;
   return ok(base);

@@ -42,6 +42,8 @@ export interface Recipe {
   steel: SteelSpec;
   model?: DiffusivityModelId;
   thresholdCarbonPct?: number;
+  /** Total case ends this far above core carbon, %C (default TOTAL_CASE_MARGIN_PCT). */
+  totalCaseMarginPct?: number;
   shape?: PartShape;
   steps: RecipeStep[];
 }

@@ -61,7 +61,7 @@ function surfaceHistory(run: SolverRun): SurfaceHistoryPoint[] {
 export function runCycle(recipe: Recipe, resolution = 1, options: Omit<CycleOptions, 'resolution'> = {}): SimulationResult {
   const run = solveRecipe(recipe, { ...options, resolution });
   const effectiveM = depthToCarbonM(run, recipe.thresholdCarbonPct ?? DEFAULT_ECD_THRESHOLD_PCT);
-  const totalM = depthToCarbonM(run, totalCaseThresholdPct(recipe.steel.coreCarbonPct));
+  const totalM = depthToCarbonM(run, totalCaseThresholdPct(recipe.steel.coreCarbonPct, recipe.totalCaseMarginPct));
   const totalCaseDepthMm = totalM * 1e3;
   return {
     effectiveCaseDepthMm: effectiveM * 1e3,

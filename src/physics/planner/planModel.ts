@@ -40,12 +40,20 @@ export class PlanModel {
 
   /** The recipe for these times; a step of zero length is left out. */
   recipe(boostH: number, diffuseH: number): Recipe {
-    const { boost, diffuse, hardening, name, steel, model, thresholdCarbonPct, shape } = this.request;
+    const { boost, diffuse, hardening, name, steel, model, thresholdCarbonPct, totalCaseMarginPct, shape } = this.request;
     const steps: RecipeStep[] = [];
     if (boostH > 0) steps.push(soak(PLAN_STEP_LABELS.boost, boostH, boost));
     if (diffuseH > 0) steps.push(soak(PLAN_STEP_LABELS.diffuse, diffuseH, diffuse));
     if (hardening) steps.push(soak(PLAN_STEP_LABELS.hardening, hardening.timeH, { ...diffuse, temperatureC: hardening.temperatureC }));
-    return { ...(name === undefined ? {} : { name }), steel, model, thresholdCarbonPct, shape, steps };
+    return {
+      ...(name === undefined ? {} : { name }),
+      ...(totalCaseMarginPct === undefined ? {} : { totalCaseMarginPct }),
+      steel,
+      model,
+      thresholdCarbonPct,
+      shape,
+      steps,
+    };
   }
 
   /** ECD and surface carbon after `carburizeH` hours of boost and diffuse with `boostShare` of it boost. */

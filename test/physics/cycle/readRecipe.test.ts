@@ -47,6 +47,7 @@ describe('readRecipe: defaults', () => {
 const errorCases: [string, unknown, string, string | undefined][] = [
   ['request not an object', [1, 2], 'request.notObject', undefined],
   ['steel missing', { steps: [step] }, 'field.missing', 'steel'],
+  ['total-case margin above 1 %C', { ...valid, totalCaseMarginPct: 1.5 }, 'totalCaseMargin.outOfRange', 'totalCaseMarginPct'],
   ['steel not an object', { ...valid, steel: 3 }, 'request.notObject', 'steel'],
   ['core carbon missing', { ...valid, steel: {} }, 'field.missing', 'steel.coreCarbonPct'],
   ['core carbon negative', { ...valid, steel: { coreCarbonPct: -0.1 } }, 'carbon.negative', 'steel.coreCarbonPct'],
@@ -79,6 +80,16 @@ const errorCases: [string, unknown, string, string | undefined][] = [
   ['β zero', withStep({ betaMPerS: 0 }), 'beta.notPositive', 'steps.1.betaMPerS'],
   ['duration infinite', withStep({ durationH: Number.POSITIVE_INFINITY }), 'field.notNumber', 'steps.1.durationH'],
 ];
+
+describe('total-case margin', () => {
+  it('a wider margin above core gives a shallower total case and leaves the ECD alone', () => {
+    const standard = simulateCycle(valid);
+    const wide = simulateCycle({ ...valid, totalCaseMarginPct: 0.1 });
+    if (!standard.ok || !wide.ok) throw new Error('expected results');
+    expect(wide.value.totalCaseDepthMm).toBeLessThan(standard.value.totalCaseDepthMm);
+    expect(wide.value.effectiveCaseDepthMm).toBe(standard.value.effectiveCaseDepthMm);
+  });
+});
 
 describe('readRecipe and simulateCycle: each bad input returns its code and field', () => {
   it.each(errorCases)('%s', (_, request, code, field) => {

@@ -63,8 +63,9 @@ const EXTENSIONS = ['', '.ts', '.tsx', '/index.ts', '/index.tsx'];
 export function resolveImport(fromPath: string, specifier: string): string | undefined {
   if (!specifier.startsWith('.')) return undefined;
   const base = join(dirname(resolve(ROOT, fromPath)), specifier);
-  for (const extension of EXTENSIONS) {
-    const candidate = base + extension;
+  // As TypeScript resolves: `./x.js` may name the source `./x.ts`.
+  const candidates = [...EXTENSIONS.map((extension) => base + extension), base.replace(/\.js$/u, '.ts'), base.replace(/\.jsx$/u, '.tsx')];
+  for (const candidate of candidates) {
     if (existsSync(candidate) && statSync(candidate).isFile()) return repoPath(candidate);
   }
   throw new Error(`${fromPath}: cannot resolve ${specifier}`);

@@ -64,7 +64,7 @@ describe('locale in two parts', () => {
     assert.ok(rest.served > 0);
     await assertNoRawKey(page, 'log screen, while it opened and once open');
 
-    await context.unroute(REST_CHUNK);
+    await context.unrouteAll({ behavior: 'wait' }); // lets held-back requests (the worker's precache too) finish
     await waitUntilOfflineReady(page);
     await context.setOffline(true);
     await page.goto(`${BASE_URL}#/settings`);

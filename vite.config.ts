@@ -3,6 +3,8 @@ import { fileURLToPath } from 'node:url';
 import preact from '@preact/preset-vite';
 import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
+// With an extension, as Vite's config loader asks; TypeScript maps `.js` to the `.ts` source.
+import { localeChunks } from './src/i18n/build/localeChunks.js';
 
 /** The release recorded with every logged prediction (src/app/version.ts). */
 const { version } = JSON.parse(readFileSync('package.json', 'utf8')) as { version: string };
@@ -11,6 +13,8 @@ export default defineConfig({
   define: { __APP_VERSION__: JSON.stringify(version) },
   plugins: [
     preact(),
+    // Each locale in two chunks: the first screen's messages and the rest (src/i18n/localeParts.ts).
+    localeChunks(),
     VitePWA({
       strategies: 'generateSW',
       // The update waits for the user's go-ahead (src/pwa/UpdatePrompt.tsx).
@@ -55,7 +59,7 @@ export default defineConfig({
     rolldownOptions: {
       // The stdlib math packages are pure CommonJS functions: let unused ones (e.g. erfcx,
       // needed only by the mass-transfer solution) drop out of the first screen's bundle; JSON
-      // (the locales) is data, so the app's lazy locale loading is not undone by a static import.
+      // (the locales, which the CLI set-up imports) is data, so it never rides along with the app's code.
       // Physics is pure by design, so modules of it that a screen does not use drop out as well.
       treeshake: {
         moduleSideEffects: (id: string) =>

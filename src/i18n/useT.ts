@@ -1,18 +1,23 @@
 /**
- * The app's language as a signal and a `useT()` hook bound to it. The app loads
- * only the locale it shows (each is its own small chunk, all precached for offline
- * use); switching loads the next one first, then changes the signal.
+ * The app's language as a signal and a `useT()` hook bound to it. Each language comes in two
+ * chunks split at build time (src/i18n/localeParts.ts): the first screen's messages, which the
+ * first paint waits for, and the rest, loaded right after into the same namespace (both are
+ * precached for offline use). Code that shows rest messages (the lazily loaded screens and
+ * panels) waits for them with `withFullLocale`. Switching loads both parts first, then changes
+ * the signal, so the current language never lacks a message once the start-up is over.
  */
-import { signal } from '@preact/signals';
+import { computed, signal } from '@preact/signals';
 import i18next, { type TFunction } from 'i18next';
 import { isLanguage, LANGUAGES, type Language } from './i18n';
+import type { LocalePart, Messages } from './localeParts';
 
-type Resources = Record<string, unknown>;
+type Loader = () => Promise<{ default: Messages }>;
 
-const LOADERS: Record<Language, () => Promise<{ default: Resources }>> = {
-  en: () => import('../../locales/en/translation.json'),
-  es: () => import('../../locales/es/translation.json'),
-  de: () => import('../../locales/de/translation.json'),
+// Literal specifiers, so the bundler makes one chunk per part (src/i18n/build/localeChunks.ts).
+const LOADERS: Record<Language, Record<LocalePart, Loader>> = {
+  en: { first: () => import('virtual:casefront-locale/en/first'), rest: () => import('virtual:casefront-locale/en/rest') },
+  es: { first: () => import('virtual:casefront-locale/es/first'), rest: () => import('virtual:casefront-locale/es/rest') },
+  de: { first: () => import('virtual:casefront-locale/de/first'), rest: () => import('virtual:casefront-locale/de/rest') },
 };
 
 /** The browser's preferred language when we speak it, else English. */
@@ -24,8 +29,15 @@ export function preferredLanguage(candidates: readonly string[]): Language {
   return 'en';
 }
 
-/** Current language; only ever set to a language whose locale is loaded. */
+/** Current language; only ever set to a language whose first part (at start-up) or both parts are loaded. */
 export const language = signal<Language>('en');
+
+/** The parts merged so far, as `<lang>/<part>`; useT reads it, so text re-renders when a part arrives. */
+const loadedParts = signal<ReadonlySet<string>>(new Set());
+const pending = new Map<string, Promise<void>>();
+
+/** Whether every message of the current language is loaded. */
+export const fullLocale = computed(() => loadedParts.value.has(`${language.value}/rest`));
 
 const instance = i18next.createInstance();
 void instance.init({
@@ -40,13 +52,51 @@ void instance.init({
 
 const fixed = new Map<Language, TFunction>(LANGUAGES.map((l) => [l, instance.getFixedT(l)]));
 
-/** Loads a locale's messages (once) and makes it the current language. */
-export async function switchLanguage(lng: Language): Promise<void> {
-  if (!instance.hasResourceBundle(lng, 'translation')) {
-    const messages = await LOADERS[lng]();
-    instance.addResourceBundle(lng, 'translation', messages.default);
+/** Loads one part of a language into the instance, once; a failed load is tried again on the next call. */
+function loadPart(lng: Language, part: LocalePart): Promise<void> {
+  const id = `${lng}/${part}`;
+  if (loadedParts.peek().has(id)) return Promise.resolve();
+  let loading = pending.get(id);
+  if (!loading) {
+    loading = LOADERS[lng][part]()
+      .then((messages) => {
+        // Deep merge: the two parts share subtrees (app.band, app.log, …).
+        instance.addResourceBundle(lng, 'translation', messages.default, true, false);
+        loadedParts.value = new Set(loadedParts.peek()).add(id);
+      })
+      .finally(() => pending.delete(id));
+    pending.set(id, loading);
   }
+  return loading;
+}
+
+/**
+ * Start-up: waits for the first screen's messages only, makes `lng` the language, and starts
+ * loading the rest (awaited by whatever needs it, through `withFullLocale`).
+ */
+export async function startLanguage(lng: Language): Promise<void> {
+  await loadPart(lng, 'first');
   language.value = lng;
+  loadPart(lng, 'rest').catch(() => {
+    // Offline before the cache was filled: a lazy screen asks again and shows "could not load".
+  });
+}
+
+/** Loads both parts of a language (once) and then makes it the current language. */
+export async function switchLanguage(lng: Language): Promise<void> {
+  await Promise.all([loadPart(lng, 'first'), loadPart(lng, 'rest')]);
+  language.value = lng;
+}
+
+/** Resolves once every message of the current language is loaded. */
+export function fullLocaleLoaded(): Promise<void> {
+  const lng = language.peek();
+  return Promise.all([loadPart(lng, 'first'), loadPart(lng, 'rest')]).then(() => undefined);
+}
+
+/** A loader for code that shows messages outside the first part: resolves when both it and they are in. */
+export function withFullLocale<T>(load: () => Promise<T>): () => Promise<T> {
+  return () => Promise.all([load(), fullLocaleLoaded()]).then(([loaded]) => loaded);
 }
 
 /** The translate function for a language (for code outside components). */
@@ -54,8 +104,9 @@ export function tFor(lng: Language): TFunction {
   return fixed.get(lng)!;
 }
 
-/** Translate function of the current language; re-renders the caller when the language changes. */
+/** Translate function of the current language; re-renders the caller when the language changes or a part arrives. */
 export function useT(): TFunction {
+  void loadedParts.value;
   return tFor(language.value);
 }
 

@@ -3,20 +3,15 @@
  * user-visible attribute (aria-label, title, placeholder, alt, label, legend) that
  * contains a letter must come from t() (or data such as a grade name), never a string literal.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { readFileSync } from 'node:fs';
 import ts from 'typescript';
 import { describe, expect, it } from 'vitest';
+import { sourceFiles } from '../sourceFiles';
 
 const VISIBLE_ATTRIBUTES = new Set(['aria-label', 'title', 'placeholder', 'alt', 'label', 'legend', 'hint', 'unitLabel', 'message', 'aria-description']);
 const HAS_LETTER = /\p{L}/u;
 
-function tsxFiles(dir: string): string[] {
-  return readdirSync(dir).flatMap((name) => {
-    const path = join(dir, name);
-    return statSync(path).isDirectory() ? tsxFiles(path) : name.endsWith('.tsx') ? [path] : [];
-  });
-}
+const tsxFiles = (dir: string) => sourceFiles(dir, /\.tsx$/u);
 
 /** User-visible literals in one source text, as "line: text". */
 export function visibleLiterals(fileName: string, text: string): string[] {

@@ -26,8 +26,8 @@ import { createI18n } from '../../src/i18n/i18n';
 import { JobDraftSchema, JobSchema, OPEN_STATUSES, type Job } from '../../src/jobs';
 import { TOTAL_CASE_MARGIN_PCT } from '../../src/physics';
 import * as v from 'valibot';
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { readFileSync } from 'node:fs';
+import { sourceFiles } from '../sourceFiles';
 
 const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: TOTAL_CASE_MARGIN_PCT, temperatureToleranceC: 8 };
 const typed = { ...EMPTY_JOB_FORM, workOrder: 'WO-024117', partNumber: 'KR-2231', furnace: 'F1', operator: 'MK' };
@@ -187,14 +187,8 @@ describe('routes and dates', () => {
 });
 
 describe('text stays text', () => {
-  const sources = (dir: string): string[] =>
-    readdirSync(dir).flatMap((name) => {
-      const path = join(dir, name);
-      return statSync(path).isDirectory() ? sources(path) : /\.(ts|tsx)$/u.test(name) ? [path] : [];
-    });
-
   it('no code in the app writes markup from strings (notes and imported text are rendered by Preact, escaped)', () => {
-    const files = [...sources('src/app'), ...sources('src/pwa')];
+    const files = [...sourceFiles('src/app'), ...sourceFiles('src/pwa')];
     expect(files.length).toBeGreaterThan(40);
     const offenders = files.filter((file) => /dangerouslySetInnerHTML|\.innerHTML\b|\.outerHTML\b|insertAdjacentHTML|document\.write/u.test(readFileSync(file, 'utf8')));
     expect(offenders).toEqual([]);

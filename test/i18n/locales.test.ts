@@ -2,12 +2,12 @@
  * Every locale has exactly the same keys, every physics error and warning code has a
  * message in every locale, and every key the app asks for with a literal exists.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { LANGUAGES, RESOURCES } from '../../src/i18n/i18n';
 import { ERROR_CODES, WARNING_CODES } from '../../src/physics/result';
 import { UNIT_WARNINGS } from '../../src/app/ui/warningText';
+import { sourceFiles } from '../sourceFiles';
 
 function leafKeys(node: unknown, prefix = ''): string[] {
   if (typeof node !== 'object' || node === null) return [prefix];
@@ -16,13 +16,6 @@ function leafKeys(node: unknown, prefix = ''): string[] {
 
 function lookup(tree: unknown, key: string): unknown {
   return key.split('.').reduce<unknown>((node, part) => (typeof node === 'object' && node !== null ? (node as Record<string, unknown>)[part] : undefined), tree);
-}
-
-function sourceFiles(dir: string): string[] {
-  return readdirSync(dir).flatMap((name) => {
-    const path = join(dir, name);
-    return statSync(path).isDirectory() ? sourceFiles(path) : /\.(ts|tsx)$/.test(name) ? [path] : [];
-  });
 }
 
 const english = new Set(leafKeys(RESOURCES.en));

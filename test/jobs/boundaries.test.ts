@@ -3,21 +3,15 @@
  * (notes are data), it sends nothing off the device, it depends on physics but never on the
  * app, and papaparse is only loaded when a CSV is made.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { sourceFiles } from '../sourceFiles';
 
 const root = join(__dirname, '..', '..');
 const jobsDir = join(root, 'src', 'jobs');
 
-function sourceFiles(dir: string): string[] {
-  return readdirSync(dir).flatMap((name) => {
-    const path = join(dir, name);
-    return statSync(path).isDirectory() ? sourceFiles(path) : path.endsWith('.ts') ? [path] : [];
-  });
-}
-
-const sources = sourceFiles(jobsDir).map((path) => ({ path: relative(root, path), text: readFileSync(path, 'utf8') }));
+const sources = sourceFiles(jobsDir, /\.ts$/u).map((path) => ({ path: relative(root, path), text: readFileSync(path, 'utf8') }));
 
 const offenders = (pattern: RegExp) => sources.filter((s) => pattern.test(s.text)).map((s) => s.path);
 

@@ -4,7 +4,7 @@
  */
 import { computed, effect } from '@preact/signals';
 import type { Language } from '../../i18n/i18n';
-import { initialLanguage, language, switchLanguage } from '../../i18n/useT';
+import { initialLanguage, language, startLanguage, switchLanguage } from '../../i18n/useT';
 import {
   DEFAULT_ECD_THRESHOLD_PCT,
   DEFAULT_MODEL,
@@ -63,9 +63,9 @@ export const DEFAULT_SETTINGS: Settings = {
 
 export const settings = persisted<Settings>('settings', DEFAULT_SETTINGS);
 
-/** Loads the stored language (or the browser's preference) before the first render. */
+/** Loads the first screen's messages in the stored language (or the browser's preference) before the first render. */
 export function loadInitialLanguage(): Promise<void> {
-  return switchLanguage(initialLanguage(settings.value.language));
+  return startLanguage(initialLanguage(settings.value.language));
 }
 
 export async function setLanguage(lng: Language): Promise<void> {

@@ -1,8 +1,12 @@
-/** Shows the routed screen, loading its chunk the first time it is opened. */
+/**
+ * Shows the routed screen, loading its chunk the first time it is opened. A lazily loaded
+ * screen is shown only once its language's messages are all in (the first paint loads only
+ * the first screen's part), so no screen ever shows a raw key.
+ */
 import { signal } from '@preact/signals';
 import type { ComponentType } from 'preact';
 import { useEffect, useRef } from 'preact/hooks';
-import { useT } from '../../i18n/useT';
+import { fullLocale, useT, withFullLocale } from '../../i18n/useT';
 import type { ScreenId } from './route';
 import { FIRST_SCREEN, LOADERS } from './screens';
 
@@ -10,7 +14,7 @@ const loaded = signal<Partial<Record<ScreenId, ComponentType>>>({ depth: FIRST_S
 const failed = signal<Partial<Record<ScreenId, boolean>>>({});
 
 function load(id: Exclude<ScreenId, 'depth'>): void {
-  LOADERS[id]()
+  withFullLocale(LOADERS[id])()
     .then((mod) => {
       loaded.value = { ...loaded.value, [id]: mod.default };
     })
@@ -21,7 +25,7 @@ function load(id: Exclude<ScreenId, 'depth'>): void {
 
 export function ScreenView({ id }: { id: ScreenId }) {
   const t = useT();
-  const Screen = loaded.value[id];
+  const Screen = id === 'depth' || fullLocale.value ? loaded.value[id] : undefined;
   const shown = useRef<ScreenId | null>(null);
   useEffect(() => {
     if (!Screen) {

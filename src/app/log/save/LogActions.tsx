@@ -4,7 +4,7 @@
  */
 import type { ComponentType } from 'preact';
 import { useRef, useState } from 'preact/hooks';
-import { useT } from '../../../i18n/useT';
+import { useT, withFullLocale } from '../../../i18n/useT';
 import { hrefFor } from '../../shell/route';
 import type { LogEntry } from '../entry';
 
@@ -32,7 +32,8 @@ function LazyPanel<T>({ value, label, load, id }: { value: T | undefined; label:
     setSaved(undefined);
     setOpen(true);
     if (!Panel) {
-      load()
+      // The form's messages are in the locale's rest part.
+      withFullLocale(load)()
         .then((mod) => setPanel(() => mod.default))
         .catch(() => setFailed(true));
     }

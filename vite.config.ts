@@ -15,6 +15,12 @@ export default defineConfig({
     preact(),
     // Each locale in two chunks: the first screen's messages and the rest (src/i18n/localeParts.ts).
     localeChunks(),
+    // The dev server injects CSS as <style> tags; only there may styles be inline. The build keeps 'self'.
+    {
+      name: 'casefront-dev-inline-styles',
+      apply: 'serve',
+      transformIndexHtml: (html: string) => html.replace("style-src 'self'", "style-src 'self' 'unsafe-inline'"),
+    },
     VitePWA({
       strategies: 'generateSW',
       // The update waits for the user's go-ahead (src/pwa/UpdatePrompt.tsx).

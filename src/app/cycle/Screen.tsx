@@ -43,7 +43,7 @@ export default function CycleScreen() {
 
       <section aria-labelledby="cycle-steps">
         <h2 id="cycle-steps">{t('app.cycle.stepsHeading')}</h2>
-        <ol class="steps">
+        <ol class="card-stack steps">
           {form.steps.map((step, i) => (
             <StepCard
               key={step.key}

@@ -52,7 +52,7 @@ export function ListView() {
       </p>
       {list.state === 'ready' && jobs.length === 0 && <p class="note">{t('app.log.list.empty')}</p>}
       {jobs.length > 0 && (
-        <ul class="job-list">
+        <ul class="card-stack">
           {jobs.slice(0, shown).map((job) => (
             <JobCard key={job.id} job={job} t={t} show={show} locale={locale} />
           ))}

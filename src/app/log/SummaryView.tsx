@@ -61,7 +61,7 @@ export function SummaryView() {
         {summary.openItems.length === 0 ? (
           <p class="note">{t('app.log.summary.noOpen')}</p>
         ) : (
-          <ul class="job-list">
+          <ul class="card-stack">
             {summary.openItems.map((job) => (
               <JobCard key={job.id} job={job} t={t} show={show} locale={locale} />
             ))}

@@ -51,7 +51,7 @@ export default function RecoveryScreen() {
           <span>{t('app.recovery.temperatureColumn', { unit: UNIT_SYMBOLS[units.temperature] })}</span>
           <span />
         </div>
-        <ol class="readings">
+        <ol class="card-stack">
           {form.readings.map((reading, i) => (
             <li key={i} class="reading">
               <span class="reading-number" aria-hidden="true">

@@ -56,7 +56,11 @@ export default defineConfig({
   ],
   resolve: {
     // The furnace calibration's t quantile (stdlib) tests for generators with eval at load; the CSP refuses eval.
-    alias: { '@stdlib/assert-has-generator-support': fileURLToPath(new URL('./src/app/shims/hasGeneratorSupport.cjs', import.meta.url)) },
+    alias: {
+      '@stdlib/assert-has-generator-support': fileURLToPath(
+        new URL('./src/app/shims/hasGeneratorSupport.cjs', import.meta.url),
+      ),
+    },
   },
   build: {
     target: 'es2022',

@@ -59,7 +59,10 @@ const inputError = (error: InputError): CliError => ({
 });
 
 /** Runs one command on the request text; returns what to print and the exit code. */
-export function runCli(args: readonly string[], readInput: (file?: string) => string): { output: object; exitCode: number } {
+export function runCli(
+  args: readonly string[],
+  readInput: (file?: string) => string,
+): { output: object; exitCode: number } {
   const [name, file] = args;
   const command = name === undefined ? undefined : COMMANDS[name];
   if (!command) {
@@ -73,7 +76,10 @@ export function runCli(args: readonly string[], readInput: (file?: string) => st
   try {
     text = readInput(file);
   } catch {
-    return { output: { error: { code: 'cli.unreadable', message: t('cli.unreadable', { file: file ?? 'stdin' }) } }, exitCode: 1 };
+    return {
+      output: { error: { code: 'cli.unreadable', message: t('cli.unreadable', { file: file ?? 'stdin' }) } },
+      exitCode: 1,
+    };
   }
   let request: unknown;
   try {

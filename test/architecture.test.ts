@@ -17,19 +17,38 @@ interface Dependency {
 }
 
 function dependencies(path: string, text?: string): Dependency[] {
-  return importsOf(parseSource(path, text)).map((ref) => ({ from: path, line: ref.line, specifier: ref.specifier, target: resolveImport(path, ref.specifier) }));
+  return importsOf(parseSource(path, text)).map((ref) => ({
+    from: path,
+    line: ref.line,
+    specifier: ref.specifier,
+    target: resolveImport(path, ref.specifier),
+  }));
 }
 
-const layer = (path: string) => /^src\/(physics|jobs|app|i18n|pwa)\//u.exec(path)?.[1] ?? (path === 'src/cli.ts' ? 'cli' : 'other');
+const layer = (path: string) =>
+  /^src\/(physics|jobs|app|i18n|pwa)\//u.exec(path)?.[1] ?? (path === 'src/cli.ts' ? 'cli' : 'other');
 
 const describeDependency = (d: Dependency) => `${d.from}:${d.line} imports ${d.specifier}`;
 
 /** Physics may import its own modules and the @stdlib math packages, nothing else. */
 function physicsImportProblems(deps: Dependency[]): string[] {
-  return deps.filter((d) => (d.target ? layer(d.target) !== 'physics' : !d.specifier.startsWith('@stdlib/'))).map(describeDependency);
+  return deps
+    .filter((d) => (d.target ? layer(d.target) !== 'physics' : !d.specifier.startsWith('@stdlib/')))
+    .map(describeDependency);
 }
 
-const BROWSER_GLOBALS = new Set(['document', 'window', 'localStorage', 'sessionStorage', 'indexedDB', 'navigator', 'location', 'fetch', 'self', 'globalThis']);
+const BROWSER_GLOBALS = new Set([
+  'document',
+  'window',
+  'localStorage',
+  'sessionStorage',
+  'indexedDB',
+  'navigator',
+  'location',
+  'fetch',
+  'self',
+  'globalThis',
+]);
 
 /** Uses of browser globals (as values, not as property names or declared names). */
 function browserGlobals(path: string, text?: string): string[] {
@@ -38,9 +57,19 @@ function browserGlobals(path: string, text?: string): string[] {
   const visit = (node: ts.Node) => {
     if (ts.isIdentifier(node) && BROWSER_GLOBALS.has(node.text)) {
       const parent = node.parent;
-      const isMemberName = (ts.isPropertyAccessExpression(parent) && parent.name === node) || (ts.isPropertyAssignment(parent) && parent.name === node) || (ts.isQualifiedName(parent) && parent.right === node);
-      const isDeclaredName = (ts.isVariableDeclaration(parent) || ts.isParameter(parent) || ts.isPropertySignature(parent) || ts.isPropertyDeclaration(parent) || ts.isBindingElement(parent)) && parent.name === node;
-      if (!isMemberName && !isDeclaredName) found.push(`${path}:${source.getLineAndCharacterOfPosition(node.getStart()).line + 1}: ${node.text}`);
+      const isMemberName =
+        (ts.isPropertyAccessExpression(parent) && parent.name === node) ||
+        (ts.isPropertyAssignment(parent) && parent.name === node) ||
+        (ts.isQualifiedName(parent) && parent.right === node);
+      const isDeclaredName =
+        (ts.isVariableDeclaration(parent) ||
+          ts.isParameter(parent) ||
+          ts.isPropertySignature(parent) ||
+          ts.isPropertyDeclaration(parent) ||
+          ts.isBindingElement(parent)) &&
+        parent.name === node;
+      if (!isMemberName && !isDeclaredName)
+        found.push(`${path}:${source.getLineAndCharacterOfPosition(node.getStart()).line + 1}: ${node.text}`);
     }
     ts.forEachChild(node, visit);
   };
@@ -60,12 +89,24 @@ describe('architecture: the direction of dependencies', () => {
 
   it('the checks see what they look for (samples)', () => {
     const sample = (path: string, text: string) => dependencies(path, text);
-    expect(physicsImportProblems(sample('src/physics/x.ts', "import { h } from 'preact'; import erfc from '@stdlib/math-base-special-erfc'; import { a } from './units'; import { b } from '../app/ui/format'; const c = await import('idb');"))).toEqual([
-      "src/physics/x.ts:1 imports preact",
-      "src/physics/x.ts:1 imports ../app/ui/format",
-      "src/physics/x.ts:1 imports idb",
+    expect(
+      physicsImportProblems(
+        sample(
+          'src/physics/x.ts',
+          "import { h } from 'preact'; import erfc from '@stdlib/math-base-special-erfc'; import { a } from './units'; import { b } from '../app/ui/format'; const c = await import('idb');",
+        ),
+      ),
+    ).toEqual([
+      'src/physics/x.ts:1 imports preact',
+      'src/physics/x.ts:1 imports ../app/ui/format',
+      'src/physics/x.ts:1 imports idb',
     ]);
-    expect(browserGlobals('src/physics/x.ts', 'const a = window.innerWidth; const b = { document: 1 }; const c = x.localStorage; function f(navigator: string) { return indexedDB; }').map((f) => f.split(': ')[1])).toEqual(['window', 'indexedDB']);
+    expect(
+      browserGlobals(
+        'src/physics/x.ts',
+        'const a = window.innerWidth; const b = { document: 1 }; const c = x.localStorage; function f(navigator: string) { return indexedDB; }',
+      ).map((f) => f.split(': ')[1]),
+    ).toEqual(['window', 'indexedDB']);
   });
 
   it('physics imports only physics modules and @stdlib packages', () => {
@@ -77,7 +118,11 @@ describe('architecture: the direction of dependencies', () => {
   });
 
   it('the job log imports physics and packages, never the app, the service worker code or i18n', () => {
-    const wrong = jobs.flatMap((path) => dependencies(path)).filter((d) => (d.target ? !['jobs', 'physics'].includes(layer(d.target)) : /^(preact|@preact\/|i18next)/u.test(d.specifier)));
+    const wrong = jobs
+      .flatMap((path) => dependencies(path))
+      .filter((d) =>
+        d.target ? !['jobs', 'physics'].includes(layer(d.target)) : /^(preact|@preact\/|i18next)/u.test(d.specifier),
+      );
     expect(wrong.map(describeDependency)).toEqual([]);
   });
 
@@ -91,7 +136,9 @@ describe('architecture: the direction of dependencies', () => {
     const outside = [...physics, ...jobs, ...files('src/i18n'), ...files('src/pwa'), 'src/cli.ts'];
     const intoApp = outside.flatMap((path) => dependencies(path)).filter((d) => d.target && layer(d.target) === 'app');
     expect(intoApp.map(describeDependency)).toEqual([]);
-    const intoBuild = files('src').flatMap((path) => dependencies(path)).filter((d) => d.target?.startsWith('src/i18n/build/') && !d.from.startsWith('src/i18n/build/'));
+    const intoBuild = files('src')
+      .flatMap((path) => dependencies(path))
+      .filter((d) => d.target?.startsWith('src/i18n/build/') && !d.from.startsWith('src/i18n/build/'));
     expect(intoBuild.map(describeDependency)).toEqual([]);
   });
 });

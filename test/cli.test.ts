@@ -19,18 +19,31 @@ describe('CLI (runCli)', () => {
     const { output, exitCode } = runCli(['depth'], from('{"temperatureC": 1200, "timeH": 6}'));
     expect(exitCode).toBe(1);
     expect(output).toEqual({
-      error: { code: 'temperature.outOfRange', field: 'temperatureC', message: 'Temperature 1200 °C is outside 700–1150 °C.' },
+      error: {
+        code: 'temperature.outOfRange',
+        field: 'temperatureC',
+        message: 'Temperature 1200 °C is outside 700–1150 °C.',
+      },
     });
   });
   it('words every warning in English', () => {
-    const { output } = runCli(['depth'], from('{"temperatureC": 850, "timeH": 4, "surfaceCarbonPct": 1.2, "coreCarbonPct": 0.2}'));
+    const { output } = runCli(
+      ['depth'],
+      from('{"temperatureC": 850, "timeH": 4, "surfaceCarbonPct": 1.2, "coreCarbonPct": 0.2}'),
+    );
     const warnings = (output as { warnings: { code: string; message: string }[] }).warnings;
     expect(warnings.length).toBeGreaterThan(0);
     for (const w of warnings) expect(w.message).toMatch(/saturation|retained austenite/);
   });
   it('refuses malformed JSON and unknown commands with exit 1', () => {
-    expect(runCli(['depth'], from('{temperature'))).toMatchObject({ exitCode: 1, output: { error: { code: 'cli.invalidJson' } } });
-    expect(runCli(['sing'], from('{}'))).toMatchObject({ exitCode: 1, output: { error: { code: 'cli.unknownCommand' } } });
+    expect(runCli(['depth'], from('{temperature'))).toMatchObject({
+      exitCode: 1,
+      output: { error: { code: 'cli.invalidJson' } },
+    });
+    expect(runCli(['sing'], from('{}'))).toMatchObject({
+      exitCode: 1,
+      output: { error: { code: 'cli.unknownCommand' } },
+    });
   });
   it('runs as a process: `npm run casefront -- time` reads stdin and exits 0', () => {
     const run = spawnSync('npx', ['tsx', 'src/cli.ts', 'time'], {

@@ -22,7 +22,13 @@ const ROOT = resolve(__dirname, '..');
 export const repoPath = (path: string) => relative(ROOT, resolve(ROOT, path)).split('\\').join('/');
 
 export function parseSource(path: string, text = readFileSync(resolve(ROOT, path), 'utf8')): ts.SourceFile {
-  return ts.createSourceFile(path, text, ts.ScriptTarget.Latest, true, path.endsWith('.tsx') ? ts.ScriptKind.TSX : ts.ScriptKind.TS);
+  return ts.createSourceFile(
+    path,
+    text,
+    ts.ScriptTarget.Latest,
+    true,
+    path.endsWith('.tsx') ? ts.ScriptKind.TSX : ts.ScriptKind.TS,
+  );
 }
 
 /** `import type …`, or `import { type A, type B }` with nothing else: erased by the compiler. */
@@ -31,7 +37,13 @@ function isTypeOnlyImport(node: ts.ImportDeclaration): boolean {
   if (!clause) return false; // `import './x.css'` loads for its effect
   if (clause.isTypeOnly) return true;
   const named = clause.namedBindings;
-  return !clause.name && named !== undefined && ts.isNamedImports(named) && named.elements.length > 0 && named.elements.every((e) => e.isTypeOnly);
+  return (
+    !clause.name &&
+    named !== undefined &&
+    ts.isNamedImports(named) &&
+    named.elements.length > 0 &&
+    named.elements.every((e) => e.isTypeOnly)
+  );
 }
 
 /** Every import of a source (declarations, re-exports, `import()` and `require()`). */
@@ -39,14 +51,20 @@ export function importsOf(source: ts.SourceFile): ImportRef[] {
   const found: ImportRef[] = [];
   const add = (literal: ts.Expression | undefined, kind: ImportRef['kind']) => {
     if (literal && ts.isStringLiteralLike(literal)) {
-      found.push({ specifier: literal.text, kind, line: source.getLineAndCharacterOfPosition(literal.getStart()).line + 1 });
+      found.push({
+        specifier: literal.text,
+        kind,
+        line: source.getLineAndCharacterOfPosition(literal.getStart()).line + 1,
+      });
     }
   };
   const visit = (node: ts.Node) => {
     if (ts.isImportDeclaration(node)) add(node.moduleSpecifier, isTypeOnlyImport(node) ? 'type' : 'static');
     else if (ts.isExportDeclaration(node)) add(node.moduleSpecifier, node.isTypeOnly ? 'type' : 'static');
-    else if (ts.isCallExpression(node) && node.expression.kind === ts.SyntaxKind.ImportKeyword) add(node.arguments[0], 'dynamic');
-    else if (ts.isCallExpression(node) && ts.isIdentifier(node.expression) && node.expression.text === 'require') add(node.arguments[0], 'static');
+    else if (ts.isCallExpression(node) && node.expression.kind === ts.SyntaxKind.ImportKeyword)
+      add(node.arguments[0], 'dynamic');
+    else if (ts.isCallExpression(node) && ts.isIdentifier(node.expression) && node.expression.text === 'require')
+      add(node.arguments[0], 'static');
     else if (ts.isImportTypeNode(node) && ts.isLiteralTypeNode(node.argument)) add(node.argument.literal, 'type');
     ts.forEachChild(node, visit);
   };
@@ -64,7 +82,11 @@ export function resolveImport(fromPath: string, specifier: string): string | und
   if (!specifier.startsWith('.')) return undefined;
   const base = join(dirname(resolve(ROOT, fromPath)), specifier);
   // As TypeScript resolves: `./x.js` may name the source `./x.ts`.
-  const candidates = [...EXTENSIONS.map((extension) => base + extension), base.replace(/\.js$/u, '.ts'), base.replace(/\.jsx$/u, '.tsx')];
+  const candidates = [
+    ...EXTENSIONS.map((extension) => base + extension),
+    base.replace(/\.js$/u, '.ts'),
+    base.replace(/\.jsx$/u, '.tsx'),
+  ];
   for (const candidate of candidates) {
     if (existsSync(candidate) && statSync(candidate).isFile()) return repoPath(candidate);
   }

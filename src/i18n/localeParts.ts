@@ -64,16 +64,26 @@ const PLURAL_SUFFIX = /^(?:_ordinal)?_(?:zero|one|two|few|many|other)$/u;
 
 /** Whether the message at `path` belongs to the first part named by `keys`. */
 export function isFirstScreenKey(path: string, keys: readonly string[] = FIRST_SCREEN_KEYS): boolean {
-  return keys.some((key) => path === key || path.startsWith(`${key}.`) || (path.startsWith(`${key}_`) && PLURAL_SUFFIX.test(path.slice(key.length))));
+  return keys.some(
+    (key) =>
+      path === key ||
+      path.startsWith(`${key}.`) ||
+      (path.startsWith(`${key}_`) && PLURAL_SUFFIX.test(path.slice(key.length))),
+  );
 }
 
-const isTree = (value: unknown): value is Messages => typeof value === 'object' && value !== null && !Array.isArray(value);
+const isTree = (value: unknown): value is Messages =>
+  typeof value === 'object' && value !== null && !Array.isArray(value);
 
 /**
  * The messages of one part, in the file's order, with the file's nesting; subtrees left
  * empty are dropped. The two parts of a file are disjoint and together are the whole file.
  */
-export function pickLocalePart(messages: Messages, part: LocalePart, keys: readonly string[] = FIRST_SCREEN_KEYS): Messages {
+export function pickLocalePart(
+  messages: Messages,
+  part: LocalePart,
+  keys: readonly string[] = FIRST_SCREEN_KEYS,
+): Messages {
   const wanted = part === 'first';
   const pick = (tree: Messages, prefix: string): Messages | undefined => {
     const out: Messages = {};

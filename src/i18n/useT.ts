@@ -15,9 +15,18 @@ type Loader = () => Promise<{ default: Messages }>;
 
 // Literal specifiers, so the bundler makes one chunk per part (src/i18n/build/localeChunks.ts).
 const LOADERS: Record<Language, Record<LocalePart, Loader>> = {
-  en: { first: () => import('virtual:casefront-locale/en/first'), rest: () => import('virtual:casefront-locale/en/rest') },
-  es: { first: () => import('virtual:casefront-locale/es/first'), rest: () => import('virtual:casefront-locale/es/rest') },
-  de: { first: () => import('virtual:casefront-locale/de/first'), rest: () => import('virtual:casefront-locale/de/rest') },
+  en: {
+    first: () => import('virtual:casefront-locale/en/first'),
+    rest: () => import('virtual:casefront-locale/en/rest'),
+  },
+  es: {
+    first: () => import('virtual:casefront-locale/es/first'),
+    rest: () => import('virtual:casefront-locale/es/rest'),
+  },
+  de: {
+    first: () => import('virtual:casefront-locale/de/first'),
+    rest: () => import('virtual:casefront-locale/de/rest'),
+  },
 };
 
 /** The browser's preferred language when we speak it, else English. */

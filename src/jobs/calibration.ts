@@ -62,7 +62,8 @@ function closedFormPredictor(job: Job, model: DiffusivityModelId | undefined): P
   if (temperatureC === undefined || timeH === undefined) return 'noRunConditions';
   const spec = readCaseSpec({ ...physicsRequestOf(inputs), ...(model ? { model } : {}), diffusivityFactor: 1 });
   if (!spec.ok) return 'invalidInputs';
-  return (factor) => depthFigures({ ...spec.value, diffusivityFactor: factor }, temperatureC, timeH).effectiveCaseDepthMm;
+  return (factor) =>
+    depthFigures({ ...spec.value, diffusivityFactor: factor }, temperatureC, timeH).effectiveCaseDepthMm;
 }
 
 /** A cycle job: the recorded recipe through the simulator with D × k. */
@@ -72,18 +73,25 @@ function cyclePredictor(job: Job, model: DiffusivityModelId | undefined): Predic
   const recipe = readRecipe(model ? { ...inputs.recipe, model } : inputs.recipe);
   if (!recipe.ok) return 'invalidInputs';
   const diffusivity = DIFFUSIVITY_MODELS[recipe.value.model ?? DEFAULT_MODEL].diffusivity;
-  return (factor) => runCycle(recipe.value, 1, { diffusivity: scaledDiffusivity(diffusivity, factor) }).effectiveCaseDepthMm;
+  return (factor) =>
+    runCycle(recipe.value, 1, { diffusivity: scaledDiffusivity(diffusivity, factor) }).effectiveCaseDepthMm;
 }
 
 /** The calibration samples of one furnace (newest first), and the measured jobs that could not be used. */
 export function calibrationSamples(jobs: readonly Job[], furnace: string, options: CalibrationOptions = {}): SampleSet {
   const maxJobs = options.maxJobs ?? DEFAULT_CALIBRATION_JOBS;
-  const measured = jobs.filter((job) => job.furnace === furnace && measuredEcdMm(job) !== undefined).sort(compareNewestFirst);
+  const measured = jobs
+    .filter((job) => job.furnace === furnace && measuredEcdMm(job) !== undefined)
+    .sort(compareNewestFirst);
   const samples: CalibrationSample[] = [];
   const skipped: SkippedJob[] = [];
   for (const job of measured) {
     if (samples.length >= maxJobs) break;
-    const predictor = !job.inputs ? 'noInputs' : job.inputs.kind === 'cycle' ? cyclePredictor(job, options.model) : closedFormPredictor(job, options.model);
+    const predictor = !job.inputs
+      ? 'noInputs'
+      : job.inputs.kind === 'cycle'
+        ? cyclePredictor(job, options.model)
+        : closedFormPredictor(job, options.model);
     if (typeof predictor === 'string') skipped.push({ id: job.id, reason: predictor });
     else samples.push({ id: job.id, measuredEcdMm: measuredEcdMm(job)!, predictEcdMm: predictor });
   }
@@ -91,7 +99,11 @@ export function calibrationSamples(jobs: readonly Job[], furnace: string, option
 }
 
 /** Fits the diffusivity factor of one furnace from its lab results. */
-export function calibrateFurnace(jobs: readonly Job[], furnace: string, options: CalibrationOptions = {}): FurnaceCalibration {
+export function calibrateFurnace(
+  jobs: readonly Job[],
+  furnace: string,
+  options: CalibrationOptions = {},
+): FurnaceCalibration {
   const { samples, skipped } = calibrationSamples(jobs, furnace, options);
   return { furnace, fit: fitDiffusivityFactor(samples), skipped };
 }

@@ -119,5 +119,5 @@ export async function jobsToCsv(jobs: readonly Job[], options: CsvOptions = {}):
     { fields: CSV_COLUMNS.map((c) => c.header), data: jobs.map((job) => csvRow(job, decimalMark)) },
     { delimiter, newline: '\r\n', escapeFormulae: false },
   );
-  return (options.byteOrderMark ?? true ? '\uFEFF' : '') + text;
+  return ((options.byteOrderMark ?? true) ? '\uFEFF' : '') + text;
 }

@@ -30,9 +30,30 @@ interface DemoPart {
 
 // Targets sit in the middle of each part's drawing range (DOMAIN scenario).
 const PARTS: readonly DemoPart[] = [
-  { partNumber: 'KR-2231', gradeId: 'sae-8620', targetEcdMm: 0.875, carbonPotentialPct: 0.9, temperaturesC: [920, 925, 930], furnaces: ['F1', 'F1', 'F2'] },
-  { partNumber: 'KR-4410', gradeId: '20mncr5', targetEcdMm: 1.35, carbonPotentialPct: 0.9, temperaturesC: [930, 940], furnaces: ['F2', 'F2', 'F1'] },
-  { partNumber: 'KR-0907', gradeId: 'sae-1018', targetEcdMm: 0.32, carbonPotentialPct: 0.85, temperaturesC: [900, 910], furnaces: ['F3', 'F1'] },
+  {
+    partNumber: 'KR-2231',
+    gradeId: 'sae-8620',
+    targetEcdMm: 0.875,
+    carbonPotentialPct: 0.9,
+    temperaturesC: [920, 925, 930],
+    furnaces: ['F1', 'F1', 'F2'],
+  },
+  {
+    partNumber: 'KR-4410',
+    gradeId: '20mncr5',
+    targetEcdMm: 1.35,
+    carbonPotentialPct: 0.9,
+    temperaturesC: [930, 940],
+    furnaces: ['F2', 'F2', 'F1'],
+  },
+  {
+    partNumber: 'KR-0907',
+    gradeId: 'sae-1018',
+    targetEcdMm: 0.32,
+    carbonPotentialPct: 0.85,
+    temperaturesC: [900, 910],
+    furnaces: ['F3', 'F1'],
+  },
 ];
 
 /** Part numbers of the demo plant, offered as quick picks when a job is logged. */
@@ -99,10 +120,19 @@ export function demoJobs(options: DemoOptions): Job[] {
     const created = new Date(Math.floor(createdMs));
     const ageH = (endMs - createdMs) / 3.6e6;
     const status: JobStatus =
-      ageH < result.timeH ? pick(['planned', 'inFurnace'] as const) : random() < 0.94 ? 'done' : pick(['onHold', 'rejected'] as const);
+      ageH < result.timeH
+        ? pick(['planned', 'inFurnace'] as const)
+        : random() < 0.94
+          ? 'done'
+          : pick(['onHold', 'rejected'] as const);
     const measured = status === 'done' && ageH > 30 && random() < 0.7;
-    const labEcdMm = round(result.effectiveCaseDepthMm * (1 + (FURNACE_BIAS[furnace] ?? 0) + (random() - 0.5) * 0.12), 2);
-    const updated = new Date(Math.min(endMs, createdMs + (status === 'done' ? (measured ? 30 : result.timeH + 1) * 3.6e6 : 0)));
+    const labEcdMm = round(
+      result.effectiveCaseDepthMm * (1 + (FURNACE_BIAS[furnace] ?? 0) + (random() - 0.5) * 0.12),
+      2,
+    );
+    const updated = new Date(
+      Math.min(endMs, createdMs + (status === 'done' ? (measured ? 30 : result.timeH + 1) * 3.6e6 : 0)),
+    );
     return {
       id: uuidFrom(random),
       createdAt: created.toISOString(),
@@ -112,7 +142,12 @@ export function demoJobs(options: DemoOptions): Job[] {
       furnace,
       workOrder: `WO-${String(24000 + index).padStart(6, '0')}`,
       partNumber: part.partNumber,
-      steel: { gradeId: grade.id, gradeName: grade.name, coreCarbonPct: grade.coreCarbonPct, composition: { ...grade.composition } },
+      steel: {
+        gradeId: grade.id,
+        gradeName: grade.name,
+        coreCarbonPct: grade.coreCarbonPct,
+        composition: { ...grade.composition },
+      },
       inputs: { kind: 'time' as const, ...request, composition: { ...grade.composition } },
       prediction: {
         effectiveCaseDepthMm: result.effectiveCaseDepthMm,

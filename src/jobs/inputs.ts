@@ -12,7 +12,8 @@ import { DIFFUSIVITY_FACTOR_LIMITS, MAX_TEMPERATURE_TOLERANCE_C, MAX_TOTAL_CASE_
 export const ModelIdSchema = v.picklist(MODEL_IDS);
 
 export const finiteNumber = () => v.pipe(v.number(), v.finite());
-export const numberBetween = (min: number, max: number) => v.pipe(v.number(), v.finite(), v.minValue(min), v.maxValue(max));
+export const numberBetween = (min: number, max: number) =>
+  v.pipe(v.number(), v.finite(), v.minValue(min), v.maxValue(max));
 export const positiveNumber = () => v.pipe(v.number(), v.finite(), v.gtValue(0));
 export const textUpTo = (max: number) => v.pipe(v.string(), v.maxLength(max));
 

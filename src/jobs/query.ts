@@ -60,7 +60,11 @@ export function foldText(text: string): string {
 }
 
 export function searchWords(text: string | undefined): string[] {
-  return text === undefined ? [] : foldText(text).split(/\s+/u).filter((w) => w !== '');
+  return text === undefined
+    ? []
+    : foldText(text)
+        .split(/\s+/u)
+        .filter((w) => w !== '');
 }
 
 function searchableText(job: Job): string {
@@ -68,7 +72,11 @@ function searchableText(job: Job): string {
 }
 
 /** Whether a job meets every part of the filter. `words` are searchWords(filter.text), computed once. */
-export function matchesFilter(job: Job, filter: JobFilter, words: readonly string[] = searchWords(filter.text)): boolean {
+export function matchesFilter(
+  job: Job,
+  filter: JobFilter,
+  words: readonly string[] = searchWords(filter.text),
+): boolean {
   if (filter.fromDate !== undefined && job.shiftDate < filter.fromDate) return false;
   if (filter.toDate !== undefined && job.shiftDate > filter.toDate) return false;
   if (filter.shift !== undefined && job.shift !== filter.shift) return false;

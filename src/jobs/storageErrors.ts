@@ -5,7 +5,8 @@
 import { failWith, type JobsResult } from './result';
 
 function errorName(error: unknown): string {
-  if (typeof error === 'object' && error !== null && 'name' in error && typeof error.name === 'string') return error.name;
+  if (typeof error === 'object' && error !== null && 'name' in error && typeof error.name === 'string')
+    return error.name;
   return 'Error';
 }
 

@@ -279,7 +279,8 @@ export class JobStore {
   async list(filter: JobFilter = {}): Promise<JobsResult<JobList>> {
     const plan = planQuery(filter);
     const raws = await this.read(
-      (db) => (plan ? db.getAllFromIndex(JOBS_STORE, plan.index, plan.range) : db.getAll(JOBS_STORE)) as Promise<unknown[]>,
+      (db) =>
+        (plan ? db.getAllFromIndex(JOBS_STORE, plan.index, plan.range) : db.getAll(JOBS_STORE)) as Promise<unknown[]>,
     );
     if (!raws.ok) return raws;
     const { jobs, corrupt } = validateAll(raws.value);

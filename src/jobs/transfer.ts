@@ -18,7 +18,11 @@ export interface ExportFile {
 }
 
 /** The whole log as a backup file's text. */
-export async function exportBackup(store: JobStore, appVersion: string, now: Date = new Date()): Promise<JobsResult<ExportFile>> {
+export async function exportBackup(
+  store: JobStore,
+  appVersion: string,
+  now: Date = new Date(),
+): Promise<JobsResult<ExportFile>> {
   const all = await store.readAll();
   if (!all.ok) return all;
   const text = backupToJson(createBackup(all.value.jobs, appVersion, now));

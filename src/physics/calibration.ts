@@ -45,7 +45,8 @@ const MAX_ITERATIONS = 50;
 
 export function fitDiffusivityFactor(samples: readonly CalibrationSample[]): Result<CalibrationFit> {
   const n = samples.length;
-  if (n < MIN_CALIBRATION_JOBS) return fail('calibration.tooFewJobs', undefined, { min: MIN_CALIBRATION_JOBS, count: n });
+  if (n < MIN_CALIBRATION_JOBS)
+    return fail('calibration.tooFewJobs', undefined, { min: MIN_CALIBRATION_JOBS, count: n });
   const lnMin = Math.log(DIFFUSIVITY_FACTOR_LIMITS.min);
   const lnMax = Math.log(DIFFUSIVITY_FACTOR_LIMITS.max);
   let theta = 0;
@@ -66,7 +67,10 @@ export function fitDiffusivityFactor(samples: readonly CalibrationSample[]): Res
   }
   const factor = Math.exp(theta);
   if (theta <= lnMin || theta >= lnMax) {
-    return fail('calibration.factorOutOfRange', undefined, { min: DIFFUSIVITY_FACTOR_LIMITS.min, max: DIFFUSIVITY_FACTOR_LIMITS.max });
+    return fail('calibration.factorOutOfRange', undefined, {
+      min: DIFFUSIVITY_FACTOR_LIMITS.min,
+      max: DIFFUSIVITY_FACTOR_LIMITS.max,
+    });
   }
   const residuals = samples.map((s) => {
     const predictedMm = s.predictEcdMm(factor);

@@ -150,7 +150,10 @@ export function readCaseSpec(fields: Fields): Result<CaseSpec> {
   if (!diffusivityFactor.ok) return diffusivityFactor;
   const tolerance = readOptionalNumber(fields, 'temperatureToleranceC');
   if (!tolerance.ok) return tolerance;
-  const toleranceC = checkTemperatureTolerance(tolerance.value ?? DEFAULT_TEMPERATURE_TOLERANCE_C, 'temperatureToleranceC');
+  const toleranceC = checkTemperatureTolerance(
+    tolerance.value ?? DEFAULT_TEMPERATURE_TOLERANCE_C,
+    'temperatureToleranceC',
+  );
   if (!toleranceC.ok) return toleranceC;
   const margin = readOptionalNumber(fields, 'totalCaseMarginPct');
   if (!margin.ok) return margin;
@@ -264,7 +267,13 @@ export function caseDepth(request: unknown): Result<CaseDepthResult> {
 /** Time at temperature for the effective case depth to reach `depthMm`, h. */
 export function timeForDepthH(spec: CaseSpec, temperatureC: number, depthMm: number, model = spec.model): number {
   const D = specDiffusivity(spec, temperatureC, model);
-  const timeS = constantSurfaceTime(depthMm * 1e-3, D, spec.surfaceCarbonPct, spec.coreCarbonPct, spec.thresholdCarbonPct);
+  const timeS = constantSurfaceTime(
+    depthMm * 1e-3,
+    D,
+    spec.surfaceCarbonPct,
+    spec.coreCarbonPct,
+    spec.thresholdCarbonPct,
+  );
   return timeS / SECONDS_PER_HOUR;
 }
 

@@ -38,14 +38,24 @@ export function saturationWarnings(tempC: number, surfaceCarbonPct: number, carb
 /** A carburizing atmosphere at a temperature below the safe-introduction limit. */
 export function atmosphereTemperatureWarning(tempC: number): Warning[] {
   return tempC < SAFE_ATMOSPHERE_MIN_TEMP_C
-    ? [{ code: 'safety.atmosphereBelowSafeTemperature', params: { tempC: round(tempC, 1), minC: SAFE_ATMOSPHERE_MIN_TEMP_C } }]
+    ? [
+        {
+          code: 'safety.atmosphereBelowSafeTemperature',
+          params: { tempC: round(tempC, 1), minC: SAFE_ATMOSPHERE_MIN_TEMP_C },
+        },
+      ]
     : [];
 }
 
 /** Surface carbon high enough that retained austenite may lower the surface hardness. */
 export function retainedAusteniteWarning(surfaceCarbonPct: number): Warning[] {
   return surfaceCarbonPct > RETAINED_AUSTENITE_CARBON_PCT
-    ? [{ code: 'hardness.retainedAustenite', params: { carbonPct: round(surfaceCarbonPct, 3), limitPct: RETAINED_AUSTENITE_CARBON_PCT } }]
+    ? [
+        {
+          code: 'hardness.retainedAustenite',
+          params: { carbonPct: round(surfaceCarbonPct, 3), limitPct: RETAINED_AUSTENITE_CARBON_PCT },
+        },
+      ]
     : [];
 }
 
@@ -54,6 +64,11 @@ export function modelRangeWarning(tempC: number, carbonPct: number): Warning[] {
   const r = MODEL_CALIBRATED_RANGE;
   const outside = tempC < r.minTempC || tempC > r.maxTempC || carbonPct < r.minCarbonPct || carbonPct > r.maxCarbonPct;
   return outside
-    ? [{ code: 'model.outsideCalibratedRange', params: { minC: r.minTempC, maxC: r.maxTempC, minPct: r.minCarbonPct, maxPct: r.maxCarbonPct } }]
+    ? [
+        {
+          code: 'model.outsideCalibratedRange',
+          params: { minC: r.minTempC, maxC: r.maxTempC, minPct: r.minCarbonPct, maxPct: r.maxCarbonPct },
+        },
+      ]
     : [];
 }

@@ -14,8 +14,18 @@ export interface SteelGrade {
 }
 
 export const STEEL_GRADES: readonly SteelGrade[] = [
-  { id: 'sae-8620', name: 'SAE 8620', coreCarbonPct: 0.2, composition: { Si: 0.25, Mn: 0.8, Cr: 0.5, Ni: 0.55, Mo: 0.2 } },
-  { id: 'sae-4320', name: 'SAE 4320', coreCarbonPct: 0.2, composition: { Si: 0.25, Mn: 0.55, Cr: 0.5, Ni: 1.8, Mo: 0.25 } },
+  {
+    id: 'sae-8620',
+    name: 'SAE 8620',
+    coreCarbonPct: 0.2,
+    composition: { Si: 0.25, Mn: 0.8, Cr: 0.5, Ni: 0.55, Mo: 0.2 },
+  },
+  {
+    id: 'sae-4320',
+    name: 'SAE 4320',
+    coreCarbonPct: 0.2,
+    composition: { Si: 0.25, Mn: 0.55, Cr: 0.5, Ni: 1.8, Mo: 0.25 },
+  },
   { id: '20mncr5', name: '20MnCr5', coreCarbonPct: 0.2, composition: { Si: 0.25, Mn: 1.25, Cr: 1.15, Ni: 0, Mo: 0 } },
   { id: 'sae-1018', name: 'SAE 1018', coreCarbonPct: 0.18, composition: { Si: 0.2, Mn: 0.75, Cr: 0, Ni: 0, Mo: 0 } },
 ];

@@ -58,7 +58,8 @@ export function depthBand(
   const corners: number[] = [];
   for (const model of MODEL_IDS) {
     for (const tempOffsetC of offsets) {
-      for (const betaMPerS of betas) corners.push(predict({ model, tempOffsetC, ...(betaMPerS === undefined ? {} : { betaMPerS }) }));
+      for (const betaMPerS of betas)
+        corners.push(predict({ model, tempOffsetC, ...(betaMPerS === undefined ? {} : { betaMPerS }) }));
     }
   }
   const nominalMm = predict({ model: nominalModel, tempOffsetC: 0 });
@@ -69,7 +70,13 @@ export function depthBand(
     models: rangeOf(MODEL_IDS.map((model) => predict({ model, tempOffsetC: 0 }))),
     temperature: rangeOf(offsets.map((tempOffsetC) => predict({ model: nominalModel, tempOffsetC }))),
     ...(options.betaRangeMPerS
-      ? { beta: rangeOf(betas.map((betaMPerS) => predict({ model: nominalModel, tempOffsetC: 0, ...(betaMPerS === undefined ? {} : { betaMPerS }) }))) }
+      ? {
+          beta: rangeOf(
+            betas.map((betaMPerS) =>
+              predict({ model: nominalModel, tempOffsetC: 0, ...(betaMPerS === undefined ? {} : { betaMPerS }) }),
+            ),
+          ),
+        }
       : {}),
     temperatureToleranceC: tol,
   };

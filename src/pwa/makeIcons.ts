@@ -54,7 +54,10 @@ export function iconPng(size: number, { maskable }: { maskable: boolean }): Buff
   for (let py = 0; py < size; py++) {
     raw[py * (size * 4 + 1)] = 0; // filter: none
     for (let px = 0; px < size; px++) {
-      let r = 0, g = 0, b = 0, a = 0;
+      let r = 0,
+        g = 0,
+        b = 0,
+        a = 0;
       for (let sy = 0; sy < n; sy++) {
         for (let sx = 0; sx < n; sx++) {
           const c = shade((px + (sx + 0.5) / n) / size, (py + (sy + 0.5) / n) / size, maskable ? 0.8 : 1, !maskable);
@@ -80,7 +83,12 @@ export function iconPng(size: number, { maskable }: { maskable: boolean }): Buff
   ihdr.writeUInt8(8, 8); // bit depth
   ihdr.writeUInt8(6, 9); // colour type RGBA
   const signature = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
-  return Buffer.concat([signature, chunk('IHDR', ihdr), chunk('IDAT', deflateSync(raw, { level: 9 })), chunk('IEND', new Uint8Array(0))]);
+  return Buffer.concat([
+    signature,
+    chunk('IHDR', ihdr),
+    chunk('IDAT', deflateSync(raw, { level: 9 })),
+    chunk('IEND', new Uint8Array(0)),
+  ]);
 }
 
 if (process.argv[1]?.endsWith('makeIcons.ts')) {

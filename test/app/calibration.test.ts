@@ -11,7 +11,12 @@ import { depthView } from '../../src/app/depth/rows';
 import { DEFAULT_DEPTH_FORM } from '../../src/app/depth/state';
 import { calibrationCards } from '../../src/app/log/calibration';
 import { planRows } from '../../src/app/log/jobRows';
-import { calibrationState, factorOf, readCalibrations, type StoredCalibration } from '../../src/app/settings/calibration';
+import {
+  calibrationState,
+  factorOf,
+  readCalibrations,
+  type StoredCalibration,
+} from '../../src/app/settings/calibration';
 import { makeShow } from '../../src/app/ui/show';
 import { createI18n } from '../../src/i18n/i18n';
 import { caseDepth, runCycle } from '../../src/physics';
@@ -22,7 +27,17 @@ import { pinionDraft } from '../jobs/helpers';
 
 const t = createI18n('en').t;
 const show = makeShow({ temperature: 'C', depth: 'mm', time: 'h' }, 'en');
-const f1: StoredCalibration = { furnace: 'F1', factor: 1.21, low: 1.1, high: 1.33, jobCount: 5, rmsMm: 0.02, fittedAt: '2025-03-05T10:00:00.000Z', model: 'agren', apply: true };
+const f1: StoredCalibration = {
+  furnace: 'F1',
+  factor: 1.21,
+  low: 1.1,
+  high: 1.33,
+  jobCount: 5,
+  rmsMm: 0.02,
+  fittedAt: '2025-03-05T10:00:00.000Z',
+  model: 'agren',
+  apply: true,
+};
 
 describe('calibration figures kept with the settings', () => {
   it('keeps valid entries, one per furnace (the last), sorted; drops anything malformed', () => {
@@ -63,26 +78,42 @@ describe('calibration figures kept with the settings', () => {
 });
 
 describe('the calculators with a calibrated furnace', () => {
-  const depthSettings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: 0.05, temperatureToleranceC: 8 };
+  const depthSettings = {
+    model: 'agren' as const,
+    ecdThresholdPct: 0.4,
+    totalCaseMarginPct: 0.05,
+    temperatureToleranceC: 8,
+  };
 
   it('depth: D × 1.21 gives √1.21 = 1.1 × the ECD (closed form, Crank eq. 3.13), and every row and the answer say so', () => {
     const plain = computeDepth(DEFAULT_DEPTH_FORM, depthSettings).result!;
-    const out = computeDepth(DEFAULT_DEPTH_FORM, { ...depthSettings, calibration: calibrationState([f1], 'F1', 'agren') }).result!;
+    const out = computeDepth(DEFAULT_DEPTH_FORM, {
+      ...depthSettings,
+      calibration: calibrationState([f1], 'F1', 'agren'),
+    }).result!;
     expect(out.figures.effectiveCaseDepthMm / plain.figures.effectiveCaseDepthMm).toBeCloseTo(1.1, 12);
     expect(out.request.diffusivityFactor).toBe(1.21);
     const view = depthView(out, t, show, 0.05);
-    expect(view.rows[0]).toMatchObject({ key: 'calibration', value: 'Calibrated for F1: D × 1.21 (95 %: 1.10–1.33, 5 jobs)' });
+    expect(view.rows[0]).toMatchObject({
+      key: 'calibration',
+      value: 'Calibrated for F1: D × 1.21 (95 %: 1.10–1.33, 5 jobs)',
+    });
     expect(view.answerNote).toBe('Calibrated for F1: D × 1.21');
     const entry = depthLogEntry(out, 'sae-8620');
     expect(entry.furnace).toBe('F1');
     expect(entry.inputs).toMatchObject({ kind: 'depth', diffusivityFactor: 1.21, temperatureToleranceC: 8 });
     // The saved job shows the factor it was predicted with.
-    expect(planRows(entry.steel, entry.inputs, { t, show, locale: 'en' }).find((r) => r.key === 'factor')?.value).toBe('D × 1.21');
+    expect(planRows(entry.steel, entry.inputs, { t, show, locale: 'en' }).find((r) => r.key === 'factor')?.value).toBe(
+      'D × 1.21',
+    );
   });
 
   it('depth: a calibration turned off changes nothing but is named; no furnace, no words', () => {
     const plain = computeDepth(DEFAULT_DEPTH_FORM, depthSettings).result!;
-    const off = computeDepth(DEFAULT_DEPTH_FORM, { ...depthSettings, calibration: calibrationState([{ ...f1, apply: false }], 'F1', 'agren') }).result!;
+    const off = computeDepth(DEFAULT_DEPTH_FORM, {
+      ...depthSettings,
+      calibration: calibrationState([{ ...f1, apply: false }], 'F1', 'agren'),
+    }).result!;
     expect(off.figures).toEqual(plain.figures);
     expect(off.request).not.toHaveProperty('diffusivityFactor');
     expect(depthView(off, t, show, 0.05).rows[0]?.value).toMatch(/^F1 has a calibration, but it is off/u);
@@ -94,7 +125,9 @@ describe('the calculators with a calibrated furnace', () => {
     const wide = computeDepth(DEFAULT_DEPTH_FORM, { ...depthSettings, temperatureToleranceC: 15 }).result!;
     const narrow = computeDepth(DEFAULT_DEPTH_FORM, depthSettings).result!;
     expect(wide.figures.uncertaintyMm.temperatureToleranceC).toBe(15);
-    expect(wide.figures.uncertaintyMm.maxMm - wide.figures.uncertaintyMm.minMm).toBeGreaterThan(narrow.figures.uncertaintyMm.maxMm - narrow.figures.uncertaintyMm.minMm);
+    expect(wide.figures.uncertaintyMm.maxMm - wide.figures.uncertaintyMm.minMm).toBeGreaterThan(
+      narrow.figures.uncertaintyMm.maxMm - narrow.figures.uncertaintyMm.minMm,
+    );
     const view = depthView(narrow, t, show, 0.05);
     const band = view.rows.find((r) => r.key === 'band')!;
     expect(band.value).toBe(show.depthRange(narrow.figures.uncertaintyMm.minMm, narrow.figures.uncertaintyMm.maxMm));
@@ -107,11 +140,19 @@ describe('the calculators with a calibrated furnace', () => {
 
   it('cycle: the simulation runs with the model’s D × k, for the form’s own model', () => {
     const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: 0.05, betaMPerS: 1.5e-7 };
-    const out = computeCycle(DEFAULT_CYCLE_FORM, { ...settings, calibrationFor: (m) => calibrationState([f1], 'F1', m) }).result!;
-    const direct = runCycle(out.recipe, 1, { diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS.agren.diffusivity, 1.21) });
+    const out = computeCycle(DEFAULT_CYCLE_FORM, {
+      ...settings,
+      calibrationFor: (m) => calibrationState([f1], 'F1', m),
+    }).result!;
+    const direct = runCycle(out.recipe, 1, {
+      diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS.agren.diffusivity, 1.21),
+    });
     expect(out.simulation.effectiveCaseDepthMm).toBeCloseTo(direct.effectiveCaseDepthMm, 12);
     expect(out.calibration.kind).toBe('applied');
-    const tibbetts = computeCycle({ ...DEFAULT_CYCLE_FORM, model: 'tibbetts' }, { ...settings, calibrationFor: (m) => calibrationState([f1], 'F1', m) }).result!;
+    const tibbetts = computeCycle(
+      { ...DEFAULT_CYCLE_FORM, model: 'tibbetts' },
+      { ...settings, calibrationFor: (m) => calibrationState([f1], 'F1', m) },
+    ).result!;
     expect(tibbetts.calibration.kind).toBe('otherModel');
     expect(tibbetts.simulation.effectiveCaseDepthMm).toBeCloseTo(runCycle(tibbetts.recipe).effectiveCaseDepthMm, 12);
   });
@@ -121,11 +162,28 @@ describe('the calibration view', () => {
   let serial = 0;
   const job = (furnace: string, timeH: number, k: number): Job => {
     const n = serial++;
-    const draft = pinionDraft({ furnace, inputs: { kind: 'depth', temperatureC: 925, timeH, carbonPotentialPct: 0.9, coreCarbonPct: 0.2 } });
-    const ecd = caseDepth({ temperatureC: 925, timeH, carbonPotentialPct: 0.9, coreCarbonPct: 0.2, diffusivityFactor: k });
+    const draft = pinionDraft({
+      furnace,
+      inputs: { kind: 'depth', temperatureC: 925, timeH, carbonPotentialPct: 0.9, coreCarbonPct: 0.2 },
+    });
+    const ecd = caseDepth({
+      temperatureC: 925,
+      timeH,
+      carbonPotentialPct: 0.9,
+      coreCarbonPct: 0.2,
+      diffusivityFactor: k,
+    });
     if (!ecd.ok) throw new Error(ecd.error.code);
     const at = new Date(Date.UTC(2025, 0, 1) + n * 3.6e6).toISOString();
-    return { ...draft, id: `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`, createdAt: at, updatedAt: at, shift: 'A', shiftDate: '2025-01-01', lab: { ecdMm: ecd.value.effectiveCaseDepthMm } } as Job;
+    return {
+      ...draft,
+      id: `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`,
+      createdAt: at,
+      updatedAt: at,
+      shift: 'A',
+      shiftDate: '2025-01-01',
+      lab: { ecdMm: ecd.value.effectiveCaseDepthMm },
+    } as Job;
   };
   const now = new Date('2025-03-06T08:00:00.000Z');
   const jobs = [job('F1', 4, 1.21), job('F1', 6, 1.21), job('F1', 8, 1.21), job('F2', 6, 0.9)];
@@ -134,9 +192,18 @@ describe('the calibration view', () => {
     const cards = calibrationCards(jobs, [{ ...f1, furnace: 'F3' }], 'agren', now);
     expect(cards.map((c) => c.furnace)).toEqual(['F1', 'F2', 'F3']);
     const [c1, c2, c3] = cards;
-    expect(c1!.fresh).toMatchObject({ furnace: 'F1', jobCount: 3, model: 'agren', apply: false, fittedAt: now.toISOString() });
+    expect(c1!.fresh).toMatchObject({
+      furnace: 'F1',
+      jobCount: 3,
+      model: 'agren',
+      apply: false,
+      fittedAt: now.toISOString(),
+    });
     expect(c1!.fresh!.factor).toBeCloseTo(1.21, 8);
-    expect(c2!.calibration.fit).toEqual({ ok: false, error: { code: 'calibration.tooFewJobs', params: { min: 3, count: 1 } } });
+    expect(c2!.calibration.fit).toEqual({
+      ok: false,
+      error: { code: 'calibration.tooFewJobs', params: { min: 3, count: 1 } },
+    });
     expect(c2!.fresh).toBeUndefined();
     expect(c3!.stored?.furnace).toBe('F3');
     expect(c3!.stale).toBe(true);

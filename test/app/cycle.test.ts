@@ -3,7 +3,15 @@ import { describe, expect, it } from 'vitest';
 import { simulateCycle } from '../../src/physics/cycle/simulate';
 import { buildRecipe, computeCycle } from '../../src/app/cycle/results';
 import { simulate } from '../../src/app/cycle/simulate';
-import { addStep, DEFAULT_CYCLE_FORM, duplicateStep, MAX_STEPS, moveStep, removeStep, updateStep } from '../../src/app/cycle/state';
+import {
+  addStep,
+  DEFAULT_CYCLE_FORM,
+  duplicateStep,
+  MAX_STEPS,
+  moveStep,
+  removeStep,
+  updateStep,
+} from '../../src/app/cycle/state';
 import { field } from '../../src/app/ui/fieldText';
 import { caseDepth } from '../../src/physics';
 
@@ -37,7 +45,11 @@ describe('cycle step list', () => {
 
 describe('recipe from the form', () => {
   it('reads units, neutral steps and the default β', () => {
-    const form = updateStep(updateStep(DEFAULT_CYCLE_FORM, 0, { duration: field('210', 'min'), startTemp: field('1697', 'F') }), 3, { neutral: true });
+    const form = updateStep(
+      updateStep(DEFAULT_CYCLE_FORM, 0, { duration: field('210', 'min'), startTemp: field('1697', 'F') }),
+      3,
+      { neutral: true },
+    );
     const { recipe } = buildRecipe(form, settings);
     expect(recipe?.steps[0]?.durationH).toBeCloseTo(3.5, 12);
     expect(recipe?.steps[0]?.startTempC).toBeCloseTo(925, 12);
@@ -63,7 +75,13 @@ describe('the cycle screen runs the cycle solver', () => {
     const out = computeCycle(DEFAULT_CYCLE_FORM, settings);
     expect(out.result).toBeDefined();
     const sim = out.result!.simulation;
-    expect([sim.effectiveCaseDepthMm, sim.totalCaseDepthMm, ...sim.profile.flatMap((p) => [p.depthMm, p.carbonPct, p.hardnessHrc])].every(Number.isFinite)).toBe(true);
+    expect(
+      [
+        sim.effectiveCaseDepthMm,
+        sim.totalCaseDepthMm,
+        ...sim.profile.flatMap((p) => [p.depthMm, p.carbonPct, p.hardnessHrc]),
+      ].every(Number.isFinite),
+    ).toBe(true);
     const tooRich = updateStep(DEFAULT_CYCLE_FORM, 0, { carbonPotential: field('1.5') });
     const warnings = computeCycle(tooRich, settings).result?.simulation.warnings ?? [];
     expect(warnings.some((w) => w.code === 'saturation.potentialAboveAcm' && w.stepIndex === 0)).toBe(true);

@@ -1,27 +1,48 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseNumber } from '../../src/physics';
-import { formatHoursMinutes, formatInput, formatNumber, formatQuantity, formatRange, formatScientific, NO_VALUE } from '../../src/app/ui/format';
+import {
+  formatHoursMinutes,
+  formatInput,
+  formatNumber,
+  formatQuantity,
+  formatRange,
+  formatScientific,
+  NO_VALUE,
+} from '../../src/app/ui/format';
 
 describe('formatting refuses non-finite numbers', () => {
-  it.each([Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY])('%s is shown as a dash, never as NaN or Infinity', (value) => {
-    for (const text of [
-      formatNumber(value, 'en'),
-      formatQuantity(value, 'mm', 'de'),
-      formatRange(value, 1, 'mm', 'es'),
-      formatScientific(value, 'm2/s', 'en'),
-      formatHoursMinutes(value, 'en'),
-    ]) {
-      expect(text).toBe(NO_VALUE);
-    }
-  });
+  it.each([Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY])(
+    '%s is shown as a dash, never as NaN or Infinity',
+    (value) => {
+      for (const text of [
+        formatNumber(value, 'en'),
+        formatQuantity(value, 'mm', 'de'),
+        formatRange(value, 1, 'mm', 'es'),
+        formatScientific(value, 'm2/s', 'en'),
+        formatHoursMinutes(value, 'en'),
+      ]) {
+        expect(text).toBe(NO_VALUE);
+      }
+    },
+  );
 
   it('no formatted output ever contains NaN or Infinity (property)', () => {
     fc.assert(
-      fc.property(fc.double(), fc.constantFrom('en', 'es', 'de'), fc.constantFrom('mm', 'C', 'h', 'HRC', 'in'), (value, locale, unit) => {
-        const out = [formatQuantity(value, unit, locale), formatScientific(value, 'm2/s', locale), formatHoursMinutes(value, locale), formatInput(value, unit, locale)];
-        return out.every((s) => !/NaN|Infinity|∞/.test(s));
-      }),
+      fc.property(
+        fc.double(),
+        fc.constantFrom('en', 'es', 'de'),
+        fc.constantFrom('mm', 'C', 'h', 'HRC', 'in'),
+        (value, locale, unit) => {
+          const out = [
+            formatQuantity(value, unit, locale),
+            formatScientific(value, 'm2/s', locale),
+            formatHoursMinutes(value, locale),
+            formatInput(value, unit, locale),
+          ];
+          return out.every((s) => !/NaN|Infinity|∞/.test(s));
+        },
+      ),
     );
   });
 });
@@ -46,11 +67,15 @@ describe('numbers per locale, always with their unit', () => {
   });
   it('input text converted from another unit parses back to the same value (property)', () => {
     fc.assert(
-      fc.property(fc.double({ min: -5000, max: 5000, noNaN: true }), fc.constantFrom('en', 'es', 'de'), (value, locale) => {
-        const text = formatInput(value, 'in', locale);
-        const parsed = parseNumber(text);
-        return parsed.ok && Math.abs(parsed.value - value) <= 0.00005 + 1e-9;
-      }),
+      fc.property(
+        fc.double({ min: -5000, max: 5000, noNaN: true }),
+        fc.constantFrom('en', 'es', 'de'),
+        (value, locale) => {
+          const text = formatInput(value, 'in', locale);
+          const parsed = parseNumber(text);
+          return parsed.ok && Math.abs(parsed.value - value) <= 0.00005 + 1e-9;
+        },
+      ),
     );
   });
 });

@@ -10,7 +10,14 @@ import { depthLogEntry } from '../../src/app/depth/logEntry';
 import { computeDepth } from '../../src/app/depth/results';
 import { DEFAULT_DEPTH_FORM, type DepthForm } from '../../src/app/depth/state';
 import { formatCalendarDate } from '../../src/app/log/dates';
-import { currentShiftForm, filterForm, followCurrentShift, isCurrentShift, showCurrentShift, toJobFilter } from '../../src/app/log/filter';
+import {
+  currentShiftForm,
+  filterForm,
+  followCurrentShift,
+  isCurrentShift,
+  showCurrentShift,
+  toJobFilter,
+} from '../../src/app/log/filter';
 import { changesOf, draftOf, EMPTY_JOB_FORM, missingFields, placeJobsError } from '../../src/app/log/jobForm';
 import { labFieldOf, labFormOf, readLabForm } from '../../src/app/log/labForm';
 import { appendLine } from '../../src/app/log/save/NoteForm';
@@ -29,7 +36,12 @@ import * as v from 'valibot';
 import { readFileSync } from 'node:fs';
 import { sourceFiles } from '../sourceFiles';
 
-const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: TOTAL_CASE_MARGIN_PCT, temperatureToleranceC: 8 };
+const settings = {
+  model: 'agren' as const,
+  ecdThresholdPct: 0.4,
+  totalCaseMarginPct: TOTAL_CASE_MARGIN_PCT,
+  temperatureToleranceC: 8,
+};
 const typed = { ...EMPTY_JOB_FORM, workOrder: 'WO-024117', partNumber: 'KR-2231', furnace: 'F1', operator: 'MK' };
 const t = createI18n('en').t;
 
@@ -41,16 +53,22 @@ function depthEntry(changes: Partial<DepthForm>) {
 }
 
 describe('what the calculators hand to the log', () => {
-  it.each(['depth', 'time', 'temperature'] as const)('the depth screen solving for %s gives a draft the job schema accepts', (mode) => {
-    const { entry, result } = depthEntry({ solveFor: mode });
-    const draft = v.safeParse(JobDraftSchema, draftOf(typed, entry));
-    expect(draft.success, JSON.stringify(!draft.success && draft.issues[0]?.path)).toBe(true);
-    expect(entry.inputs.kind).toBe(mode);
-    expect(entry.prediction.effectiveCaseDepthMm).toBe(result.figures.effectiveCaseDepthMm);
-    expect(entry.prediction.ecdBandMm).toEqual({ minMm: result.figures.uncertaintyMm.minMm, maxMm: result.figures.uncertaintyMm.maxMm });
-    expect(entry.prediction.appVersion).toBe(APP_VERSION);
-    expect(entry.steel).toMatchObject({ gradeId: 'sae-8620', gradeName: 'SAE 8620', coreCarbonPct: 0.2 });
-  });
+  it.each(['depth', 'time', 'temperature'] as const)(
+    'the depth screen solving for %s gives a draft the job schema accepts',
+    (mode) => {
+      const { entry, result } = depthEntry({ solveFor: mode });
+      const draft = v.safeParse(JobDraftSchema, draftOf(typed, entry));
+      expect(draft.success, JSON.stringify(!draft.success && draft.issues[0]?.path)).toBe(true);
+      expect(entry.inputs.kind).toBe(mode);
+      expect(entry.prediction.effectiveCaseDepthMm).toBe(result.figures.effectiveCaseDepthMm);
+      expect(entry.prediction.ecdBandMm).toEqual({
+        minMm: result.figures.uncertaintyMm.minMm,
+        maxMm: result.figures.uncertaintyMm.maxMm,
+      });
+      expect(entry.prediction.appVersion).toBe(APP_VERSION);
+      expect(entry.steel).toMatchObject({ gradeId: 'sae-8620', gradeName: 'SAE 8620', coreCarbonPct: 0.2 });
+    },
+  );
 
   it('the app version is the package version (set at build time)', async () => {
     const { version } = (await import('../../package.json')).default;
@@ -74,7 +92,12 @@ describe('what the calculators hand to the log', () => {
   });
 
   it('the cycle editor hands over its whole recipe and the simulated depths (no band)', () => {
-    const outcome = computeCycle(DEFAULT_CYCLE_FORM, { model: 'agren', ecdThresholdPct: 0.4, totalCaseMarginPct: 0.05, betaMPerS: 1.5e-7 });
+    const outcome = computeCycle(DEFAULT_CYCLE_FORM, {
+      model: 'agren',
+      ecdThresholdPct: 0.4,
+      totalCaseMarginPct: 0.05,
+      betaMPerS: 1.5e-7,
+    });
     expect(outcome.result).toBeDefined();
     const entry = cycleLogEntry(outcome.result!);
     expect(v.safeParse(JobDraftSchema, draftOf(typed, entry)).success).toBe(true);
@@ -86,7 +109,9 @@ describe('what the calculators hand to the log', () => {
   it('upset recovery words one line for a job’s notes, in the user’s units', () => {
     const outcome = computeRecovery(DEFAULT_RECOVERY_FORM, 'agren');
     const line = recoveryNote(outcome.result!, t, makeShow({ temperature: 'F', depth: 'mm', time: 'h' }, 'en'));
-    expect(line).toMatch(/^Upset: 0\s?h 40\s?min on the clock counted as .* at 1,697\s?°F; still needed at 1,697\s?°F: \d+\s?h \d+\s?min\.$/u);
+    expect(line).toMatch(
+      /^Upset: 0\s?h 40\s?min on the clock counted as .* at 1,697\s?°F; still needed at 1,697\s?°F: \d+\s?h \d+\s?min\.$/u,
+    );
     expect(appendLine('', line)).toBe(line);
     expect(appendLine('Coupon in basket 3.\n', line)).toBe(`Coupon in basket 3.\n${line}`);
   });
@@ -112,9 +137,21 @@ describe('the log filter', () => {
   });
 
   it('turns empty entries into no condition, "open" into the open statuses, and trims the words', () => {
-    const empty = { fromDate: '', toDate: '', shift: '' as const, furnace: '', partNumber: '', status: '' as const, text: '  ' };
+    const empty = {
+      fromDate: '',
+      toDate: '',
+      shift: '' as const,
+      furnace: '',
+      partNumber: '',
+      status: '' as const,
+      text: '  ',
+    };
     expect(toJobFilter(empty)).toEqual({});
-    expect(toJobFilter({ ...empty, status: 'open', furnace: 'F2', text: ' oil ' })).toEqual({ status: OPEN_STATUSES, furnace: 'F2', text: 'oil' });
+    expect(toJobFilter({ ...empty, status: 'open', furnace: 'F2', text: ' oil ' })).toEqual({
+      status: OPEN_STATUSES,
+      furnace: 'F2',
+      text: 'oil',
+    });
   });
 });
 
@@ -129,7 +166,9 @@ describe('job and lab forms', () => {
   }) as Job;
 
   it('an edit sends only the fields that changed', () => {
-    expect(changesOf(job, { ...typed, gradeName: 'SAE 8620', notes: 'Door opened at 3 h.' })).toEqual({ notes: 'Door opened at 3 h.' });
+    expect(changesOf(job, { ...typed, gradeName: 'SAE 8620', notes: 'Door opened at 3 h.' })).toEqual({
+      notes: 'Door opened at 3 h.',
+    });
     expect(changesOf(job, { ...typed, gradeName: 'SAE 8620' })).toEqual({});
   });
 
@@ -138,19 +177,51 @@ describe('job and lab forms', () => {
   });
 
   it('the store’s problems are placed beside their fields, named by the label', () => {
-    const placed = placeJobsError(t, { code: 'record.invalid', issues: [{ path: 'operator', problem: 'badFormat' }, { path: 'steel.gradeName', problem: 'tooLong', params: { expected: '<=40' } }] }, (f) => ({ operator: 'Operator initials', gradeName: 'Steel grade' })[f]);
-    expect(placed.fields).toEqual({ operator: 'Operator initials: not in the expected format.', gradeName: 'Steel grade: too long (length <=40).' });
+    const placed = placeJobsError(
+      t,
+      {
+        code: 'record.invalid',
+        issues: [
+          { path: 'operator', problem: 'badFormat' },
+          { path: 'steel.gradeName', problem: 'tooLong', params: { expected: '<=40' } },
+        ],
+      },
+      (f) => ({ operator: 'Operator initials', gradeName: 'Steel grade' })[f],
+    );
+    expect(placed.fields).toEqual({
+      operator: 'Operator initials: not in the expected format.',
+      gradeName: 'Steel grade: too long (length <=40).',
+    });
     expect(placed.general).toBe('The job was not saved: some entries need correcting.');
-    const unplaced = placeJobsError(t, { code: 'record.invalid', issues: [{ path: 'inputs.kind', problem: 'notOneOf', params: { expected: '"depth"' } }] }, () => undefined);
+    const unplaced = placeJobsError(
+      t,
+      {
+        code: 'record.invalid',
+        issues: [{ path: 'inputs.kind', problem: 'notOneOf', params: { expected: '"depth"' } }],
+      },
+      () => undefined,
+    );
     expect(unplaced.general).toContain('inputs.kind');
   });
 
   it('the lab depth is typed in the user’s unit and stored in mm (0.034 in = 0.8636 mm, NIST SP 811)', () => {
-    const form = { ...labFormOf(undefined, new Date(2025, 2, 6)), ecd: field('0,034', 'in'), surfaceHardness: field('60,5'), coreHardness: field('350'), coreUnit: 'HV' as const, by: ' QL ' };
+    const form = {
+      ...labFormOf(undefined, new Date(2025, 2, 6)),
+      ecd: field('0,034', 'in'),
+      surfaceHardness: field('60,5'),
+      coreHardness: field('350'),
+      coreUnit: 'HV' as const,
+      by: ' QL ',
+    };
     const { lab, errors } = readLabForm(form);
     expect(errors).toEqual({});
     expect(lab?.ecdMm).toBeCloseTo(0.8636, 12);
-    expect(lab).toMatchObject({ surfaceHardness: { value: 60.5, unit: 'HRC' }, coreHardness: { value: 350, unit: 'HV' }, by: 'QL', measuredAt: '2025-03-06' });
+    expect(lab).toMatchObject({
+      surfaceHardness: { value: 60.5, unit: 'HRC' },
+      coreHardness: { value: 350, unit: 'HV' },
+      by: 'QL',
+      measuredAt: '2025-03-06',
+    });
     expect(lab?.surfaceCarbonPct).toBeUndefined();
   });
 
@@ -164,7 +235,12 @@ describe('job and lab forms', () => {
   });
 
   it('a stored lab result comes back into the form as it was', () => {
-    const lab = { ecdMm: 0.85, surfaceHardness: { value: 61, unit: 'HRC' as const }, measuredAt: '2025-03-06T10:00:00.000Z', by: 'QL' };
+    const lab = {
+      ecdMm: 0.85,
+      surfaceHardness: { value: 61, unit: 'HRC' as const },
+      measuredAt: '2025-03-06T10:00:00.000Z',
+      by: 'QL',
+    };
     expect(readLabForm(labFormOf(lab)).lab).toEqual({ ...lab, measuredAt: '2025-03-06' });
   });
 });
@@ -190,7 +266,11 @@ describe('text stays text', () => {
   it('no code in the app writes markup from strings (notes and imported text are rendered by Preact, escaped)', () => {
     const files = [...sourceFiles('src/app'), ...sourceFiles('src/pwa')];
     expect(files.length).toBeGreaterThan(40);
-    const offenders = files.filter((file) => /dangerouslySetInnerHTML|\.innerHTML\b|\.outerHTML\b|insertAdjacentHTML|document\.write/u.test(readFileSync(file, 'utf8')));
+    const offenders = files.filter((file) =>
+      /dangerouslySetInnerHTML|\.innerHTML\b|\.outerHTML\b|insertAdjacentHTML|document\.write/u.test(
+        readFileSync(file, 'utf8'),
+      ),
+    );
     expect(offenders).toEqual([]);
   });
 });

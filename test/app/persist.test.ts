@@ -5,7 +5,12 @@ import { mergeDefaults } from '../../src/app/ui/persist';
 describe('stored UI state is validated against the defaults', () => {
   const defaults = { a: 1, b: { text: '925', unit: 'C' }, list: [{ x: 'a' }], flag: false };
   it('keeps stored values of the right type and fills the rest', () => {
-    expect(mergeDefaults(defaults, { a: 2, b: { text: '900' }, flag: true })).toEqual({ a: 2, b: { text: '900', unit: 'C' }, list: [{ x: 'a' }], flag: true });
+    expect(mergeDefaults(defaults, { a: 2, b: { text: '900' }, flag: true })).toEqual({
+      a: 2,
+      b: { text: '900', unit: 'C' },
+      list: [{ x: 'a' }],
+      flag: true,
+    });
   });
   it('drops values of the wrong type, non-finite numbers and unknown keys', () => {
     expect(mergeDefaults(defaults, { a: 'x', b: 5, list: 'no', flag: null, extra: 1 })).toEqual(defaults);
@@ -16,6 +21,7 @@ describe('stored UI state is validated against the defaults', () => {
     expect(mergeDefaults(defaults, { list: [] }).list).toEqual([]);
   });
   it('garbage in storage gives the defaults', () => {
-    for (const junk of [undefined, null, 42, 'text', []]) expect(mergeDefaults(DEFAULT_CYCLE_FORM, junk)).toEqual(DEFAULT_CYCLE_FORM);
+    for (const junk of [undefined, null, 42, 'text', []])
+      expect(mergeDefaults(DEFAULT_CYCLE_FORM, junk)).toEqual(DEFAULT_CYCLE_FORM);
   });
 });

@@ -18,7 +18,17 @@ const t = createI18n('en').t;
 const metric = makeShow({ temperature: 'C', depth: 'mm', time: 'h' }, 'en');
 const example = JSON.parse(readFileSync('public/examples/pinion-kr2231-plan.json', 'utf8')) as Record<string, unknown>;
 
-const f1: StoredCalibration = { furnace: 'F1', factor: 1.2, low: 1.1, high: 1.3, jobCount: 7, rmsMm: 0.03, fittedAt: '2025-03-05T10:00:00.000Z', model: 'agren', apply: true };
+const f1: StoredCalibration = {
+  furnace: 'F1',
+  factor: 1.2,
+  low: 1.1,
+  high: 1.3,
+  jobCount: 7,
+  rmsMm: 0.03,
+  fittedAt: '2025-03-05T10:00:00.000Z',
+  model: 'agren',
+  apply: true,
+};
 const applied: CalibrationState = { kind: 'applied', furnace: 'F1', calibration: f1 };
 
 describe('reading the planner form', () => {
@@ -27,7 +37,10 @@ describe('reading the planner form', () => {
     expect(errors).toEqual({});
     const { name: _name, steel, ...rest } = example;
     expect(request).toMatchObject(rest);
-    expect(request?.steel).toMatchObject({ coreCarbonPct: (steel as { coreCarbonPct: number }).coreCarbonPct, composition: (steel as { composition: object }).composition });
+    expect(request?.steel).toMatchObject({
+      coreCarbonPct: (steel as { coreCarbonPct: number }).coreCarbonPct,
+      composition: (steel as { composition: object }).composition,
+    });
   });
 
   it('plans exactly what the physics plans for that request (reachable, the CLI figures of the README)', () => {
@@ -53,18 +66,35 @@ describe('reading the planner form', () => {
   });
 
   it('an empty β takes the settings’ β; a typed one is in 10⁻⁷ m/s; no hardening soak when unticked', () => {
-    const { request } = buildPlanRequest(form({ diffuse: { ...DEFAULT_PLAN_FORM.diffuse, beta: field('2,5') }, hardening: false }), { ...settings, betaMPerS: 1e-7 });
+    const { request } = buildPlanRequest(
+      form({ diffuse: { ...DEFAULT_PLAN_FORM.diffuse, beta: field('2,5') }, hardening: false }),
+      { ...settings, betaMPerS: 1e-7 },
+    );
     expect((request?.boost as { betaMPerS: number }).betaMPerS).toBe(1e-7);
     expect((request?.diffuse as { betaMPerS: number }).betaMPerS).toBeCloseTo(2.5e-7, 20);
     expect(request).not.toHaveProperty('hardening');
   });
 
   it('places each error on the field that caused it', () => {
-    expect(computePlan(form({ boost: { ...DEFAULT_PLAN_FORM.boost, temperature: field('9x5', 'C') } }), settings).errors['boost.temperatureC']?.code).toBe('number.invalid');
-    expect(computePlan(form({ boost: { ...DEFAULT_PLAN_FORM.boost, carbonPotential: field('0.7') } }), settings).errors['boost.carbonPotentialPct']?.code).toBe('carbon.boostNotAboveDiffuse');
-    expect(computePlan(form({ ecdMin: field('1.2', 'mm') }), settings).errors['targetEcdMm.max']?.code).toBe('range.minAboveMax');
-    expect(computePlan(form({ hardeningTemp: field('1300', 'C') }), settings).errors['hardening.temperatureC']?.code).toBe('temperature.outOfRange');
-    expect(computePlan(form({ shape: 'bar', size: field('1.5', 'mm') }), settings).errors['targetEcdMm.max']?.code).toBe('depth.tooDeep');
+    expect(
+      computePlan(form({ boost: { ...DEFAULT_PLAN_FORM.boost, temperature: field('9x5', 'C') } }), settings).errors[
+        'boost.temperatureC'
+      ]?.code,
+    ).toBe('number.invalid');
+    expect(
+      computePlan(form({ boost: { ...DEFAULT_PLAN_FORM.boost, carbonPotential: field('0.7') } }), settings).errors[
+        'boost.carbonPotentialPct'
+      ]?.code,
+    ).toBe('carbon.boostNotAboveDiffuse');
+    expect(computePlan(form({ ecdMin: field('1.2', 'mm') }), settings).errors['targetEcdMm.max']?.code).toBe(
+      'range.minAboveMax',
+    );
+    expect(
+      computePlan(form({ hardeningTemp: field('1300', 'C') }), settings).errors['hardening.temperatureC']?.code,
+    ).toBe('temperature.outOfRange');
+    expect(
+      computePlan(form({ shape: 'bar', size: field('1.5', 'mm') }), settings).errors['targetEcdMm.max']?.code,
+    ).toBe('depth.tooDeep');
   });
 
   it('a furnace calibration goes into the request: D × 1.2 reaches the same depth sooner', () => {
@@ -101,7 +131,9 @@ describe('the planner’s words', () => {
     // A 5 mm case takes longer than the 100 h limit: the time binds, worded in minutes and inches when those are chosen.
     const deep = computePlan(form({ ecdMin: field('5', 'mm'), ecdMax: field('6', 'mm') }), settings).result!;
     const inches = planView(deep, t, makeShow({ temperature: 'F', depth: 'in', time: 'min' }, 'en'));
-    expect(inches.binding).toMatch(/^An effective case depth of 0\.197\s?in is out of reach within 6,000\s?min: .* reaches \d\.\d{3}\s?in\.$/u);
+    expect(inches.binding).toMatch(
+      /^An effective case depth of 0\.197\s?in is out of reach within 6,000\s?min: .* reaches \d\.\d{3}\s?in\.$/u,
+    );
     expect(inches.suggestions.some((s) => /°F \(estimate\)\.$/u.test(s))).toBe(true);
   });
 });
@@ -129,7 +161,14 @@ describe('a plan opened in the cycle editor', () => {
 
   it('a β other than the settings’ default is kept, in 10⁻⁷ m/s', () => {
     const recipe = computePlan(DEFAULT_PLAN_FORM, settings).result!.plan.recipe;
-    const cycle = cycleFormOfRecipe(recipe, { steel: DEFAULT_PLAN_FORM.steel, model: '', threshold: field(''), size: field('20', 'mm'), defaultBetaMPerS: 2e-7, labelOf: (l) => l });
+    const cycle = cycleFormOfRecipe(recipe, {
+      steel: DEFAULT_PLAN_FORM.steel,
+      model: '',
+      threshold: field(''),
+      size: field('20', 'mm'),
+      defaultBetaMPerS: 2e-7,
+      labelOf: (l) => l,
+    });
     expect(cycle.steps[0]?.beta.text).toBe('1.5');
   });
 });

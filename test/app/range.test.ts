@@ -16,8 +16,14 @@ describe('furnace temperature tolerance', () => {
     expect(temperatureDifferenceText(field('8', 'C'), 'C', 'en')).toBe('8');
   });
   it('refuses text and tolerances beyond 0–50 °C, and the calculators then use the default ±8 °C', () => {
-    expect(readTolerance(field('x', 'C'))).toMatchObject({ ok: false, error: { code: 'number.invalid', field: 'temperatureTolerance' } });
-    expect(readTolerance(field('60', 'C'))).toMatchObject({ ok: false, error: { code: 'temperatureTolerance.outOfRange' } });
+    expect(readTolerance(field('x', 'C'))).toMatchObject({
+      ok: false,
+      error: { code: 'number.invalid', field: 'temperatureTolerance' },
+    });
+    expect(readTolerance(field('60', 'C'))).toMatchObject({
+      ok: false,
+      error: { code: 'temperatureTolerance.outOfRange' },
+    });
     const before = settings.value;
     settings.value = { ...before, temperatureTolerance: field('12', 'C') };
     expect(defaults.value.temperatureToleranceC).toBe(12);
@@ -33,9 +39,18 @@ describe('β range', () => {
     expect(defaults.value.betaRangeMPerS).toEqual({ min: 1e-7, max: 3e-7 });
   });
   it('names the end at fault', () => {
-    expect(readBetaRange(field('0'), field('3'))).toMatchObject({ ok: false, error: { code: 'beta.notPositive', field: 'betaRangeMin' } });
-    expect(readBetaRange(field('3'), field('1'))).toMatchObject({ ok: false, error: { code: 'range.minAboveMax', field: 'betaRangeMax' } });
-    expect(readBetaRange(field('1'), field(''))).toMatchObject({ ok: false, error: { code: 'number.empty', field: 'betaRangeMax' } });
+    expect(readBetaRange(field('0'), field('3'))).toMatchObject({
+      ok: false,
+      error: { code: 'beta.notPositive', field: 'betaRangeMin' },
+    });
+    expect(readBetaRange(field('3'), field('1'))).toMatchObject({
+      ok: false,
+      error: { code: 'range.minAboveMax', field: 'betaRangeMax' },
+    });
+    expect(readBetaRange(field('1'), field(''))).toMatchObject({
+      ok: false,
+      error: { code: 'number.empty', field: 'betaRangeMax' },
+    });
   });
 });
 
@@ -44,15 +59,21 @@ describe('warnings in the user’s units', () => {
   const es = createI18n('es').t;
   it('converts every unit-bearing figure: hours to minutes, mm to inches, °C to °F (and a temperature change without offset)', () => {
     const us = makeShow({ temperature: 'F', depth: 'in', time: 'min' }, 'en');
-    expect(wordWarning(en, { code: 'plan.allowMoreTime', params: { totalH: 12.5 } }, us)).toBe('Allow about 750\u202fmin in total (estimate).');
-    expect(wordWarning(en, { code: 'plan.raiseTemperature', params: { deltaC: 10 } }, us)).toBe('Raise the boost and diffuse temperatures by about 18\u202f°F (estimate).');
+    expect(wordWarning(en, { code: 'plan.allowMoreTime', params: { totalH: 12.5 } }, us)).toBe(
+      'Allow about 750\u202fmin in total (estimate).',
+    );
+    expect(wordWarning(en, { code: 'plan.raiseTemperature', params: { deltaC: 10 } }, us)).toBe(
+      'Raise the boost and diffuse temperatures by about 18\u202f°F (estimate).',
+    );
     expect(wordWarning(en, { code: 'shape.throughCarburizing', params: { depthMm: 2.54, limitMm: 5.08 } }, us)).toBe(
       'The case reaches 0.100\u202fin, more than a third of the 0.200\u202fin available: risk of through-carburizing.',
     );
   });
   it('formats figures the user’s way (decimal comma in Spanish) and leaves messages without units as physics words them', () => {
     const show = makeShow({ temperature: 'C', depth: 'mm', time: 'h' }, 'es');
-    expect(wordWarning(es, { code: 'plan.missedInFinalCheck', params: { ecdMm: 0.748, surfacePct: 0.905 } }, show)).toMatch(/^La comprobación final del plan da 0,75\u202fmm y 0,91\u202f%C/u);
+    expect(
+      wordWarning(es, { code: 'plan.missedInFinalCheck', params: { ecdMm: 0.748, surfacePct: 0.905 } }, show),
+    ).toMatch(/^La comprobación final del plan da 0,75\u202fmm y 0,91\u202f%C/u);
     const plain = { code: 'plan.lowerBoostPotential' as const, params: { potentialPct: 1.15 } };
     expect(UNIT_WARNINGS[plain.code]).toBeUndefined();
     expect(wordWarning(en, plain, show)).toBe(warningMessage(en, plain));

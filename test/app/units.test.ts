@@ -10,7 +10,11 @@ describe('display units', () => {
   it('follow the unit system unless a quantity is overridden', () => {
     expect(displayUnits('metric', auto)).toEqual({ temperature: 'C', depth: 'mm', time: 'h' });
     expect(displayUnits('us', auto)).toEqual({ temperature: 'F', depth: 'in', time: 'h' });
-    expect(displayUnits('us', { ...auto, temperature: 'C', time: 'min' })).toEqual({ temperature: 'C', depth: 'in', time: 'min' });
+    expect(displayUnits('us', { ...auto, temperature: 'C', time: 'min' })).toEqual({
+      temperature: 'C',
+      depth: 'in',
+      time: 'min',
+    });
   });
 });
 
@@ -36,10 +40,17 @@ describe('typed values keep their unit (NIST SP 811 factors)', () => {
 describe('errors worded in the chosen units', () => {
   const { t } = createI18n('en');
   it('a temperature range error is given in °F for a US user', () => {
-    const message = wordError(t, { code: 'temperature.outOfRange', field: 'temperatureC', params: { value: 1200, min: 700, max: 1150 } }, { temperature: 'F', depth: 'in', time: 'h' }, 'en');
+    const message = wordError(
+      t,
+      { code: 'temperature.outOfRange', field: 'temperatureC', params: { value: 1200, min: 700, max: 1150 } },
+      { temperature: 'F', depth: 'in', time: 'h' },
+      'en',
+    );
     expect(message).toBe('Temperature 2,192\u202f°F is outside 1,292\u202f°F to 2,102\u202f°F.');
   });
   it('errors without unit-bearing figures use the physics message', () => {
-    expect(wordError(t, { code: 'number.empty' }, { temperature: 'C', depth: 'mm', time: 'h' }, 'en')).toBe('Enter a number.');
+    expect(wordError(t, { code: 'number.empty' }, { temperature: 'C', depth: 'mm', time: 'h' }, 'en')).toBe(
+      'Enter a number.',
+    );
   });
 });

@@ -11,7 +11,9 @@ import { readRecipe } from '../../src/physics/cycle/readRecipe';
 import { DEFAULT_BETA_RANGE_M_PER_S } from '../../src/physics/uncertainty';
 import { medianMs } from './timing';
 
-const recipe = readRecipe(JSON.parse(readFileSync(new URL('../../public/examples/pinion-kr2231-cycle.json', import.meta.url), 'utf8')));
+const recipe = readRecipe(
+  JSON.parse(readFileSync(new URL('../../public/examples/pinion-kr2231-cycle.json', import.meta.url), 'utf8')),
+);
 
 /** 30 cycle jobs on one furnace, lab depths 5 % deeper than predicted (invented). */
 function cycleJobs(): Job[] {
@@ -29,7 +31,13 @@ function cycleJobs(): Job[] {
       workOrder: '',
       partNumber: 'KR-2231',
       steel: { gradeName: 'SAE 8620', coreCarbonPct: 0.2 },
-      inputs: { kind: 'cycle', recipe: { ...recipe.value, steps: recipe.value.steps.map((s, j) => (j === 1 ? { ...s, durationH: s.durationH + i * 0.1 } : s)) } },
+      inputs: {
+        kind: 'cycle',
+        recipe: {
+          ...recipe.value,
+          steps: recipe.value.steps.map((s, j) => (j === 1 ? { ...s, durationH: s.durationH + i * 0.1 } : s)),
+        },
+      },
       status: 'done',
       lab: { ecdMm: 0.95 + i * 0.01 },
       notes: '',
@@ -40,11 +48,19 @@ function cycleJobs(): Job[] {
 export async function run(): Promise<Record<string, number>> {
   if (!recipe.ok) throw new Error(recipe.error.code);
   const band = cycleDepthBand(recipe.value, { betaRangeMPerS: DEFAULT_BETA_RANGE_M_PER_S });
-  const bandMs = await medianMs(() => cycleDepthBand(recipe.value, { betaRangeMPerS: DEFAULT_BETA_RANGE_M_PER_S }), 20, 3);
-  console.log(`cycle band: ${bandMs.toFixed(1)} ms median, ${band.simulations} simulations, ECD ${band.nominalMm.toFixed(3)} mm in ${band.minMm.toFixed(3)}–${band.maxMm.toFixed(3)} mm`);
+  const bandMs = await medianMs(
+    () => cycleDepthBand(recipe.value, { betaRangeMPerS: DEFAULT_BETA_RANGE_M_PER_S }),
+    20,
+    3,
+  );
+  console.log(
+    `cycle band: ${bandMs.toFixed(1)} ms median, ${band.simulations} simulations, ECD ${band.nominalMm.toFixed(3)} mm in ${band.minMm.toFixed(3)}–${band.maxMm.toFixed(3)} mm`,
+  );
   const jobs = cycleJobs();
   const fitMs = await medianMs(() => calibrateFurnace(jobs, 'F1'), 5, 1);
   const fit = calibrateFurnace(jobs, 'F1').fit;
-  console.log(`calibration fit, 30 cycle jobs: ${fitMs.toFixed(0)} ms median${fit.ok ? `, k = ${fit.value.factor.toFixed(3)}` : ''}`);
+  console.log(
+    `calibration fit, 30 cycle jobs: ${fitMs.toFixed(0)} ms median${fit.ok ? `, k = ${fit.value.factor.toFixed(3)}` : ''}`,
+  );
   return { bandMs, bandSimulations: band.simulations, calibrationFit30CyclesMs: fitMs };
 }

@@ -47,5 +47,12 @@ export async function run(): Promise<Record<string, number>> {
       `error ${cycle3StepEcdErrorPct.toFixed(4)} %; surface ${result.value.surfaceCarbonPct.toFixed(4)} %C; ` +
       `reference run ${cycle3StepReferenceMs.toFixed(1)} ms; ${cycle3StepTimeSteps} time steps at default resolution`,
   );
-  return { cycle3StepMs, cycle3StepSolveOnlyMs, cycle3StepEcdErrorPct, cycle3StepEcdMm: ecdMm, cycle3StepReferenceMs, cycle3StepTimeSteps };
+  return {
+    cycle3StepMs,
+    cycle3StepSolveOnlyMs,
+    cycle3StepEcdErrorPct,
+    cycle3StepEcdMm: ecdMm,
+    cycle3StepReferenceMs,
+    cycle3StepTimeSteps,
+  };
 }

@@ -24,13 +24,23 @@ export async function run(): Promise<Record<string, number>> {
   start = performance.now();
   const saved = await store.putMany(jobs);
   if (!saved.ok || saved.value !== JOB_COUNT) throw new Error('seeding failed');
-  console.log(`seed: ${JOB_COUNT} demo jobs generated in ${generateMs.toFixed(0)} ms, stored in one transaction in ${(performance.now() - start).toFixed(0)} ms`);
+  console.log(
+    `seed: ${JOB_COUNT} demo jobs generated in ${generateMs.toFixed(0)} ms, stored in one transaction in ${(performance.now() - start).toFixed(0)} ms`,
+  );
 
-  const filter = { fromDate: '2025-03-01', toDate: '2025-03-31', furnace: 'F1', status: 'done' as const, text: 'coupon' };
+  const filter = {
+    fromDate: '2025-03-01',
+    toDate: '2025-03-31',
+    furnace: 'F1',
+    status: 'done' as const,
+    text: 'coupon',
+  };
   const filtered = await store.list(filter);
   if (!filtered.ok) throw new Error('filter failed');
   const logFilterMs = await medianMs(() => store.list(filter), 30, 5);
-  console.log(`filter (F1, March, done, "coupon"): ${filtered.value.jobs.length} jobs, median ${logFilterMs.toFixed(1)} ms over 30 runs (target < 100 ms)`);
+  console.log(
+    `filter (F1, March, done, "coupon"): ${filtered.value.jobs.length} jobs, median ${logFilterMs.toFixed(1)} ms over 30 runs (target < 100 ms)`,
+  );
 
   const shiftFilter = { fromDate: '2025-06-30', toDate: '2025-06-30', shift: 'A' as const };
   const shiftListMs = await medianMs(() => store.list(shiftFilter), 30, 5);
@@ -42,12 +52,16 @@ export async function run(): Promise<Record<string, number>> {
   const csv = await exportCsv(store);
   if (!csv.ok || csv.value.jobCount !== JOB_COUNT) throw new Error('CSV export failed');
   const logCsvExportMs = await medianMs(() => exportCsv(store), 7, 2);
-  console.log(`CSV export of ${JOB_COUNT} jobs (${(csv.value.text.length / 1e6).toFixed(1)} MB): median ${logCsvExportMs.toFixed(0)} ms over 7 runs (target < 1000 ms)`);
+  console.log(
+    `CSV export of ${JOB_COUNT} jobs (${(csv.value.text.length / 1e6).toFixed(1)} MB): median ${logCsvExportMs.toFixed(0)} ms over 7 runs (target < 1000 ms)`,
+  );
 
   const backup = await exportBackup(store, 'bench', END);
   if (!backup.ok) throw new Error('backup failed');
   const backupMs = await medianMs(() => exportBackup(store, 'bench', END), 5, 1);
-  console.log(`JSON backup of ${JOB_COUNT} jobs (${(backup.value.text.length / 1e6).toFixed(1)} MB): median ${backupMs.toFixed(0)} ms`);
+  console.log(
+    `JSON backup of ${JOB_COUNT} jobs (${(backup.value.text.length / 1e6).toFixed(1)} MB): median ${backupMs.toFixed(0)} ms`,
+  );
 
   store.close();
   return { logFilterMs, logCsvExportMs };

@@ -5,11 +5,19 @@
  */
 import { readFileSync } from 'node:fs';
 import { runCycle } from '../../src/physics/cycle/simulate';
-import { planForTargets, planTwoStepCycle, SEARCH_RESOLUTION, VERIFY_RESOLUTION, type PlanResult } from '../../src/physics/planner/planner';
+import {
+  planForTargets,
+  planTwoStepCycle,
+  SEARCH_RESOLUTION,
+  VERIFY_RESOLUTION,
+  type PlanResult,
+} from '../../src/physics/planner/planner';
 import { readPlanRequest } from '../../src/physics/planner/readPlanRequest';
 import { medianMs } from './timing';
 
-const pinionRequest: unknown = JSON.parse(readFileSync(new URL('../../public/examples/pinion-kr2231-plan.json', import.meta.url), 'utf8'));
+const pinionRequest: unknown = JSON.parse(
+  readFileSync(new URL('../../public/examples/pinion-kr2231-plan.json', import.meta.url), 'utf8'),
+);
 
 /** Resolution of the converged reference run the plan is compared with (× finer grid and time steps). */
 const REFERENCE_RESOLUTION = 32;
@@ -19,7 +27,8 @@ const RUNS = 50;
 function accuracy(plan: PlanResult) {
   const fine = runCycle(plan.recipe, REFERENCE_RESOLUTION);
   return {
-    ecdErrorPct: (Math.abs(plan.predicted.effectiveCaseDepthMm - fine.effectiveCaseDepthMm) / fine.effectiveCaseDepthMm) * 100,
+    ecdErrorPct:
+      (Math.abs(plan.predicted.effectiveCaseDepthMm - fine.effectiveCaseDepthMm) / fine.effectiveCaseDepthMm) * 100,
     surfaceErrorPct: Math.abs(plan.predicted.surfaceCarbonPct - fine.surfaceCarbonPct),
     aimMissMm: Math.abs(plan.predicted.effectiveCaseDepthMm - plan.aim!.effectiveCaseDepthMm),
     aimMissPct: Math.abs(plan.predicted.surfaceCarbonPct - plan.aim!.surfaceCarbonPct),

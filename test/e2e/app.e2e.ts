@@ -6,7 +6,17 @@ import type { Browser, Page } from 'playwright-core';
 import { formatQuantity } from '../../src/app/ui/format';
 import { caseDepth } from '../../src/physics';
 import { runAxe } from './axe';
-import { BASE_URL, cspViolations, foreignRequests, launch, openScreen, phoneContext, SCREENS, smallTargets, type Recorder } from './browser';
+import {
+  BASE_URL,
+  cspViolations,
+  foreignRequests,
+  launch,
+  openScreen,
+  phoneContext,
+  SCREENS,
+  smallTargets,
+  type Recorder,
+} from './browser';
 
 let browser: Browser;
 before(async () => {
@@ -70,7 +80,11 @@ describe('cycle editor', () => {
   it('adds, duplicates, moves and removes steps; shows results, a lazily loaded chart and the same numbers as a table', async () => {
     const { page, recorder, close } = await freshPage();
     await openScreen(page, 'depth');
-    assert.equal(recorder.requests.some((u) => /\/chart-[\w-]+\.js$/.test(u)), false, 'chart code is not loaded by the first screen');
+    assert.equal(
+      recorder.requests.some((u) => /\/chart-[\w-]+\.js$/.test(u)),
+      false,
+      'chart code is not loaded by the first screen',
+    );
     await page.click('a[href="#/cycle"]');
     await page.waitForSelector('.step');
     const steps = page.locator('li.step');
@@ -89,7 +103,10 @@ describe('cycle editor', () => {
     assert.notEqual(await answer(page).textContent(), before);
     assert.match((await answer(page).textContent()) ?? '', /mm$/);
     await page.waitForSelector('.profile-chart canvas');
-    assert.ok(recorder.requests.some((u) => /\/chart-[\w-]+\.js$/.test(u)), 'chart chunk loaded on demand');
+    assert.ok(
+      recorder.requests.some((u) => /\/chart-[\w-]+\.js$/.test(u)),
+      'chart chunk loaded on demand',
+    );
     assert.equal(await page.locator('table.numbers tbody tr').count(), 11);
     await page.fill('li.step >> nth=2 >> input[id$="-duration"]', 'zwei');
     assert.match((await page.locator('li.step >> nth=2 >> .field-error').textContent()) ?? '', /not a number/);
@@ -124,9 +141,17 @@ describe('keyboard and touch', () => {
     for (const id of ['depth', 'cycle', 'settings'] as const) {
       await openScreen(page, id);
       const controls: string[] = await page.evaluate(() =>
-        [...document.querySelectorAll<HTMLElement>('input:not([type=radio]), select, button:not([disabled]), a[href], input[type=radio]:checked')]
+        [
+          ...document.querySelectorAll<HTMLElement>(
+            'input:not([type=radio]), select, button:not([disabled]), a[href], input[type=radio]:checked',
+          ),
+        ]
           .filter((el) => el.offsetParent !== null || getComputedStyle(el).position === 'fixed')
-          .map((el) => el.id || `${el.tagName}:${el.getAttribute('aria-label') ?? el.getAttribute('href') ?? el.getAttribute('name') ?? el.textContent}`),
+          .map(
+            (el) =>
+              el.id ||
+              `${el.tagName}:${el.getAttribute('aria-label') ?? el.getAttribute('href') ?? el.getAttribute('name') ?? el.textContent}`,
+          ),
       );
       const reached = new Set<string>();
       await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
@@ -135,11 +160,18 @@ describe('keyboard and touch', () => {
         reached.add(
           await page.evaluate(() => {
             const el = document.activeElement as HTMLElement;
-            return el.id || `${el.tagName}:${el.getAttribute('aria-label') ?? el.getAttribute('href') ?? el.getAttribute('name') ?? el.textContent}`;
+            return (
+              el.id ||
+              `${el.tagName}:${el.getAttribute('aria-label') ?? el.getAttribute('href') ?? el.getAttribute('name') ?? el.textContent}`
+            );
           }),
         );
       }
-      assert.deepEqual(controls.filter((c) => !reached.has(c)), [], `${id}: controls not reached by Tab`);
+      assert.deepEqual(
+        controls.filter((c) => !reached.has(c)),
+        [],
+        `${id}: controls not reached by Tab`,
+      );
     }
     await page.focus('a[href="#/convert"]');
     await page.keyboard.press('Enter');
@@ -170,14 +202,19 @@ describe('accessibility (axe-core)', () => {
     ] as const;
     for (const [locale, theme] of runs) {
       const { page, close } = await freshPage(locale);
-      await page.addInitScript((th) => localStorage.setItem('casefront.settings', JSON.stringify({ theme: th })), theme);
+      await page.addInitScript(
+        (th) => localStorage.setItem('casefront.settings', JSON.stringify({ theme: th })),
+        theme,
+      );
       for (const id of SCREENS) {
         await openScreen(page, id);
         if (id === 'cycle') await page.waitForSelector('.profile-chart canvas');
         const { violations } = await runAxe(page);
         const bad = violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
         assert.equal(await page.evaluate(() => document.documentElement.dataset.theme), theme);
-        lines.push(`${locale} ${theme} ${id}: ${violations.length} violation(s)${violations.length ? ` [${violations.map((v) => `${v.id}/${v.impact}`).join(', ')}]` : ''}`);
+        lines.push(
+          `${locale} ${theme} ${id}: ${violations.length} violation(s)${violations.length ? ` [${violations.map((v) => `${v.id}/${v.impact}`).join(', ')}]` : ''}`,
+        );
         assert.deepEqual(bad, [], `${locale} ${theme} ${id}`);
       }
       await close();
@@ -202,14 +239,19 @@ describe('content security policy and origin', () => {
       if (id === 'cycle') await page.waitForSelector('.profile-chart canvas');
       assert.equal(await page.locator('script:not([src])').count(), 0);
       // Our markup has no style attributes (uPlot sizes its canvas through the CSSOM, which the CSP allows).
-      const styled = await page.evaluate(() => [...document.querySelectorAll('[style]')].filter((el) => !el.closest('.profile-chart')).length);
+      const styled = await page.evaluate(
+        () => [...document.querySelectorAll('[style]')].filter((el) => !el.closest('.profile-chart')).length,
+      );
       assert.equal(styled, 0, `${id}: no inline style attribute in our markup`);
     }
     await page.evaluate(() => navigator.serviceWorker.ready);
     assert.deepEqual(await cspViolations(page), []);
     assert.deepEqual(foreignRequests(recorder), []);
     assert.ok(recorder.requests.length > 5);
-    assert.deepEqual(recorder.problems.filter((p) => /Content Security Policy|Refused/.test(p)), []);
+    assert.deepEqual(
+      recorder.problems.filter((p) => /Content Security Policy|Refused/.test(p)),
+      [],
+    );
     assert.ok(recorder.requests.every((u) => u.startsWith(new URL(BASE_URL).origin)));
     await close();
   });

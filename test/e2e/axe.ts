@@ -11,8 +11,19 @@ export interface AxeSummary {
 export async function runAxe(page: Page): Promise<AxeSummary> {
   await page.evaluate(AXE_SOURCE);
   return page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: { id: string; impact: string | null; nodes: unknown[]; help: string }[] }> } }).axe;
+    const axe = (
+      window as unknown as {
+        axe: {
+          run: (
+            ctx: Document,
+            opts: object,
+          ) => Promise<{ violations: { id: string; impact: string | null; nodes: unknown[]; help: string }[] }>;
+        };
+      }
+    ).axe;
     const result = await axe.run(document, { resultTypes: ['violations'] });
-    return { violations: result.violations.map((v) => ({ id: v.id, impact: v.impact, nodes: v.nodes.length, help: v.help })) };
+    return {
+      violations: result.violations.map((v) => ({ id: v.id, impact: v.impact, nodes: v.nodes.length, help: v.help })),
+    };
   });
 }

@@ -18,7 +18,15 @@ export function chromiumAvailable(): boolean {
 export function launch(): Promise<Browser> {
   return chromium.launch({
     executablePath: CHROMIUM_PATH,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run', '--disable-sync'],
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--no-first-run',
+      '--disable-sync',
+    ],
   });
 }
 
@@ -28,15 +36,26 @@ export interface Recorder {
 }
 
 /** A phone-sized context whose pages record requests, console errors and CSP violations. */
-export async function phoneContext(browser: Browser, locale = 'en-US'): Promise<{ context: BrowserContext; recorder: Recorder }> {
-  const context = await browser.newContext({ viewport: PHONE, deviceScaleFactor: 1, locale, hasTouch: true, isMobile: true });
+export async function phoneContext(
+  browser: Browser,
+  locale = 'en-US',
+): Promise<{ context: BrowserContext; recorder: Recorder }> {
+  const context = await browser.newContext({
+    viewport: PHONE,
+    deviceScaleFactor: 1,
+    locale,
+    hasTouch: true,
+    isMobile: true,
+  });
   const recorder: Recorder = { requests: [], problems: [] };
   context.on('request', (request) => recorder.requests.push(request.url()));
   // Runs before any page script; a violation event is recorded on the window for the test to read.
   await context.addInitScript(() => {
     const w = window as unknown as { __cspViolations: string[] };
     w.__cspViolations = [];
-    document.addEventListener('securitypolicyviolation', (e) => w.__cspViolations.push(`${e.violatedDirective} ${e.blockedURI}`));
+    document.addEventListener('securitypolicyviolation', (e) =>
+      w.__cspViolations.push(`${e.violatedDirective} ${e.blockedURI}`),
+    );
   });
   context.on('page', (page) => watchPage(page, recorder));
   return { context, recorder };
@@ -62,7 +81,9 @@ export async function openScreen(page: Page, id: string): Promise<void> {
 /** Every request stayed on the app's own origin (data: and blob: URLs are local). */
 export function foreignRequests(recorder: Recorder): string[] {
   const origin = new URL(BASE_URL).origin;
-  return recorder.requests.filter((url) => !url.startsWith('data:') && !url.startsWith('blob:') && new URL(url).origin !== origin);
+  return recorder.requests.filter(
+    (url) => !url.startsWith('data:') && !url.startsWith('blob:') && new URL(url).origin !== origin,
+  );
 }
 
 export const SCREENS = ['depth', 'cycle', 'plan', 'recovery', 'log', 'convert', 'settings', 'safety'] as const;

@@ -34,7 +34,11 @@ const WATCH_FOR_RAW_KEYS = `
 `;
 
 async function assertNoRawKey(page: Page, where: string): Promise<void> {
-  assert.deepEqual(await page.evaluate(() => (window as unknown as { __rawKeys: string[] }).__rawKeys), [], `${where}: a raw translation key was shown`);
+  assert.deepEqual(
+    await page.evaluate(() => (window as unknown as { __rawKeys: string[] }).__rawKeys),
+    [],
+    `${where}: a raw translation key was shown`,
+  );
 }
 
 describe('locale in two parts', () => {
@@ -53,7 +57,10 @@ describe('locale in two parts', () => {
     await page.waitForSelector('.answer-value');
     await page.fill('#depth-temperature', '9x5');
     await page.waitForSelector('#depth-temperature-error');
-    assert.ok(rest.requested > 0 && rest.served === 0, 'the first screen painted before the rest of the locale arrived');
+    assert.ok(
+      rest.requested > 0 && rest.served === 0,
+      'the first screen painted before the rest of the locale arrived',
+    );
     assert.equal(await page.textContent('main h1'), 'Profundidad de capa');
     await assertNoRawKey(page, 'first screen');
 
@@ -74,7 +81,10 @@ describe('locale in two parts', () => {
     await page.click('a[href="#/depth"]');
     await page.waitForFunction(() => document.querySelector('main h1')?.textContent === 'Profundidad de capa');
     await assertNoRawKey(page, 'first screen offline');
-    assert.deepEqual(recorder.problems.filter((p) => !/ERR_INTERNET_DISCONNECTED/u.test(p)), []);
+    assert.deepEqual(
+      recorder.problems.filter((p) => !/ERR_INTERNET_DISCONNECTED/u.test(p)),
+      [],
+    );
     await context.close();
   });
 });

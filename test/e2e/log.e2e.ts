@@ -9,7 +9,16 @@ import { after, before, describe, it } from 'node:test';
 import type { Browser, Page } from 'playwright-core';
 import { shiftOf } from '../../src/jobs/shift';
 import { runAxe } from './axe';
-import { BASE_URL, cspViolations, foreignRequests, launch, openScreen, phoneContext, smallTargets, waitUntilOfflineReady } from './browser';
+import {
+  BASE_URL,
+  cspViolations,
+  foreignRequests,
+  launch,
+  openScreen,
+  phoneContext,
+  smallTargets,
+  waitUntilOfflineReady,
+} from './browser';
 import { backupText, demoLog, importFile, storedRecords, wipeLog } from './logData';
 
 const { version } = JSON.parse(readFileSync('package.json', 'utf8')) as { version: string };
@@ -86,25 +95,56 @@ describe('job log', () => {
     await page.reload();
     await page.waitForSelector('text=Job WO-E2E-1');
     const text = await mainText(page);
-    for (const expected of ['In furnace · KR-2231 · F2', 'Load 20 min late.\nUpset: 0 h 40 min on the clock counted as', 'Measured ECD0.86 mm', 'Surface hardness61.0 HRC', 'Core hardness360 HV', 'Measured byQL', `Predicted ECD${predicted}`, `Casefront ${version}`]) {
-      assert.ok(text.replace(/\u202f/gu, ' ').includes(expected.replace(/\u202f/gu, ' ')), `job page shows "${expected}"`);
+    for (const expected of [
+      'In furnace · KR-2231 · F2',
+      'Load 20 min late.\nUpset: 0 h 40 min on the clock counted as',
+      'Measured ECD0.86 mm',
+      'Surface hardness61.0 HRC',
+      'Core hardness360 HV',
+      'Measured byQL',
+      `Predicted ECD${predicted}`,
+      `Casefront ${version}`,
+    ]) {
+      assert.ok(
+        text.replace(/\u202f/gu, ' ').includes(expected.replace(/\u202f/gu, ' ')),
+        `job page shows "${expected}"`,
+      );
     }
-    assert.match(text, /Predicted − measured[−+]?\d\.\d\d\smm[−+]?\d+\.\d\s%Measured ECD in the predicted range(Inside|Outside)/u);
+    assert.match(
+      text,
+      /Predicted − measured[−+]?\d\.\d\d\smm[−+]?\d+\.\d\s%Measured ECD in the predicted range(Inside|Outside)/u,
+    );
 
     const [record] = await storedRecords(page);
     assert.ok(record);
     const created = new Date(String(record.createdAt));
     assert.deepEqual({ shift: record.shift, shiftDate: record.shiftDate }, shiftOf(created));
     assert.equal((record.inputs as { kind: string }).kind, 'depth');
-    const prediction = record.prediction as { appVersion: string; ecdBandMm?: { minMm: number; maxMm: number }; model: string };
+    const prediction = record.prediction as {
+      appVersion: string;
+      ecdBandMm?: { minMm: number; maxMm: number };
+      model: string;
+    };
     assert.equal(prediction.appVersion, version);
     assert.ok(prediction.ecdBandMm && prediction.ecdBandMm.minMm < prediction.ecdBandMm.maxMm);
     const { measuredAt, ...lab } = record.lab as { measuredAt: string };
-    assert.deepEqual(lab, { ecdMm: 0.86, surfaceHardness: { value: 61, unit: 'HRC' }, coreHardness: { value: 360, unit: 'HV' }, by: 'QL' });
+    assert.deepEqual(lab, {
+      ecdMm: 0.86,
+      surfaceHardness: { value: 61, unit: 'HRC' },
+      coreHardness: { value: 360, unit: 'HV' },
+      by: 'QL',
+    });
     assert.match(measuredAt, /^\d{4}-\d{2}-\d{2}$/u);
-    assert.ok(['granted', 'denied', 'unsupported'].includes((await page.getAttribute('.log-persistence', 'data-persistence')) ?? ''));
+    assert.ok(
+      ['granted', 'denied', 'unsupported'].includes(
+        (await page.getAttribute('.log-persistence', 'data-persistence')) ?? '',
+      ),
+    );
     assert.deepEqual(foreignRequests(recorder), []);
-    assert.deepEqual(recorder.problems.filter((p) => !/ERR_INTERNET_DISCONNECTED/.test(p)), []);
+    assert.deepEqual(
+      recorder.problems.filter((p) => !/ERR_INTERNET_DISCONNECTED/.test(p)),
+      [],
+    );
     await context.close();
   });
 
@@ -114,7 +154,10 @@ describe('job log', () => {
     await openScreen(tab1, 'depth');
     await openScreen(tab2, 'cycle');
     await tab2.waitForSelector('.profile-chart canvas');
-    for (const [tab, workOrder] of [[tab1, 'WO-TAB-1'], [tab2, 'WO-TAB-2']] as const) {
+    for (const [tab, workOrder] of [
+      [tab1, 'WO-TAB-1'],
+      [tab2, 'WO-TAB-2'],
+    ] as const) {
       await tab.click('#log-save button');
       await tab.waitForSelector('#log-save-title');
       await tab.fill('#log-save-work-order', workOrder);
@@ -134,7 +177,9 @@ describe('job log', () => {
     for (const tab of [tab1, tab2]) {
       await tab.bringToFront();
       await tab.click('a[href="#/log"]');
-      await tab.waitForFunction(() => document.querySelectorAll('a.job-card').length === 2, undefined, { polling: 100 });
+      await tab.waitForFunction(() => document.querySelectorAll('a.job-card').length === 2, undefined, {
+        polling: 100,
+      });
     }
     const id = String(records[0]!.id);
     for (const tab of [tab1, tab2]) {
@@ -160,15 +205,24 @@ describe('job log', () => {
     const { context, recorder } = await phoneContext(browser);
     const page = await context.newPage();
     await openScreen(page, 'log');
-    assert.equal(await importFile(page, backupText(demoLog(40, 5))), 'Backup read: 40 added, 0 updated, 0 unchanged, 0 kept because the copy on this device is newer.');
+    assert.equal(
+      await importFile(page, backupText(demoLog(40, 5))),
+      'Backup read: 40 added, 0 updated, 0 unchanged, 0 kept because the copy on this device is newer.',
+    );
     const before = await storedRecords(page);
     assert.equal(before.length, 40);
 
-    const [backup] = await Promise.all([page.waitForEvent('download'), page.click('button:has-text("Download backup (JSON)")')]);
+    const [backup] = await Promise.all([
+      page.waitForEvent('download'),
+      page.click('button:has-text("Download backup (JSON)")'),
+    ]);
     assert.match(backup.suggestedFilename(), /^casefront-job-log-\d{4}-\d{2}-\d{2}\.json$/u);
     const backupJson = readFileSync((await backup.path())!, 'utf8');
     assert.equal((JSON.parse(backupJson) as { jobs: unknown[] }).jobs.length, 40);
-    const [csv] = await Promise.all([page.waitForEvent('download'), page.click('button:has-text("Download for spreadsheets (CSV)")')]);
+    const [csv] = await Promise.all([
+      page.waitForEvent('download'),
+      page.click('button:has-text("Download for spreadsheets (CSV)")'),
+    ]);
     const csvText = readFileSync((await csv.path())!, 'utf8');
     assert.ok(csvText.startsWith('\uFEFFid,created_at,updated_at,shift_date,shift,operator,furnace'));
     assert.equal(csvText.trim().split('\r\n').length, 41);
@@ -178,15 +232,24 @@ describe('job log', () => {
     await page.reload();
     await page.waitForSelector('#files-import-input');
     assert.deepEqual(await storedRecords(page), []);
-    assert.equal(await importFile(page, backupJson), 'Backup read: 40 added, 0 updated, 0 unchanged, 0 kept because the copy on this device is newer.');
+    assert.equal(
+      await importFile(page, backupJson),
+      'Backup read: 40 added, 0 updated, 0 unchanged, 0 kept because the copy on this device is newer.',
+    );
     assert.deepEqual(await storedRecords(page), before);
-    assert.equal(await importFile(page, backupJson), 'Backup read: 0 added, 0 updated, 40 unchanged, 0 kept because the copy on this device is newer.');
+    assert.equal(
+      await importFile(page, backupJson),
+      'Backup read: 0 added, 0 updated, 40 unchanged, 0 kept because the copy on this device is newer.',
+    );
 
     const broken = JSON.parse(backupJson) as { jobs: Record<string, unknown>[] };
     broken.jobs[3]!.operator = 'M1';
     broken.jobs[0]!.notes = 'changed';
     const message = await importFile(page, JSON.stringify(broken));
-    assert.match(message, /^Nothing was imported: the file has a problem\. jobs\[3\]\.operator: not in the expected format\. Initials are 1 to 4 letters, e\.g\. MK\.$/u);
+    assert.match(
+      message,
+      /^Nothing was imported: the file has a problem\. jobs\[3\]\.operator: not in the expected format\. Initials are 1 to 4 letters, e\.g\. MK\.$/u,
+    );
     assert.match(await importFile(page, 'not json at all'), /not JSON/u);
     assert.deepEqual(await storedRecords(page), before);
     assert.deepEqual(await cspViolations(page), []);
@@ -206,7 +269,8 @@ describe('job log', () => {
     const origin = new URL(BASE_URL).origin;
     const { usage } = await page.evaluate(() => navigator.storage.estimate());
     await cdp.send('Storage.overrideQuotaForOrigin', { origin, quotaSize: (usage ?? 0) + 2000 });
-    const full = 'The device storage is full. Nothing was saved. Free some space or export and remove old jobs, then try again.';
+    const full =
+      'The device storage is full. Nothing was saved. Free some space or export and remove old jobs, then try again.';
 
     await page.click('#log-save button');
     await page.fill('#log-save-work-order', 'WO-FULL-1');
@@ -228,7 +292,10 @@ describe('job log', () => {
     assert.equal(await page.inputValue('#log-save-work-order'), 'WO-FULL-1');
     await page.click('form.log-form button[type=submit]');
     await page.waitForSelector('.log-saved');
-    assert.deepEqual((await storedRecords(page)).map((r) => r.workOrder), ['WO-FULL-1']);
+    assert.deepEqual(
+      (await storedRecords(page)).map((r) => r.workOrder),
+      ['WO-FULL-1'],
+    );
     assert.deepEqual(recorder.problems, []);
     await context.close();
   });
@@ -246,7 +313,13 @@ describe('job log', () => {
     const note = '<img src=x onerror=alert(1)>';
     const hostile = [
       { ...plain!, notes: note, status: 'planned' as const },
-      { ...second!, workOrder: '<img src=x onerror=window.__xss=1>', partNumber: '<b onmouseover=alert(2)>KR</b>', notes: '<script>window.__xss=2</script>', status: 'onHold' as const },
+      {
+        ...second!,
+        workOrder: '<img src=x onerror=window.__xss=1>',
+        partNumber: '<b onmouseover=alert(2)>KR</b>',
+        notes: '<script>window.__xss=2</script>',
+        status: 'onHold' as const,
+      },
     ];
     assert.match(await importFile(page, backupText(hostile)), /2 added/u);
     const requestsBefore = recorder.requests.length;
@@ -260,7 +333,10 @@ describe('job log', () => {
     await page.waitForSelector('.job-notes');
     // Nothing ran and nothing was fetched (an <img src=x> made from the note would request /x).
     const later = recorder.requests.slice(requestsBefore);
-    assert.deepEqual(later.filter((u) => /\/x$/u.test(u) || !u.startsWith(new URL(BASE_URL).origin)), []);
+    assert.deepEqual(
+      later.filter((u) => /\/x$/u.test(u) || !u.startsWith(new URL(BASE_URL).origin)),
+      [],
+    );
     assert.deepEqual(dialogs, []);
     assert.equal(await page.evaluate(() => (window as unknown as { __xss?: unknown }).__xss), undefined);
     assert.equal(await page.locator('main img, main script, main b').count(), 0);
@@ -289,20 +365,35 @@ describe('job log views: accessibility, touch targets, screenshots', () => {
       mkdirSync('test-results', { recursive: true });
       const { context, recorder } = await phoneContext(browser, locale);
       const page = await context.newPage();
-      await page.addInitScript((th) => localStorage.setItem('casefront.settings', JSON.stringify({ theme: th })), theme);
+      await page.addInitScript(
+        (th) => localStorage.setItem('casefront.settings', JSON.stringify({ theme: th })),
+        theme,
+      );
       await openScreen(page, 'log');
       const jobs = demoLog(60, 6, 3);
       await importFile(page, backupText(jobs));
-      const measured = jobs.filter((j) => j.lab?.ecdMm !== undefined).sort((a, b) => (a.createdAt < b.createdAt ? 1 : -1))[0]!;
+      const measured = jobs
+        .filter((j) => j.lab?.ecdMm !== undefined)
+        .sort((a, b) => (a.createdAt < b.createdAt ? 1 : -1))[0]!;
       const lines: string[] = [];
       const check = async (name: string, fullPage = false) => {
         assert.equal(await page.evaluate(() => document.documentElement.lang), language);
         const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
         assert.ok(overflow <= 0, `${language} ${name}: ${overflow} px wider than the screen`);
-        assert.deepEqual(await smallTargets(page, '.job-card, .view-tabs a, .back-link, .disclosure > summary, .quick-pick'), [], `${language} ${name}: small targets`);
+        assert.deepEqual(
+          await smallTargets(page, '.job-card, .view-tabs a, .back-link, .disclosure > summary, .quick-pick'),
+          [],
+          `${language} ${name}: small targets`,
+        );
         const { violations } = await runAxe(page);
-        lines.push(`${name}: ${violations.length}${violations.length ? ` [${violations.map((v) => `${v.id}/${v.impact}`).join(', ')}]` : ''}`);
-        assert.deepEqual(violations.filter((v) => v.impact === 'serious' || v.impact === 'critical'), [], `${language} ${theme} ${name}`);
+        lines.push(
+          `${name}: ${violations.length}${violations.length ? ` [${violations.map((v) => `${v.id}/${v.impact}`).join(', ')}]` : ''}`,
+        );
+        assert.deepEqual(
+          violations.filter((v) => v.impact === 'serious' || v.impact === 'critical'),
+          [],
+          `${language} ${theme} ${name}`,
+        );
         if (shots) await page.screenshot({ path: `test-results/${language}-log-${name}.png`, fullPage });
       };
       await page.goto(`${BASE_URL}#/log`);
@@ -329,7 +420,12 @@ describe('job log views: accessibility, touch targets, screenshots', () => {
       await page.click('#log-save button');
       await page.waitForSelector('#log-save-title');
       // The form's fields in view, below the sticky answer.
-      await page.evaluate(() => window.scrollTo(0, document.querySelector('#log-save-title')!.getBoundingClientRect().top + window.scrollY - 150));
+      await page.evaluate(() =>
+        window.scrollTo(
+          0,
+          document.querySelector('#log-save-title')!.getBoundingClientRect().top + window.scrollY - 150,
+        ),
+      );
       await check('save');
       console.log(`axe ${language} ${theme}: ${lines.join('; ')}`);
       assert.deepEqual(foreignRequests(recorder), []);

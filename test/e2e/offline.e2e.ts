@@ -34,7 +34,10 @@ describe('offline', () => {
     assert.equal(await page.getAttribute('.offline-status', 'data-offline-state'), 'offline');
     for (const id of ['cycle', 'recovery', 'log', 'convert', 'settings', 'safety']) {
       await page.click(id === 'safety' ? '.safety-link' : `a[href="#/${id}"]`);
-      await page.waitForFunction((screen) => location.hash === `#/${screen}` && !document.querySelector('.screen-loading'), id);
+      await page.waitForFunction(
+        (screen) => location.hash === `#/${screen}` && !document.querySelector('.screen-loading'),
+        id,
+      );
     }
     await page.click('a[href="#/cycle"]');
     await page.waitForSelector('.profile-chart canvas');
@@ -43,7 +46,10 @@ describe('offline', () => {
     await page.locator('label.segment', { hasText: 'Deutsch' }).click();
     await page.waitForFunction(() => document.querySelector('main h1')?.textContent === 'Optionen');
     assert.deepEqual(foreignRequests(recorder), []);
-    assert.deepEqual(recorder.problems.filter((p) => !/ERR_INTERNET_DISCONNECTED/.test(p)), []);
+    assert.deepEqual(
+      recorder.problems.filter((p) => !/ERR_INTERNET_DISCONNECTED/.test(p)),
+      [],
+    );
     await context.close();
   });
 });
@@ -67,14 +73,20 @@ describe('update prompt', () => {
       await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.update());
       await page.waitForSelector('.update-prompt');
       // Nothing is applied until the user says so: the old worker still controls the page.
-      assert.equal(await page.evaluate(() => navigator.serviceWorker.getRegistration().then((r) => Boolean(r?.waiting))), true);
+      assert.equal(
+        await page.evaluate(() => navigator.serviceWorker.getRegistration().then((r) => Boolean(r?.waiting))),
+        true,
+      );
       assert.equal(await page.inputValue('#recovery-required'), '5,5');
 
       await Promise.all([page.waitForEvent('load'), page.click('.update-prompt .button-primary')]);
       await page.waitForSelector('main h1');
       assert.equal(await page.inputValue('#recovery-required'), '5,5');
       assert.equal(await page.locator('.update-prompt').count(), 0);
-      assert.equal(await page.evaluate(() => navigator.serviceWorker.getRegistration().then((r) => Boolean(r?.waiting))), false);
+      assert.equal(
+        await page.evaluate(() => navigator.serviceWorker.getRegistration().then((r) => Boolean(r?.waiting))),
+        false,
+      );
     } finally {
       writeFileSync(swPath, original);
       await context.close();

@@ -30,14 +30,20 @@ const median = (values: number[]) => {
 };
 
 /** Durations (ms) of the computations the app timed under `casefront:<name>`. */
-const measures = (page: Page, name: string) => page.evaluate((n) => performance.getEntriesByName(`casefront:${n}`).map((e) => e.duration), name);
+const measures = (page: Page, name: string) =>
+  page.evaluate((n) => performance.getEntriesByName(`casefront:${n}`).map((e) => e.duration), name);
 
 const answer = (page: Page) => page.locator('.answer-value').first();
-const rowValue = (page: Page, key: string) => page.locator(`[data-result="${key}"] .result-value`).first().textContent();
+const rowValue = (page: Page, key: string) =>
+  page.locator(`[data-result="${key}"] .result-value`).first().textContent();
 
 async function expectNoAxeProblems(page: Page, what: string): Promise<string> {
   const { violations } = await runAxe(page);
-  assert.deepEqual(violations.filter((v) => v.impact === 'serious' || v.impact === 'critical'), [], what);
+  assert.deepEqual(
+    violations.filter((v) => v.impact === 'serious' || v.impact === 'critical'),
+    [],
+    what,
+  );
   return `${what}: ${violations.length}`;
 }
 
@@ -60,12 +66,17 @@ describe('planning a two-step cycle', () => {
     await page.fill('#plan-surface-min', '0.85');
     await page.fill('#plan-surface-max', '0.95');
     await page.waitForSelector('.plan-findings');
-    assert.match((await page.textContent('.plan-binding')) ?? '', /^Surface carbon of at least 0.85 % is above what the diffuse potential 0.8 %/u);
+    assert.match(
+      (await page.textContent('.plan-binding')) ?? '',
+      /^Surface carbon of at least 0.85 % is above what the diffuse potential 0.8 %/u,
+    );
     assert.equal(await page.textContent('.plan-suggestions li'), 'Raise the diffuse potential to about 0.93 %.');
     assert.equal(await page.isDisabled('#log-save button'), true);
     const planMs = await measures(page, 'plan');
     assert.ok(planMs.length >= 8, `one plan per change (${planMs.length})`);
-    console.log(`plan in Chromium: median ${median(planMs).toFixed(1)} ms, first ${planMs[0]!.toFixed(1)} ms, max ${Math.max(...planMs).toFixed(1)} ms over ${planMs.length} plans`);
+    console.log(
+      `plan in Chromium: median ${median(planMs).toFixed(1)} ms, first ${planMs[0]!.toFixed(1)} ms, max ${Math.max(...planMs).toFixed(1)} ms over ${planMs.length} plans`,
+    );
 
     await page.fill('#plan-surface-min', '0.75');
     await page.fill('#plan-surface-max', '0.9');
@@ -74,7 +85,11 @@ describe('planning a two-step cycle', () => {
     await page.click('.plan-actions button');
     await page.waitForSelector('li.step');
     assert.match(page.url(), /#\/cycle$/u);
-    assert.deepEqual(await page.locator('li.step h3').allTextContents(), ['Step 1 · Boost', 'Step 2 · Diffuse', 'Step 3 · Hardening']);
+    assert.deepEqual(await page.locator('li.step h3').allTextContents(), [
+      'Step 1 · Boost',
+      'Step 2 · Diffuse',
+      'Step 3 · Hardening',
+    ]);
     assert.equal(await page.inputValue('li.step >> nth=0 >> input[id$="-duration"]'), '4.193');
     assert.equal(await page.inputValue('li.step >> nth=2 >> input[id$="-start"]'), '850');
     assert.equal(await answer(page).textContent(), predictedEcd);
@@ -93,7 +108,10 @@ describe('planning a two-step cycle', () => {
     await page.click('#plan-band > button');
     await page.waitForSelector('#plan-band [data-result="band"]');
     assert.match((await rowValue(page, 'band')) ?? '', /^0\.\d\d–\d\.\d\d\u202fmm$/u);
-    assert.match((await page.textContent('#plan-band [data-result="band"] .result-detail')) ?? '', /^models .* · furnace ±8\u202f°C: .* · β range: /u);
+    assert.match(
+      (await page.textContent('#plan-band [data-result="band"] .result-detail')) ?? '',
+      /^models .* · furnace ±8\u202f°C: .* · β range: /u,
+    );
     await page.click('#plan-band summary');
     assert.match((await page.textContent('#plan-band .band-method')) ?? '', /not a statistical confidence interval/u);
     const shot = async (name: string) => {
@@ -113,7 +131,9 @@ describe('planning a two-step cycle', () => {
     for (const duration of ['2.5', '3', '3.5']) await page.fill('li.step >> nth=1 >> input[id$="-duration"]', duration);
     await page.waitForFunction(() => performance.getEntriesByName('casefront:band').length >= 6);
     const bandMs = await measures(page, 'band');
-    console.log(`likely range (23 simulations) in Chromium: median ${median(bandMs).toFixed(1)} ms, max ${Math.max(...bandMs).toFixed(1)} ms over ${bandMs.length}`);
+    console.log(
+      `likely range (23 simulations) in Chromium: median ${median(bandMs).toFixed(1)} ms, max ${Math.max(...bandMs).toFixed(1)} ms over ${bandMs.length}`,
+    );
     console.log(await expectNoAxeProblems(page, 'cycle with range'));
     assert.deepEqual(await smallTargets(page, '.disclosure > summary'), []);
     assert.deepEqual(await cspViolations(page), []);
@@ -126,7 +146,15 @@ describe('planning a two-step cycle', () => {
 function labResultsOnF1(now = new Date()): Job[] {
   const composition = { Si: 0.25, Mn: 0.8, Cr: 0.5, Ni: 0.55, Mo: 0.2 };
   return [5, 6.5, 8].map((timeH, i) => {
-    const request = { temperatureC: 925, timeH, carbonPotentialPct: 0.9, coreCarbonPct: 0.2, thresholdCarbonPct: 0.4, model: 'agren' as const, composition };
+    const request = {
+      temperatureC: 925,
+      timeH,
+      carbonPotentialPct: 0.9,
+      coreCarbonPct: 0.2,
+      thresholdCarbonPct: 0.4,
+      model: 'agren' as const,
+      composition,
+    };
     const plain = caseDepth(request);
     const furnace = caseDepth({ ...request, diffusivityFactor: 1.21 });
     if (!plain.ok || !furnace.ok) throw new Error('demo request rejected');
@@ -152,7 +180,11 @@ function labResultsOnF1(now = new Date()): Job[] {
         appVersion: '0.1.0',
       },
       status: 'done',
-      lab: { ecdMm: Math.round(furnace.value.effectiveCaseDepthMm * 1000) / 1000, measuredAt: created.toISOString().slice(0, 10), by: 'QL' },
+      lab: {
+        ecdMm: Math.round(furnace.value.effectiveCaseDepthMm * 1000) / 1000,
+        measuredAt: created.toISOString().slice(0, 10),
+        by: 'QL',
+      },
       notes: '',
     };
   });
@@ -170,14 +202,20 @@ describe('furnace calibration', () => {
       await openScreen(page, 'depth');
       const before = await answer(page).textContent();
       assert.equal(await page.locator('#depth-furnace').count(), 0, 'no furnace choice before any calibration');
-      assert.match(await importFile(page, backupText(labResultsOnF1())), language === 'en' ? /^Backup read: 3 added/u : /3/u);
+      assert.match(
+        await importFile(page, backupText(labResultsOnF1())),
+        language === 'en' ? /^Backup read: 3 added/u : /3/u,
+      );
 
       // Reached from the shift summary, beside predicted against measured.
       await page.goto(`${BASE_URL}#/log/summary`);
       await page.click('a.button[href="#/log/calibration"]');
       const card = page.locator('.calibration-card[data-furnace="F1"]');
       await card.waitFor();
-      assert.equal(await card.locator('[data-result="factor"] .result-value').textContent(), language === 'en' ? 'D × 1.21' : 'D × 1,21');
+      assert.equal(
+        await card.locator('[data-result="factor"] .result-value').textContent(),
+        language === 'en' ? 'D × 1.21' : 'D × 1,21',
+      );
       assert.equal(await card.locator('[data-result="jobs"] .result-value').textContent(), '3');
       const toggle = card.locator('input[type="checkbox"]');
       assert.equal(await toggle.isChecked(), false, 'off by default');
@@ -185,7 +223,10 @@ describe('furnace calibration', () => {
       assert.equal(await card.locator('tbody tr').count(), 3);
       const lines = [await expectNoAxeProblems(page, `${language} calibration`)];
       assert.deepEqual(await smallTargets(page, '.view-tabs a, .disclosure > summary'), []);
-      assert.ok((await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)) <= 0, 'no horizontal overflow');
+      assert.ok(
+        (await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)) <= 0,
+        'no horizontal overflow',
+      );
       await page.screenshot({ path: `test-results/${language}-log-calibration-f1.png`, fullPage: true });
       await toggle.check();
 
@@ -198,7 +239,12 @@ describe('furnace calibration', () => {
       const mm = (text: string | null) => Number((text ?? '').replace(',', '.').replace(/[^\d.]/gu, ''));
       // √1.21 = 1.1: the calibrated depth is 10 % deeper (rounded to 0.01 mm on screen).
       assert.ok(Math.abs(mm(after) / mm(before) - 1.1) < 0.015, `${before} → ${after}`);
-      assert.match((await rowValue(page, 'calibration')) ?? '', language === 'en' ? /^Calibrated for F1: D × 1\.21 \(95 %: 1\.\d\d–1\.\d\d, 3 jobs\)$/u : /^Calibrado para F1: D × 1,21 \(95 %: /u);
+      assert.match(
+        (await rowValue(page, 'calibration')) ?? '',
+        language === 'en'
+          ? /^Calibrated for F1: D × 1\.21 \(95 %: 1\.\d\d–1\.\d\d, 3 jobs\)$/u
+          : /^Calibrado para F1: D × 1,21 \(95 %: /u,
+      );
       lines.push(await expectNoAxeProblems(page, `${language} depth calibrated`));
       await page.screenshot({ path: `test-results/${language}-depth-calibrated.png` });
       await page.click('#log-save button');

@@ -27,7 +27,9 @@ function freePort(): Promise<number> {
     server.once('error', reject);
     server.listen(0, '127.0.0.1', () => {
       const address = server.address();
-      server.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
+      server.close(() =>
+        typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port')),
+      );
     });
   });
 }
@@ -55,9 +57,13 @@ if (!existsSync(join('dist', 'index.html'))) {
 
 const port = await freePort();
 const url = `http://127.0.0.1:${port}/`;
-const server: ChildProcess = spawn(process.execPath, [vite, 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort'], {
-  stdio: ['ignore', 'ignore', 'inherit'],
-});
+const server: ChildProcess = spawn(
+  process.execPath,
+  [vite, 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort'],
+  {
+    stdio: ['ignore', 'ignore', 'inherit'],
+  },
+);
 let exitCode = 1;
 const started = Date.now();
 try {
@@ -66,10 +72,14 @@ try {
     .filter((f) => f.endsWith('.e2e.ts'))
     .sort()
     .map((f) => join('test', 'e2e', f));
-  const run = spawnSync(process.execPath, ['--import', 'tsx', '--test', '--test-concurrency=1', '--test-reporter=spec', ...files], {
-    stdio: 'inherit',
-    env: { ...process.env, CASEFRONT_URL: url },
-  });
+  const run = spawnSync(
+    process.execPath,
+    ['--import', 'tsx', '--test', '--test-concurrency=1', '--test-reporter=spec', ...files],
+    {
+      stdio: 'inherit',
+      env: { ...process.env, CASEFRONT_URL: url },
+    },
+  );
   exitCode = run.status ?? 1;
 } finally {
   server.kill();

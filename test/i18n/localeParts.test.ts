@@ -15,7 +15,8 @@ import { leafKeys, messagesOf, translationKeys, type KeyUse } from './translatio
 const ENTRY = 'src/app/main.tsx';
 
 /** The leaves of a tree with their messages, for comparing trees whatever their key order. */
-const entries = (tree: Messages) => leafKeys(tree).map((key) => [key, key.split('.').reduce<unknown>((n, k) => (n as Messages)[k], tree)] as const);
+const entries = (tree: Messages) =>
+  leafKeys(tree).map((key) => [key, key.split('.').reduce<unknown>((n, k) => (n as Messages)[k], tree)] as const);
 
 /** Both parts merged back, as the app does (deep). */
 function merge(a: Messages, b: Messages): Messages {
@@ -31,7 +32,10 @@ function expectSplit(messages: Messages, keys: readonly string[]) {
   const first = pickLocalePart(messages, 'first', keys);
   const rest = pickLocalePart(messages, 'rest', keys);
   const firstKeys = new Set(leafKeys(first).filter((k) => k !== ''));
-  expect(leafKeys(rest).filter((k) => firstKeys.has(k)), 'in both parts').toEqual([]);
+  expect(
+    leafKeys(rest).filter((k) => firstKeys.has(k)),
+    'in both parts',
+  ).toEqual([]);
   expect(new Map(entries(merge(first, rest)))).toEqual(new Map(entries(messages)));
 }
 
@@ -45,7 +49,9 @@ describe('splitting a locale file in two parts', () => {
 
   it('a path takes its subtree or its message with the plural forms, and nothing that merely starts alike', () => {
     const messages: Messages = { a: { b: { c: '1', d: '2' }, bc: '3', n_one: '4', n_other: '5', nx: '6' }, z: '7' };
-    expect(pickLocalePart(messages, 'first', ['a.b', 'a.n'])).toEqual({ a: { b: { c: '1', d: '2' }, n_one: '4', n_other: '5' } });
+    expect(pickLocalePart(messages, 'first', ['a.b', 'a.n'])).toEqual({
+      a: { b: { c: '1', d: '2' }, n_one: '4', n_other: '5' },
+    });
     expect(pickLocalePart(messages, 'rest', ['a.b', 'a.n'])).toEqual({ a: { bc: '3', nx: '6' }, z: '7' });
   });
 
@@ -54,13 +60,17 @@ describe('splitting a locale file in two parts', () => {
     const tree = fc.letrec<{ node: Messages }>((tie) => ({
       node: fc.dictionary(name, fc.oneof({ depthSize: 'small' }, fc.string(), tie('node')), { minKeys: 1, maxKeys: 4 }),
     })).node;
-    const paths = fc.array(fc.array(name, { minLength: 1, maxLength: 3 }).map((p) => p.join('.')), { maxLength: 5 });
+    const paths = fc.array(
+      fc.array(name, { minLength: 1, maxLength: 3 }).map((p) => p.join('.')),
+      { maxLength: 5 },
+    );
     fc.assert(fc.property(tree, paths, (messages, keys) => expectSplit(messages, keys)));
   });
 
   it('the build plugin serves each part of a locale as a module', async () => {
     const plugin = localeChunks();
-    const call = <T>(hook: unknown, ...args: unknown[]) => (hook as (this: unknown, ...a: unknown[]) => T).call({ addWatchFile: () => {} }, ...args);
+    const call = <T>(hook: unknown, ...args: unknown[]) =>
+      (hook as (this: unknown, ...a: unknown[]) => T).call({ addWatchFile: () => {} }, ...args);
     const id = call<string>(plugin.resolveId, 'virtual:casefront-locale/es/first');
     expect(typeof id).toBe('string');
     const loaded = call<{ code: string }>(plugin.load, id);
@@ -79,9 +89,18 @@ describe('the first part holds what the first screen asks for', () => {
   const english = leafKeys(RESOURCES.en);
 
   it('the key scanner reads literal keys, keys kept as data and template heads, and reports keys it cannot read', () => {
-    const sample = parseSource('sample.tsx', "const a = t('app.x.y'); const b = t(`app.models.${m}`); const c = { label: 'errors.z' }; t(key); t(`${ns}.k`); t(ok ? 'app.p' : 'app.q');");
+    const sample = parseSource(
+      'sample.tsx',
+      "const a = t('app.x.y'); const b = t(`app.models.${m}`); const c = { label: 'errors.z' }; t(key); t(`${ns}.k`); t(ok ? 'app.p' : 'app.q');",
+    );
     const found = translationKeys(sample);
-    expect(found.uses.map((u) => `${u.kind} ${u.key}`)).toEqual(['key app.x.y', 'prefix app.models.', 'key errors.z', 'key app.p', 'key app.q']);
+    expect(found.uses.map((u) => `${u.kind} ${u.key}`)).toEqual([
+      'key app.x.y',
+      'prefix app.models.',
+      'key errors.z',
+      'key app.p',
+      'key app.q',
+    ]);
     expect(found.unreadable.map((u) => u.split(': ')[1])).toEqual(['t(key)', 't(`${ns}.k`)']);
   });
 
@@ -89,7 +108,12 @@ describe('the first part holds what the first screen asks for', () => {
     expect(modules).toContain('src/app/depth/Screen.tsx');
     expect(modules).toContain('src/app/shell/Header.tsx');
     expect(modules).toContain('src/i18n/useT.ts');
-    for (const lazy of ['src/app/cycle/Screen.tsx', 'src/app/settings/Screen.tsx', 'src/app/log/save/SaveForm.tsx', 'src/app/cycle/chart.ts']) {
+    for (const lazy of [
+      'src/app/cycle/Screen.tsx',
+      'src/app/settings/Screen.tsx',
+      'src/app/log/save/SaveForm.tsx',
+      'src/app/cycle/chart.ts',
+    ]) {
       expect(modules).not.toContain(lazy);
     }
     expect(uses.length).toBeGreaterThan(80);
@@ -99,16 +123,23 @@ describe('the first part holds what the first screen asks for', () => {
     expect(scanned.flatMap((s) => s.unreadable)).toEqual([]);
   });
 
-  it.each(LANGUAGES)('%s: every key (and every key a template can build) asked for there is in the first part', (lng) => {
-    const first = new Set(leafKeys(pickLocalePart(RESOURCES[lng] as Messages, 'first')));
-    const problems = uses.flatMap((use) => {
-      const messages = messagesOf(use, english);
-      if (messages.length === 0) return [`${use.where}: ${use.key} names no message`];
-      const missing = messages.filter((m) => !first.has(m));
-      return missing.length > 0 ? [`${use.where}: ${use.key} → not in the first part: ${missing.slice(0, 3).join(', ')}${missing.length > 3 ? ', …' : ''}`] : [];
-    });
-    expect(problems).toEqual([]);
-  });
+  it.each(LANGUAGES)(
+    '%s: every key (and every key a template can build) asked for there is in the first part',
+    (lng) => {
+      const first = new Set(leafKeys(pickLocalePart(RESOURCES[lng] as Messages, 'first')));
+      const problems = uses.flatMap((use) => {
+        const messages = messagesOf(use, english);
+        if (messages.length === 0) return [`${use.where}: ${use.key} names no message`];
+        const missing = messages.filter((m) => !first.has(m));
+        return missing.length > 0
+          ? [
+              `${use.where}: ${use.key} → not in the first part: ${missing.slice(0, 3).join(', ')}${missing.length > 3 ? ', …' : ''}`,
+            ]
+          : [];
+      });
+      expect(problems).toEqual([]);
+    },
+  );
 
   it('every entry of FIRST_SCREEN_KEYS names messages that code asks for (the first part stays small)', () => {
     const asked = new Set(uses.flatMap((use) => messagesOf(use, english)));
@@ -122,7 +153,9 @@ describe('the first part holds what the first screen asks for', () => {
   it.each(LANGUAGES)('%s: a first-part message nests no message of the rest ($t)', (lng) => {
     const first = pickLocalePart(RESOURCES[lng] as Messages, 'first');
     const firstKeys = new Set(leafKeys(first));
-    const nested = entries(first).flatMap(([key, text]) => [...String(text).matchAll(/\$t\(([\w.]+)/gu)].map((m) => [key, m[1]!] as const));
+    const nested = entries(first).flatMap(([key, text]) =>
+      [...String(text).matchAll(/\$t\(([\w.]+)/gu)].map((m) => [key, m[1]!] as const),
+    );
     expect(nested.filter(([, target]) => !firstKeys.has(target))).toEqual([]);
   });
 });

@@ -15,7 +15,12 @@ function leafKeys(node: unknown, prefix = ''): string[] {
 }
 
 function lookup(tree: unknown, key: string): unknown {
-  return key.split('.').reduce<unknown>((node, part) => (typeof node === 'object' && node !== null ? (node as Record<string, unknown>)[part] : undefined), tree);
+  return key
+    .split('.')
+    .reduce<unknown>(
+      (node, part) => (typeof node === 'object' && node !== null ? (node as Record<string, unknown>)[part] : undefined),
+      tree,
+    );
 }
 
 const english = new Set(leafKeys(RESOURCES.en));
@@ -23,21 +28,31 @@ const english = new Set(leafKeys(RESOURCES.en));
 describe('locales', () => {
   it.each(LANGUAGES.filter((l) => l !== 'en'))('%s has exactly the keys of en', (lng) => {
     const keys = new Set(leafKeys(RESOURCES[lng]));
-    expect([...english].filter((k) => !keys.has(k)), 'missing').toEqual([]);
-    expect([...keys].filter((k) => !english.has(k)), 'extra').toEqual([]);
+    expect(
+      [...english].filter((k) => !keys.has(k)),
+      'missing',
+    ).toEqual([]);
+    expect(
+      [...keys].filter((k) => !english.has(k)),
+      'extra',
+    ).toEqual([]);
   });
 
   it.each(LANGUAGES)('%s has a non-empty message for every physics error and warning code', (lng) => {
-    const missing = [...ERROR_CODES.map((c) => `errors.${c}`), ...WARNING_CODES.map((c) => `warnings.${c}`)].filter((key) => {
-      const message = lookup(RESOURCES[lng], key);
-      return typeof message !== 'string' || message.trim() === '';
-    });
+    const missing = [...ERROR_CODES.map((c) => `errors.${c}`), ...WARNING_CODES.map((c) => `warnings.${c}`)].filter(
+      (key) => {
+        const message = lookup(RESOURCES[lng], key);
+        return typeof message !== 'string' || message.trim() === '';
+      },
+    );
     expect(missing).toEqual([]);
   });
 
   it.each(LANGUAGES)('%s uses the same {{placeholders}} as en in every message', (lng) => {
     const placeholders = (text: unknown) => [...String(text).matchAll(/{{\s*(\w+)/g)].map((m) => m[1]).sort();
-    const differing = [...english].filter((key) => placeholders(lookup(RESOURCES.en, key)).join() !== placeholders(lookup(RESOURCES[lng], key)).join());
+    const differing = [...english].filter(
+      (key) => placeholders(lookup(RESOURCES.en, key)).join() !== placeholders(lookup(RESOURCES[lng], key)).join(),
+    );
     expect(differing).toEqual([]);
   });
 
@@ -70,15 +85,48 @@ describe('locales', () => {
       ['app.pwa.status.', ['preparing', 'ready', 'offline']],
       ['app.convert.quantities.', ['temperature', 'length', 'time', 'diffusivity', 'hardness']],
       ['app.cycle.shapes.', ['semi-infinite', 'plate', 'bar']],
-      ['app.convert.unitNames.', ['C', 'F', 'K', 'R', 'mm', 'um', 'in', 'thou', 'm', 'h', 'min', 's', 'm2_s', 'cm2_s', 'mm2_h', 'in2_h', 'HRC', 'HV']],
+      [
+        'app.convert.unitNames.',
+        [
+          'C',
+          'F',
+          'K',
+          'R',
+          'mm',
+          'um',
+          'in',
+          'thou',
+          'm',
+          'h',
+          'min',
+          's',
+          'm2_s',
+          'cm2_s',
+          'mm2_h',
+          'in2_h',
+          'HRC',
+          'HV',
+        ],
+      ],
     ];
-    const missing = templates.flatMap(([prefix, values]) => values.map((v) => prefix + v)).filter((key) => !english.has(key));
+    const missing = templates
+      .flatMap(([prefix, values]) => values.map((v) => prefix + v))
+      .filter((key) => !english.has(key));
     expect(missing).toEqual([]);
     // A unit-aware warning takes exactly the placeholders of the physics message it replaces.
-    const placeholders = (key: string) => [...String(lookup(RESOURCES.en, key)).matchAll(/{{\s*(\w+)/g)].map((m) => m[1]).sort().join();
-    const mismatched = Object.keys(UNIT_WARNINGS).filter((code) => placeholders(`app.unitWarnings.${code}`) !== placeholders(`warnings.${code}`));
+    const placeholders = (key: string) =>
+      [...String(lookup(RESOURCES.en, key)).matchAll(/{{\s*(\w+)/g)]
+        .map((m) => m[1])
+        .sort()
+        .join();
+    const mismatched = Object.keys(UNIT_WARNINGS).filter(
+      (code) => placeholders(`app.unitWarnings.${code}`) !== placeholders(`warnings.${code}`),
+    );
     expect(mismatched).toEqual([]);
-    const notes = ['atmosphere', 'purge', 'quench', 'estimates'].flatMap((n) => [`app.safety.notes.${n}.title`, `app.safety.notes.${n}.text`]);
+    const notes = ['atmosphere', 'purge', 'quench', 'estimates'].flatMap((n) => [
+      `app.safety.notes.${n}.title`,
+      `app.safety.notes.${n}.text`,
+    ]);
     expect(notes.filter((key) => !english.has(key))).toEqual([]);
   });
 });

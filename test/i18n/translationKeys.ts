@@ -17,13 +17,15 @@ export interface KeyUse {
 }
 
 const isTCall = (node: ts.CallExpression) =>
-  (ts.isIdentifier(node.expression) && node.expression.text === 't') || (ts.isPropertyAccessExpression(node.expression) && node.expression.name.text === 't');
+  (ts.isIdentifier(node.expression) && node.expression.text === 't') ||
+  (ts.isPropertyAccessExpression(node.expression) && node.expression.name.text === 't');
 
 /** Keys and key prefixes in one source, and the `t()` calls whose key is not readable. */
 export function translationKeys(source: ts.SourceFile): { uses: KeyUse[]; unreadable: string[] } {
   const uses: KeyUse[] = [];
   const unreadable: string[] = [];
-  const where = (node: ts.Node) => `${source.fileName}:${source.getLineAndCharacterOfPosition(node.getStart()).line + 1}`;
+  const where = (node: ts.Node) =>
+    `${source.fileName}:${source.getLineAndCharacterOfPosition(node.getStart()).line + 1}`;
   /** Whether `node` (a t() argument) is a key we can read, possibly one of two branches. */
   const readable = (node: ts.Expression): boolean => {
     if (ts.isParenthesizedExpression(node)) return readable(node.expression);
@@ -32,8 +34,10 @@ export function translationKeys(source: ts.SourceFile): { uses: KeyUse[]; unread
     return ts.isTemplateExpression(node) && KEY.test(node.head.text);
   };
   const visit = (node: ts.Node) => {
-    if (ts.isStringLiteralLike(node) && KEY.test(node.text)) uses.push({ key: node.text, kind: 'key', where: where(node) });
-    else if (ts.isTemplateExpression(node) && KEY.test(node.head.text)) uses.push({ key: node.head.text, kind: 'prefix', where: where(node) });
+    if (ts.isStringLiteralLike(node) && KEY.test(node.text))
+      uses.push({ key: node.text, kind: 'key', where: where(node) });
+    else if (ts.isTemplateExpression(node) && KEY.test(node.head.text))
+      uses.push({ key: node.head.text, kind: 'prefix', where: where(node) });
     if (ts.isCallExpression(node) && isTCall(node)) {
       const first = node.arguments[0];
       if (!first || !readable(first)) unreadable.push(`${where(node)}: ${node.getText(source).slice(0, 80)}`);
@@ -55,5 +59,10 @@ const PLURAL_SUFFIX = /^_(?:zero|one|two|few|many|other)$/u;
 /** The messages a use can show: the key itself, its plural forms, or its subtree; for a prefix, every key starting with it. */
 export function messagesOf(use: Pick<KeyUse, 'key' | 'kind'>, leaves: readonly string[]): string[] {
   if (use.kind === 'prefix') return leaves.filter((leaf) => leaf.startsWith(use.key));
-  return leaves.filter((leaf) => leaf === use.key || leaf.startsWith(`${use.key}.`) || (leaf.startsWith(`${use.key}_`) && PLURAL_SUFFIX.test(leaf.slice(use.key.length))));
+  return leaves.filter(
+    (leaf) =>
+      leaf === use.key ||
+      leaf.startsWith(`${use.key}.`) ||
+      (leaf.startsWith(`${use.key}_`) && PLURAL_SUFFIX.test(leaf.slice(use.key.length))),
+  );
 }

@@ -18,13 +18,28 @@ describe('JSON backup: export, wipe, import', () => {
     const file = unwrap(await exportBackup(store, '0.1.0', END));
     expect(file.jobCount).toBe(121);
     const data = JSON.parse(file.text);
-    expect(data).toMatchObject({ format: 'casefront-job-log', version: 2, exportedAt: END.toISOString(), appVersion: '0.1.0' });
+    expect(data).toMatchObject({
+      format: 'casefront-job-log',
+      version: 2,
+      exportedAt: END.toISOString(),
+      appVersion: '0.1.0',
+    });
     unwrap(await store.clear());
     expect(unwrap(await store.count())).toBe(0);
-    expect(unwrap(await importBackup(store, file.text))).toEqual({ added: 121, updated: 0, unchanged: 0, skippedOlder: 0 });
+    expect(unwrap(await importBackup(store, file.text))).toEqual({
+      added: 121,
+      updated: 0,
+      unchanged: 0,
+      skippedOlder: 0,
+    });
     expect(await snapshot(store)).toEqual(before);
     // Importing the same file again changes nothing.
-    expect(unwrap(await importBackup(store, file.text))).toEqual({ added: 0, updated: 0, unchanged: 121, skippedOlder: 0 });
+    expect(unwrap(await importBackup(store, file.text))).toEqual({
+      added: 0,
+      updated: 0,
+      unchanged: 121,
+      skippedOlder: 0,
+    });
     expect(await snapshot(store)).toEqual(before);
     store.close();
   });
@@ -52,7 +67,12 @@ describe('import merge: same id, newest updatedAt wins', () => {
     expect(unwrap(await store.get(c!.id))).toEqual(c);
     expect(unwrap(await store.get(fresh.id))).toEqual(fresh);
     // Equal time but different content is not newer: the local copy stays.
-    expect(unwrap(await importBackup(store, backupToJson(createBackup([sameTimeC], 'x'))))).toEqual({ added: 0, updated: 0, unchanged: 0, skippedOlder: 1 });
+    expect(unwrap(await importBackup(store, backupToJson(createBackup([sameTimeC], 'x'))))).toEqual({
+      added: 0,
+      updated: 0,
+      unchanged: 0,
+      skippedOlder: 1,
+    });
     expect(unwrap(await store.get(c!.id))).toEqual(c);
     store.close();
   });
@@ -61,7 +81,12 @@ describe('import merge: same id, newest updatedAt wins', () => {
     const store = await freshStore();
     const [a] = demoJobs({ count: 1, end: END, seed: 8 });
     const later = { ...a!, status: 'rejected' as const, updatedAt: '2099-01-01T00:00:00.000Z' };
-    expect(unwrap(await importBackup(store, backupToJson(createBackup([later, a!], 'x'))))).toEqual({ added: 1, updated: 0, unchanged: 0, skippedOlder: 0 });
+    expect(unwrap(await importBackup(store, backupToJson(createBackup([later, a!], 'x'))))).toEqual({
+      added: 1,
+      updated: 0,
+      unchanged: 0,
+      skippedOlder: 0,
+    });
     expect(unwrap(await store.get(a!.id)).status).toBe('rejected');
     store.close();
   });
@@ -72,14 +97,59 @@ describe('invalid imports leave the log unchanged and say what is wrong', () => 
   const cases: [string, () => string, string, string?][] = [
     ['not JSON', () => '{"format": "casefront-job-log", ', 'import.notJson'],
     ['a CSV file', () => 'id,created_at\n1,2', 'import.notJson'],
-    ['another program\'s JSON', () => JSON.stringify({ rows: [] }), 'import.wrongFormat'],
+    ["another program's JSON", () => JSON.stringify({ rows: [] }), 'import.wrongFormat'],
     ['an array', () => '[]', 'import.wrongFormat'],
     ['a newer version', () => JSON.stringify({ ...valid(), version: 3 }), 'import.unsupportedVersion'],
-    ['one bad initials among good records', () => { const b = valid(); (b.jobs[2] as Record<string, unknown>).operator = 'ABCDE'; return JSON.stringify(b); }, 'import.invalid', 'jobs[2].operator'],
-    ['a status spelled the old way', () => { const b = valid(); (b.jobs[1] as Record<string, unknown>).status = 'in-furnace'; return JSON.stringify(b); }, 'import.invalid', 'jobs[1].status'],
-    ['a missing field', () => { const b = valid(); delete (b.jobs[0] as Record<string, unknown>).furnace; return JSON.stringify(b); }, 'import.invalid', 'jobs[0].furnace'],
-    ['an unknown field', () => { const b = valid(); (b.jobs[0] as Record<string, unknown>).html = '<b>x</b>'; return JSON.stringify(b); }, 'import.invalid', 'jobs[0].html'],
-    ['a text where a depth belongs', () => { const b = valid(); (b.jobs[0]!.prediction as Record<string, unknown>).effectiveCaseDepthMm = '0.8'; return JSON.stringify(b); }, 'import.invalid', 'jobs[0].prediction.effectiveCaseDepthMm'],
+    [
+      'one bad initials among good records',
+      () => {
+        const b = valid();
+        (b.jobs[2] as Record<string, unknown>).operator = 'ABCDE';
+        return JSON.stringify(b);
+      },
+      'import.invalid',
+      'jobs[2].operator',
+    ],
+    [
+      'a status spelled the old way',
+      () => {
+        const b = valid();
+        (b.jobs[1] as Record<string, unknown>).status = 'in-furnace';
+        return JSON.stringify(b);
+      },
+      'import.invalid',
+      'jobs[1].status',
+    ],
+    [
+      'a missing field',
+      () => {
+        const b = valid();
+        delete (b.jobs[0] as Record<string, unknown>).furnace;
+        return JSON.stringify(b);
+      },
+      'import.invalid',
+      'jobs[0].furnace',
+    ],
+    [
+      'an unknown field',
+      () => {
+        const b = valid();
+        (b.jobs[0] as Record<string, unknown>).html = '<b>x</b>';
+        return JSON.stringify(b);
+      },
+      'import.invalid',
+      'jobs[0].html',
+    ],
+    [
+      'a text where a depth belongs',
+      () => {
+        const b = valid();
+        (b.jobs[0]!.prediction as Record<string, unknown>).effectiveCaseDepthMm = '0.8';
+        return JSON.stringify(b);
+      },
+      'import.invalid',
+      'jobs[0].prediction.effectiveCaseDepthMm',
+    ],
     ['jobs not a list', () => JSON.stringify({ ...valid(), jobs: {} }), 'import.invalid', 'jobs'],
   ];
 
@@ -101,7 +171,11 @@ describe('invalid imports leave the log unchanged and say what is wrong', () => 
     const store = await freshStore();
     const text = JSON.stringify(valid()).replace('"notes":', '"__proto__":{"polluted":true},"notes":');
     const result = await importBackup(store, text);
-    expect(result.ok ? null : result.error.issues?.[0]).toEqual({ path: 'jobs[0].__proto__', problem: 'unknownField', params: { expected: 'never' } });
+    expect(result.ok ? null : result.error.issues?.[0]).toEqual({
+      path: 'jobs[0].__proto__',
+      problem: 'unknownField',
+      params: { expected: 'never' },
+    });
     expect(({} as Record<string, unknown>).polluted).toBeUndefined();
     expect(unwrap(await store.count())).toBe(0);
     store.close();

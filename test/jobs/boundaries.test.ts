@@ -11,7 +11,10 @@ import { sourceFiles } from '../sourceFiles';
 const root = join(__dirname, '..', '..');
 const jobsDir = join(root, 'src', 'jobs');
 
-const sources = sourceFiles(jobsDir, /\.ts$/u).map((path) => ({ path: relative(root, path), text: readFileSync(path, 'utf8') }));
+const sources = sourceFiles(jobsDir, /\.ts$/u).map((path) => ({
+  path: relative(root, path),
+  text: readFileSync(path, 'utf8'),
+}));
 
 const offenders = (pattern: RegExp) => sources.filter((s) => pattern.test(s.text)).map((s) => s.path);
 
@@ -20,10 +23,16 @@ describe('job log boundaries (source checks)', () => {
     expect(sources.length).toBeGreaterThan(10);
   });
   it('builds no HTML and evaluates no text', () => {
-    expect(offenders(/innerHTML|outerHTML|insertAdjacentHTML|document\.write|\beval\s*\(|new Function\s*\(|DOMParser|createContextualFragment/u)).toEqual([]);
+    expect(
+      offenders(
+        /innerHTML|outerHTML|insertAdjacentHTML|document\.write|\beval\s*\(|new Function\s*\(|DOMParser|createContextualFragment/u,
+      ),
+    ).toEqual([]);
   });
   it('sends nothing off the device', () => {
-    expect(offenders(/\bfetch\s*\(|XMLHttpRequest|WebSocket|EventSource|sendBeacon|RTCPeerConnection|navigator\.share/u)).toEqual([]);
+    expect(
+      offenders(/\bfetch\s*\(|XMLHttpRequest|WebSocket|EventSource|sendBeacon|RTCPeerConnection|navigator\.share/u),
+    ).toEqual([]);
   });
   it('imports physics, never the app, pwa or UI libraries', () => {
     expect(offenders(/from ['"][./]*app\/|from ['"][./]*pwa\/|from ['"]preact/u)).toEqual([]);

@@ -22,7 +22,12 @@ const recipeOf = (file: string) => JSON.parse(readFileSync(`public/examples/${fi
 
 let serial = 0;
 /** A stored job (ids and times made up in order, so newer jobs come later). */
-function job(furnace: string, inputs: JobInputs, predictionExtra: Partial<Job['prediction']>, labEcdMm: number | undefined): Job {
+function job(
+  furnace: string,
+  inputs: JobInputs,
+  predictionExtra: Partial<Job['prediction']>,
+  labEcdMm: number | undefined,
+): Job {
   const n = serial++;
   const draft = pinionDraft({ furnace, inputs });
   return {
@@ -39,7 +44,15 @@ function job(furnace: string, inputs: JobInputs, predictionExtra: Partial<Job['p
 }
 
 const depthInputs = (temperatureC: number, timeH: number, extra: Partial<JobInputs> = {}): JobInputs =>
-  ({ kind: 'depth', temperatureC, timeH, carbonPotentialPct: 0.9, coreCarbonPct: 0.2, composition: SAE_8620, ...extra }) as JobInputs;
+  ({
+    kind: 'depth',
+    temperatureC,
+    timeH,
+    carbonPotentialPct: 0.9,
+    coreCarbonPct: 0.2,
+    composition: SAE_8620,
+    ...extra,
+  }) as JobInputs;
 
 /** The ECD the engine gives for a depth request with D × k. */
 function closedFormEcd(inputs: JobInputs, k: number, model?: DiffusivityModelId): number {
@@ -50,11 +63,19 @@ function closedFormEcd(inputs: JobInputs, k: number, model?: DiffusivityModelId)
 }
 
 function cycleEcd(recipe: Recipe, k: number): number {
-  return runCycle(recipe, 1, { diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS.agren.diffusivity, k) }).effectiveCaseDepthMm;
+  return runCycle(recipe, 1, { diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS.agren.diffusivity, k) })
+    .effectiveCaseDepthMm;
 }
 
 /** Depth jobs at 900–950 °C for 3–10 h on `furnace`, lab = engine with D × kTrue, times (1 + relative scatter). */
-function depthLog(furnace: string, kTrue: number, count: number, scatter: number, seed: number, model?: DiffusivityModelId): Job[] {
+function depthLog(
+  furnace: string,
+  kTrue: number,
+  count: number,
+  scatter: number,
+  seed: number,
+  model?: DiffusivityModelId,
+): Job[] {
   const u = mulberry32(seed);
   const z = normal(u);
   return Array.from({ length: count }, () => {
@@ -69,7 +90,12 @@ describe('calibration samples from the log', () => {
     const noLab = job('F1', depthInputs(925, 6), {}, undefined);
     const other = depthLog('F2', 1, 2, 0, 2);
     const noInputs = { ...job('F1', depthInputs(925, 6), {}, 0.9), inputs: undefined } as Job;
-    const timeWithoutAnswer = job('F1', { kind: 'time', temperatureC: 925, targetDepthMm: 0.9, carbonPotentialPct: 0.9, coreCarbonPct: 0.2 }, { timeH: undefined }, 0.9);
+    const timeWithoutAnswer = job(
+      'F1',
+      { kind: 'time', temperatureC: 925, targetDepthMm: 0.9, carbonPotentialPct: 0.9, coreCarbonPct: 0.2 },
+      { timeH: undefined },
+      0.9,
+    );
     const set = calibrationSamples([...f1, noLab, ...other, noInputs, timeWithoutAnswer], 'F1');
     expect(set.samples.map((s) => s.id)).toEqual(f1.map((j) => j.id).reverse());
     expect(set.skipped).toEqual([
@@ -80,11 +106,29 @@ describe('calibration samples from the log', () => {
   });
 
   it('a time request is re-run at the time it answered, a temperature request at its temperature', () => {
-    const request = { temperatureC: 930, targetDepthMm: 1.1, carbonPotentialPct: 0.9, coreCarbonPct: 0.2, composition: SAE_8620 };
+    const request = {
+      temperatureC: 930,
+      targetDepthMm: 1.1,
+      carbonPotentialPct: 0.9,
+      coreCarbonPct: 0.2,
+      composition: SAE_8620,
+    };
     const solved = timeForCaseDepth(request);
     if (!solved.ok) throw new Error(solved.error.code);
     const timeJob = job('F1', { kind: 'time', ...request }, { timeH: solved.value.timeH }, 1.1);
-    const tempJob = job('F1', { kind: 'temperature', timeH: solved.value.timeH, targetDepthMm: 1.1, carbonPotentialPct: 0.9, coreCarbonPct: 0.2, composition: SAE_8620 }, { temperatureC: 930 }, 1.1);
+    const tempJob = job(
+      'F1',
+      {
+        kind: 'temperature',
+        timeH: solved.value.timeH,
+        targetDepthMm: 1.1,
+        carbonPotentialPct: 0.9,
+        coreCarbonPct: 0.2,
+        composition: SAE_8620,
+      },
+      { temperatureC: 930 },
+      1.1,
+    );
     const [a, b] = calibrationSamples([timeJob, tempJob], 'F1').samples;
     // With k = 1 both re-runs land on the depth the time was solved for.
     expect(a!.predictEcdMm(1)).toBeCloseTo(1.1, 9);
@@ -110,12 +154,20 @@ describe('fitting a furnace', () => {
   });
 
   it('recovers k = 0.87 exactly from cycle jobs (the demo recipes) re-run by the simulator', () => {
-    const recipes = [recipeOf('pinion-kr2231-cycle.json'), recipeOf('shaft-kr4410-cycle.json'), recipeOf('pin-kr0907-cycle.json')];
+    const recipes = [
+      recipeOf('pinion-kr2231-cycle.json'),
+      recipeOf('shaft-kr4410-cycle.json'),
+      recipeOf('pin-kr0907-cycle.json'),
+    ];
     const jobs = recipes.map((recipe) => job('F2', { kind: 'cycle', recipe }, {}, cycleEcd(recipe, 0.87)));
     const { fit } = calibrateFurnace(jobs, 'F2');
     if (!fit.ok) throw new Error(fit.error.code);
     expect(fit.value.factor).toBeCloseTo(0.87, 6);
-    expect(fit.value.residuals.map((r) => Math.abs(r.residualMm))).toEqual([expect.any(Number), expect.any(Number), expect.any(Number)]);
+    expect(fit.value.residuals.map((r) => Math.abs(r.residualMm))).toEqual([
+      expect.any(Number),
+      expect.any(Number),
+      expect.any(Number),
+    ]);
     expect(Math.max(...fit.value.residuals.map((r) => Math.abs(r.residualMm)))).toBeLessThan(1e-6);
   });
 
@@ -123,7 +175,9 @@ describe('fitting a furnace', () => {
     const recipes = [recipeOf('pinion-kr2231-cycle.json'), recipeOf('shaft-kr4410-cycle.json')];
     const u = mulberry32(5);
     const z = normal(u);
-    const cycles = recipes.map((recipe) => job('F3', { kind: 'cycle', recipe }, {}, cycleEcd(recipe, 1.12) * (1 + 0.04 * z())));
+    const cycles = recipes.map((recipe) =>
+      job('F3', { kind: 'cycle', recipe }, {}, cycleEcd(recipe, 1.12) * (1 + 0.04 * z())),
+    );
     const jobs = [...depthLog('F3', 1.12, 12, 0.04, 23), ...cycles];
     const { fit } = calibrateFurnace(jobs, 'F3');
     if (!fit.ok) throw new Error(fit.error.code);
@@ -135,7 +189,10 @@ describe('fitting a furnace', () => {
   });
 
   it('fits relative to the model asked for: a log made with Tibbetts and k = 0.9 gives 0.9 only when re-run with Tibbetts', () => {
-    const jobs = depthLog('F1', 1, 5, 0, 3).map((j) => ({ ...j, lab: { ecdMm: closedFormEcd(j.inputs!, 0.9, 'tibbetts') } }));
+    const jobs = depthLog('F1', 1, 5, 0, 3).map((j) => ({
+      ...j,
+      lab: { ecdMm: closedFormEcd(j.inputs!, 0.9, 'tibbetts') },
+    }));
     const tibbetts = calibrateFurnace(jobs, 'F1', { model: 'tibbetts' }).fit;
     const agren = calibrateFurnace(jobs, 'F1', { model: 'agren' }).fit;
     if (!tibbetts.ok || !agren.ok) throw new Error('fit failed');

@@ -49,7 +49,9 @@ describe('two tabs saving at the same time', () => {
 
   it('an import in one tab while the other adds: the import and every add are kept', async () => {
     const [tab1, tab2] = await twoTabs();
-    const file = backupToJson(createBackup(demoJobs({ count: 300, end: new Date('2025-06-30T12:00:00Z'), seed: 2 }), 'x'));
+    const file = backupToJson(
+      createBackup(demoJobs({ count: 300, end: new Date('2025-06-30T12:00:00Z'), seed: 2 }), 'x'),
+    );
     const [report, ...adds] = await Promise.all([
       importBackup(tab1, file),
       ...Array.from({ length: 30 }, (_, i) => tab2.add(pinionDraft({ workOrder: `LIVE-${i}` }))),

@@ -10,12 +10,18 @@ const base = demoJobs({ count: 1, end: new Date('2025-05-01T12:00:00Z'), seed: 5
 const parse = (text: string) => Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true });
 
 describe('CSV formula-injection guard (text cells only)', () => {
-  it.each(['=1+2', '+SUM(A1)', '-2+3', '@cmd', '\tTAB', '\rCR', "=HYPERLINK(\"http://x\")"])('prefixes %j with a single quote', (text) => {
-    expect(guardText(text)).toBe(`'${text}`);
-  });
-  it.each(['KR-2231', 'WO-024117', 'plain note', '', "'already quoted", ' =space first'])('leaves %j as it is', (text) => {
-    expect(guardText(text)).toBe(text);
-  });
+  it.each(['=1+2', '+SUM(A1)', '-2+3', '@cmd', '\tTAB', '\rCR', '=HYPERLINK("http://x")'])(
+    'prefixes %j with a single quote',
+    (text) => {
+      expect(guardText(text)).toBe(`'${text}`);
+    },
+  );
+  it.each(['KR-2231', 'WO-024117', 'plain note', '', "'already quoted", ' =space first'])(
+    'leaves %j as it is',
+    (text) => {
+      expect(guardText(text)).toBe(text);
+    },
+  );
 
   it('guards text fields in a row but writes numbers unguarded, negatives included', () => {
     const job: Job = {
@@ -43,7 +49,14 @@ describe('CSV export', () => {
     const jobs = demoJobs({ count: 25, end: new Date('2025-05-01T12:00:00Z'), seed: 9 });
     const text = await jobsToCsv(jobs);
     expect(text.startsWith('\uFEFFid,created_at,updated_at,shift_date,shift,')).toBe(true);
-    for (const header of ['predicted_ecd_mm', 'measured_ecd_mm', 'temperature_c', 'time_h', 'core_carbon_pct', 'ecd_difference_pct']) {
+    for (const header of [
+      'predicted_ecd_mm',
+      'measured_ecd_mm',
+      'temperature_c',
+      'time_h',
+      'core_carbon_pct',
+      'ecd_difference_pct',
+    ]) {
       expect(CSV_COLUMNS.map((c) => c.header)).toContain(header);
     }
     const parsed = parse(text);
@@ -74,8 +87,12 @@ describe('CSV export', () => {
 
   it('exportCsv writes the whole store, oldest first', async () => {
     const store = await freshStore();
-    const first = unwrap(await store.add(pinionDraft({ workOrder: 'WO-1' }), { now: new Date('2025-03-05T07:00:00.000Z') }));
-    const second = unwrap(await store.add(pinionDraft({ workOrder: 'WO-2' }), { now: new Date('2025-03-05T08:00:00.000Z') }));
+    const first = unwrap(
+      await store.add(pinionDraft({ workOrder: 'WO-1' }), { now: new Date('2025-03-05T07:00:00.000Z') }),
+    );
+    const second = unwrap(
+      await store.add(pinionDraft({ workOrder: 'WO-2' }), { now: new Date('2025-03-05T08:00:00.000Z') }),
+    );
     const file = unwrap(await exportCsv(store));
     expect(file.jobCount).toBe(2);
     expect(file.skipped).toEqual([]);

@@ -29,7 +29,10 @@ describe('demo log (invented plant: furnaces F1–F3, parts KR-2231, KR-4410, KR
 
   it('predictions meet the drawing ranges (physics engine, time for the mid-range ECD)', () => {
     // Ranges from the scenario: KR-2231 0.75–1.00, KR-4410 1.2–1.5, KR-0907 0.25–0.40 mm.
-    const range = { 'KR-2231': [0.75, 1.0], 'KR-4410': [1.2, 1.5], 'KR-0907': [0.25, 0.4] } as Record<string, [number, number]>;
+    const range = { 'KR-2231': [0.75, 1.0], 'KR-4410': [1.2, 1.5], 'KR-0907': [0.25, 0.4] } as Record<
+      string,
+      [number, number]
+    >;
     for (const job of jobs) {
       const [min, max] = range[job.partNumber]!;
       expect(job.prediction!.effectiveCaseDepthMm).toBeGreaterThanOrEqual(min);

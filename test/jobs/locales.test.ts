@@ -29,7 +29,19 @@ describe('jobs section of the locales', () => {
     'jobs.exportSkipped',
     'jobs.corruptRecord',
   ];
-  const params = { count: 2, id: 'x', name: 'UnknownError', version: 3, supported: 2, path: 'jobs[0].notes', expected: '<=4000', added: 1, updated: 2, unchanged: 3, skippedOlder: 4 };
+  const params = {
+    count: 2,
+    id: 'x',
+    name: 'UnknownError',
+    version: 3,
+    supported: 2,
+    path: 'jobs[0].notes',
+    expected: '<=4000',
+    added: 1,
+    updated: 2,
+    unchanged: 3,
+    skippedOlder: 4,
+  };
 
   it.each(LANGUAGES)('every code, status, shift and notice has a full sentence in %s', (language) => {
     const i18n = createI18n(language);

@@ -21,7 +21,14 @@ const V1_FIXTURES: JobV1[] = [
     workOrder: 'WO-024101',
     part: 'KR-2231',
     grade: 'sae-8620',
-    request: { mode: 'depth', temperatureC: 925, timeH: 6.5, carbonPotentialPct: 0.9, coreCarbonPct: 0.2, composition: COMPOSITION_8620 },
+    request: {
+      mode: 'depth',
+      temperatureC: 925,
+      timeH: 6.5,
+      carbonPotentialPct: 0.9,
+      coreCarbonPct: 0.2,
+      composition: COMPOSITION_8620,
+    },
     predictedEcdMm: 0.88,
     predictedTotalCaseMm: 1.32,
     predictedSurfaceCarbonPct: 0.84,
@@ -41,7 +48,14 @@ const V1_FIXTURES: JobV1[] = [
     workOrder: '',
     part: 'KR-0907',
     grade: '16MnCr5 mill cert 4471',
-    request: { mode: 'time', temperatureC: 900, targetDepthMm: 0.32, surfaceCarbonPct: 0.8, coreCarbonPct: 0.16, model: 'tibbetts' },
+    request: {
+      mode: 'time',
+      temperatureC: 900,
+      targetDepthMm: 0.32,
+      surfaceCarbonPct: 0.8,
+      coreCarbonPct: 0.16,
+      model: 'tibbetts',
+    },
     predictedEcdMm: 0.32,
     predictedTotalCaseMm: 0.51,
     predictedSurfaceCarbonPct: 0.8,
@@ -154,7 +168,12 @@ describe('job log database: version 1 → 2', () => {
     const store = unwrap(await openJobStore({ name }));
     const byId = Object.fromEntries(unwrap(await store.readAll()).jobs.map((j) => [j.id, j]));
     expect(V1_FIXTURES.map((f) => byId[f.id]!.status)).toEqual(['inFurnace', 'onHold', 'done', 'rejected']);
-    expect(byId[V1_FIXTURES[0]!.id]!.steel).toEqual({ gradeId: 'sae-8620', gradeName: 'SAE 8620', coreCarbonPct: 0.2, composition: COMPOSITION_8620 });
+    expect(byId[V1_FIXTURES[0]!.id]!.steel).toEqual({
+      gradeId: 'sae-8620',
+      gradeName: 'SAE 8620',
+      coreCarbonPct: 0.2,
+      composition: COMPOSITION_8620,
+    });
     expect(byId[V1_FIXTURES[1]!.id]!.steel).toEqual({ gradeName: '16MnCr5 mill cert 4471', coreCarbonPct: 0.16 });
     expect(byId[V1_FIXTURES[2]!.id]!.steel).toEqual({ gradeId: '20mncr5', gradeName: '20MnCr5', coreCarbonPct: 0.2 });
     store.close();
@@ -166,7 +185,9 @@ describe('job log database: version 1 → 2', () => {
     const store = unwrap(await openJobStore({ name }));
     expect(unwrap(await store.list({ status: 'onHold' })).jobs.map((j) => j.id)).toEqual([V1_FIXTURES[1]!.id]);
     expect(unwrap(await store.list({ partNumber: 'KR-2231' })).jobs).toHaveLength(2);
-    expect(unwrap(await store.list({ furnace: 'F1', fromDate: '2025-01-21', toDate: '2025-01-31' })).jobs.map((j) => j.id)).toEqual([V1_FIXTURES[3]!.id]);
+    expect(
+      unwrap(await store.list({ furnace: 'F1', fromDate: '2025-01-21', toDate: '2025-01-31' })).jobs.map((j) => j.id),
+    ).toEqual([V1_FIXTURES[3]!.id]);
     store.close();
     const raw = await openDB(name);
     expect(raw.version).toBe(2);

@@ -73,7 +73,9 @@ describe('persistentStorageStatus', () => {
     };
     expect(await persistentStorageStatus({ persisted: async () => true, persist })).toBe('granted');
     expect(await persistentStorageStatus({ persisted: async () => false, persist })).toBe('denied');
-    expect(await persistentStorageStatus({ persisted: async () => Promise.reject(new Error('SecurityError')) })).toBe('denied');
+    expect(await persistentStorageStatus({ persisted: async () => Promise.reject(new Error('SecurityError')) })).toBe(
+      'denied',
+    );
     expect(await persistentStorageStatus(undefined)).toBe('unsupported');
     expect(asked).toBe(false);
   });

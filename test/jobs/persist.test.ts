@@ -13,7 +13,9 @@ describe('requestPersistentStorage', () => {
   });
   it('denied when the browser refuses or the call fails', async () => {
     expect(await requestPersistentStorage({ persisted: async () => false, persist: async () => false })).toBe('denied');
-    expect(await requestPersistentStorage({ persist: async () => Promise.reject(new Error('SecurityError')) })).toBe('denied');
+    expect(await requestPersistentStorage({ persist: async () => Promise.reject(new Error('SecurityError')) })).toBe(
+      'denied',
+    );
   });
   it('unsupported without the Storage API', async () => {
     expect(await requestPersistentStorage(undefined)).toBe('unsupported');

@@ -32,7 +32,10 @@ async function expectStoreEqualsModel(model: Model, real: Real): Promise<void> {
 }
 
 class Add implements fc.AsyncCommand<Model, Real> {
-  constructor(readonly draft: JobDraft, readonly minutes: number) {}
+  constructor(
+    readonly draft: JobDraft,
+    readonly minutes: number,
+  ) {}
   check = () => true;
   async run(model: Model, real: Real) {
     const now = tick(real, this.minutes);
@@ -50,7 +53,11 @@ class Add implements fc.AsyncCommand<Model, Real> {
 }
 
 class Edit implements fc.AsyncCommand<Model, Real> {
-  constructor(readonly pick: number, readonly changes: JobChanges, readonly minutes: number) {}
+  constructor(
+    readonly pick: number,
+    readonly changes: JobChanges,
+    readonly minutes: number,
+  ) {}
   check = (model: Readonly<Model>) => model.ids.length > 0;
   async run(model: Model, real: Real) {
     const id = model.ids[this.pick % model.ids.length]!;
@@ -82,7 +89,10 @@ class Delete implements fc.AsyncCommand<Model, Real> {
 
 /** Operations that must fail and change nothing: a missing id, or an invalid entry. */
 class Refused implements fc.AsyncCommand<Model, Real> {
-  constructor(readonly kind: 'editMissing' | 'deleteMissing' | 'badAdd' | 'badEdit', readonly pick: number) {}
+  constructor(
+    readonly kind: 'editMissing' | 'deleteMissing' | 'badAdd' | 'badEdit',
+    readonly pick: number,
+  ) {}
   check = (model: Readonly<Model>) => this.kind !== 'badEdit' || model.ids.length > 0;
   async run(model: Model, real: Real) {
     const missing = crypto.randomUUID();
@@ -125,7 +135,12 @@ const commands = fc.commands(
     fc.tuple(draft, minutes).map(([d, m]) => new Add(d, m)),
     fc.tuple(fc.nat(), changes, minutes).map(([p, c, m]) => new Edit(p, c, m)),
     fc.nat().map((p) => new Delete(p)),
-    fc.tuple(fc.constantFrom('editMissing', 'deleteMissing', 'badAdd', 'badEdit') as fc.Arbitrary<Refused['kind']>, fc.nat()).map(([k, p]) => new Refused(k, p)),
+    fc
+      .tuple(
+        fc.constantFrom('editMissing', 'deleteMissing', 'badAdd', 'badEdit') as fc.Arbitrary<Refused['kind']>,
+        fc.nat(),
+      )
+      .map(([k, p]) => new Refused(k, p)),
   ],
   { maxCommands: 40, size: 'max' },
 );

@@ -10,11 +10,17 @@ const local = (day: number, hh: number, mm = 0) => new Date(2025, 2, day, hh, mm
 
 async function seeded() {
   const store = await freshStore();
-  const add = async (now: Date, overrides: Parameters<typeof pinionDraft>[0]) => unwrap(await store.add(pinionDraft(overrides), { now }));
+  const add = async (now: Date, overrides: Parameters<typeof pinionDraft>[0]) =>
+    unwrap(await store.add(pinionDraft(overrides), { now }));
   const jobs = {
     nightF1: await add(local(5, 2), { furnace: 'F1', status: 'done', notes: 'Nitrógeno purge before load' }),
     morningF2: await add(local(5, 7), { furnace: 'F2', partNumber: 'KR-4410', status: 'inFurnace', operator: 'JR' }),
-    morningF1: await add(local(5, 9), { furnace: 'F1', status: 'onHold', workOrder: 'WO-024199', notes: 'Öl temperature high' }),
+    morningF1: await add(local(5, 9), {
+      furnace: 'F1',
+      status: 'onHold',
+      workOrder: 'WO-024199',
+      notes: 'Öl temperature high',
+    }),
     lateF3: await add(local(5, 22, 30), { furnace: 'F3', partNumber: 'KR-0907', status: 'planned' }),
     nextDay: await add(local(6, 10), { furnace: 'F1', status: 'planned', operator: 'AT' }),
   };
@@ -35,8 +41,12 @@ describe('job list filters', () => {
   it('filters by date range, shift, furnace, part and status, newest first', async () => {
     const { store, jobs } = await seeded();
     const ids = async (filter: JobFilter) => unwrap(await store.list(filter)).jobs.map((j) => j.id);
-    expect(await ids({})).toEqual([jobs.nextDay, jobs.lateF3, jobs.morningF1, jobs.morningF2, jobs.nightF1].map((j) => j.id));
-    expect(await ids({ fromDate: '2025-03-05', toDate: '2025-03-05' })).toEqual([jobs.lateF3, jobs.morningF1, jobs.morningF2].map((j) => j.id));
+    expect(await ids({})).toEqual(
+      [jobs.nextDay, jobs.lateF3, jobs.morningF1, jobs.morningF2, jobs.nightF1].map((j) => j.id),
+    );
+    expect(await ids({ fromDate: '2025-03-05', toDate: '2025-03-05' })).toEqual(
+      [jobs.lateF3, jobs.morningF1, jobs.morningF2].map((j) => j.id),
+    );
     expect(await ids({ fromDate: '2025-03-04', toDate: '2025-03-04' })).toEqual([jobs.nightF1.id]);
     expect(await ids({ shift: 'C' })).toEqual([jobs.lateF3.id, jobs.nightF1.id]);
     expect(await ids({ furnace: 'F1' })).toEqual([jobs.nextDay, jobs.morningF1, jobs.nightF1].map((j) => j.id));
@@ -65,7 +75,9 @@ describe('job list filters', () => {
     const store = await freshStore();
     const all = demoJobs({ count: 400, end: new Date('2025-06-30T12:00:00Z'), seed: 7 });
     unwrap(await store.putMany(all));
-    const date = fc.integer({ min: 0, max: 400 }).map((d) => new Date(Date.UTC(2024, 5, 1 + d)).toISOString().slice(0, 10));
+    const date = fc
+      .integer({ min: 0, max: 400 })
+      .map((d) => new Date(Date.UTC(2024, 5, 1 + d)).toISOString().slice(0, 10));
     const filters = fc.record(
       {
         fromDate: date,
@@ -80,7 +92,10 @@ describe('job list filters', () => {
     );
     await fc.assert(
       fc.asyncProperty(filters, async (filter) => {
-        const expected = all.filter((job) => matchesFilter(job, filter)).sort(compareNewestFirst).map((j) => j.id);
+        const expected = all
+          .filter((job) => matchesFilter(job, filter))
+          .sort(compareNewestFirst)
+          .map((j) => j.id);
         expect(unwrap(await store.list(filter)).jobs.map((j) => j.id)).toEqual(expected);
       }),
       { numRuns: 150 },
@@ -89,7 +104,9 @@ describe('job list filters', () => {
   });
 
   it('plans the furnace + dates filter on the compound index and a lone status on the status index', () => {
-    expect(planQuery({ furnace: 'F1', fromDate: '2025-03-01', toDate: '2025-03-31', status: 'done' })?.index).toBe('byFurnaceShiftDate');
+    expect(planQuery({ furnace: 'F1', fromDate: '2025-03-01', toDate: '2025-03-31', status: 'done' })?.index).toBe(
+      'byFurnaceShiftDate',
+    );
     expect(planQuery({ fromDate: '2025-03-01' })?.index).toBe('byShiftDate');
     expect(planQuery({ status: 'done' })?.index).toBe('byStatus');
     expect(planQuery({ status: ['done', 'rejected'] })).toBeUndefined();

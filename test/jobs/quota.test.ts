@@ -77,7 +77,9 @@ describe.each(FAULTS)('storage full (%s): nothing half-written', (fault) => {
   it('an import failing part-way: storage.full and the log unchanged', () =>
     expectUnchangedAfter(async (store, jobs) => {
       const newer = { ...jobs[1]!, status: 'done' as const, updatedAt: '2099-01-01T00:00:00.000Z' };
-      const file = backupToJson(createBackup([newer, newJob(jobs[1]!, 1), newJob(jobs[1]!, 2), newJob(jobs[1]!, 3)], 'test'));
+      const file = backupToJson(
+        createBackup([newer, newJob(jobs[1]!, 1), newJob(jobs[1]!, 2), newJob(jobs[1]!, 3)], 'test'),
+      );
       failNth('put', 3, fault);
       expect(await importBackup(store, file)).toEqual(FULL);
     }));
@@ -106,7 +108,10 @@ describe('after a full-disk failure', () => {
     vi.spyOn(IDBObjectStore.prototype, 'put').mockImplementation(() => {
       throw new DOMException('disk error', 'UnknownError');
     });
-    expect(await store.update(jobs[0]!.id, { notes: 'x' })).toEqual({ ok: false, error: { code: 'storage.failed', params: { name: 'UnknownError' } } });
+    expect(await store.update(jobs[0]!.id, { notes: 'x' })).toEqual({
+      ok: false,
+      error: { code: 'storage.failed', params: { name: 'UnknownError' } },
+    });
     store.close();
   });
 });

@@ -16,7 +16,13 @@ describe('job record schema (version 2)', () => {
 
   it('timestamps are UTC as toISOString writes them, and real moments', () => {
     expect(ok(TimestampSchema, '2025-03-05T02:00:00.000Z')).toBe(true);
-    for (const bad of ['2025-03-05T02:00:00Z', '2025-03-05T02:00:00.000+01:00', '2025-02-30T00:00:00.000Z', '2025-03-05', 'now']) {
+    for (const bad of [
+      '2025-03-05T02:00:00Z',
+      '2025-03-05T02:00:00.000+01:00',
+      '2025-02-30T00:00:00.000Z',
+      '2025-03-05',
+      'now',
+    ]) {
       expect(ok(TimestampSchema, bad), bad).toBe(false);
     }
   });
@@ -29,9 +35,22 @@ describe('job record schema (version 2)', () => {
     expect(ok(JobInputsSchema, { kind: 'depth', temperatureC: 925, targetDepthMm: 0.9, ...spec })).toBe(false);
     expect(ok(JobInputsSchema, { kind: 'guess', ...spec })).toBe(false);
     // Furnace calibration and temperature tolerance, in the physics layer's accepted ranges.
-    expect(ok(JobInputsSchema, { kind: 'depth', temperatureC: 925, timeH: 6, diffusivityFactor: 0.93, temperatureToleranceC: 8, ...spec })).toBe(true);
-    expect(ok(JobInputsSchema, { kind: 'depth', temperatureC: 925, timeH: 6, diffusivityFactor: 0, ...spec })).toBe(false);
-    expect(ok(JobInputsSchema, { kind: 'depth', temperatureC: 925, timeH: 6, temperatureToleranceC: 500, ...spec })).toBe(false);
+    expect(
+      ok(JobInputsSchema, {
+        kind: 'depth',
+        temperatureC: 925,
+        timeH: 6,
+        diffusivityFactor: 0.93,
+        temperatureToleranceC: 8,
+        ...spec,
+      }),
+    ).toBe(true);
+    expect(ok(JobInputsSchema, { kind: 'depth', temperatureC: 925, timeH: 6, diffusivityFactor: 0, ...spec })).toBe(
+      false,
+    );
+    expect(
+      ok(JobInputsSchema, { kind: 'depth', temperatureC: 925, timeH: 6, temperatureToleranceC: 500, ...spec }),
+    ).toBe(false);
     const recipe = {
       name: 'KR-4410 boost/diffuse',
       steel: { grade: '20MnCr5', coreCarbonPct: 0.2 },
@@ -48,7 +67,13 @@ describe('job record schema (version 2)', () => {
   });
 
   it('lab results: hardness carries its unit and a plausible value; depth positive', () => {
-    expect(ok(LabResultSchema, { ecdMm: 0.82, surfaceHardness: { value: 60, unit: 'HRC' }, coreHardness: { value: 360, unit: 'HV' } })).toBe(true);
+    expect(
+      ok(LabResultSchema, {
+        ecdMm: 0.82,
+        surfaceHardness: { value: 60, unit: 'HRC' },
+        coreHardness: { value: 360, unit: 'HV' },
+      }),
+    ).toBe(true);
     expect(ok(LabResultSchema, { surfaceHardness: { value: 690, unit: 'HRC' } })).toBe(false);
     expect(ok(LabResultSchema, { surfaceHardness: { value: 60, unit: 'HB' } })).toBe(false);
     expect(ok(LabResultSchema, { ecdMm: 0 })).toBe(false);
@@ -58,7 +83,10 @@ describe('job record schema (version 2)', () => {
   });
 
   it('a prediction band must run from its minimum up to its maximum', () => {
-    const withBand = (minMm: number, maxMm: number) => ({ ...job, prediction: { ...job.prediction!, ecdBandMm: { minMm, maxMm } } });
+    const withBand = (minMm: number, maxMm: number) => ({
+      ...job,
+      prediction: { ...job.prediction!, ecdBandMm: { minMm, maxMm } },
+    });
     expect(ok(JobSchema, withBand(0.78, 0.93))).toBe(true);
     expect(ok(JobSchema, withBand(0.93, 0.78))).toBe(false);
   });

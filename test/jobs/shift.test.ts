@@ -1,6 +1,13 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { addDays, DEFAULT_SHIFT_CONFIG, parseShiftConfig, shiftOf, SHIFT_IDS, type ShiftConfig } from '../../src/jobs/shift';
+import {
+  addDays,
+  DEFAULT_SHIFT_CONFIG,
+  parseShiftConfig,
+  shiftOf,
+  SHIFT_IDS,
+  type ShiftConfig,
+} from '../../src/jobs/shift';
 
 /** Local time on a date away from daylight-saving changes in the usual zones. */
 const at = (day: number, hh: number, mm: number, month = 2, year = 2025) => new Date(year, month, day, hh, mm);

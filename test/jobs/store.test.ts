@@ -49,14 +49,21 @@ describe('job store: create, read, update, delete', () => {
     const job = unwrap(await store.add(pinionDraft(), { now: created }));
     // A device clock set back must not make the edit look older than the record.
     const edited = unwrap(
-      await store.update(job.id, { status: 'done', lab: { ecdMm: 0.82, surfaceHardness: { value: 60, unit: 'HRC' } } }, { now: new Date('2025-03-05T07:00:00.000Z') }),
+      await store.update(
+        job.id,
+        { status: 'done', lab: { ecdMm: 0.82, surfaceHardness: { value: 60, unit: 'HRC' } } },
+        { now: new Date('2025-03-05T07:00:00.000Z') },
+      ),
     );
     expect(edited.status).toBe('done');
     expect(edited.lab).toEqual({ ecdMm: 0.82, surfaceHardness: { value: 60, unit: 'HRC' } });
     expect(edited.id).toBe(job.id);
     expect(edited.createdAt).toBe(job.createdAt);
     expect(edited.updatedAt > job.updatedAt).toBe(true);
-    expect({ ...edited, status: job.status, lab: undefined, updatedAt: job.updatedAt }).toEqual({ ...job, lab: undefined });
+    expect({ ...edited, status: job.status, lab: undefined, updatedAt: job.updatedAt }).toEqual({
+      ...job,
+      lab: undefined,
+    });
     expect(unwrap(await store.get(job.id))).toEqual(edited);
     store.close();
   });
@@ -71,7 +78,10 @@ describe('job store: create, read, update, delete', () => {
     const badStatus = await store.update(job.id, { status: 'lost' });
     expect(badStatus.ok ? null : badStatus.error.issues?.[0]).toMatchObject({ path: 'status', problem: 'notOneOf' });
     const removeRequired = await store.update(job.id, { furnace: undefined });
-    expect(removeRequired.ok ? null : removeRequired.error.issues?.[0]).toMatchObject({ path: 'furnace', problem: 'missing' });
+    expect(removeRequired.ok ? null : removeRequired.error.issues?.[0]).toMatchObject({
+      path: 'furnace',
+      problem: 'missing',
+    });
     expect(unwrap(await store.get(job.id))).toEqual(cleared);
     store.close();
   });
@@ -80,7 +90,11 @@ describe('job store: create, read, update, delete', () => {
     const store = await freshStore();
     const job = unwrap(await store.add(pinionDraft()));
     unwrap(await store.remove(job.id));
-    for (const result of [await store.get(job.id), await store.update(job.id, { notes: 'x' }), await store.remove(job.id)]) {
+    for (const result of [
+      await store.get(job.id),
+      await store.update(job.id, { notes: 'x' }),
+      await store.remove(job.id),
+    ]) {
       expect(result).toEqual({ ok: false, error: { code: 'record.notFound', params: { id: job.id } } });
     }
     expect(unwrap(await store.count())).toBe(0);
@@ -111,7 +125,10 @@ describe('job store: create, read, update, delete', () => {
   it('putMany validates every record first and names the bad one by position', async () => {
     const store = await freshStore();
     const job = unwrap(await store.add(pinionDraft()));
-    const result = await store.putMany([{ ...job, id: crypto.randomUUID() }, { ...job, id: crypto.randomUUID(), createdAt: 'yesterday' }]);
+    const result = await store.putMany([
+      { ...job, id: crypto.randomUUID() },
+      { ...job, id: crypto.randomUUID(), createdAt: 'yesterday' },
+    ]);
     expect(result.ok ? null : result.error.issues?.[0]?.path).toBe('[1].createdAt');
     expect(unwrap(await store.count())).toBe(1);
     store.close();
@@ -129,7 +146,10 @@ describe('job store: create, read, update, delete', () => {
     // @ts-expect-error simulating a browser with storage turned off
     delete globalThis.indexedDB;
     try {
-      expect(await openJobStore({ name: uniqueDbName() })).toEqual({ ok: false, error: { code: 'storage.unavailable' } });
+      expect(await openJobStore({ name: uniqueDbName() })).toEqual({
+        ok: false,
+        error: { code: 'storage.unavailable' },
+      });
     } finally {
       globalThis.indexedDB = saved;
     }

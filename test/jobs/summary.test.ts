@@ -39,7 +39,12 @@ describe('shift summary', () => {
 
   it('says whether the lab depth falls inside the predicted uncertainty band', () => {
     const banded = (measuredMm: number) =>
-      ecdComparison(make({ prediction: { ...predicted(0.85), ecdBandMm: { minMm: 0.78, maxMm: 0.93 } }, lab: { ecdMm: measuredMm } }));
+      ecdComparison(
+        make({
+          prediction: { ...predicted(0.85), ecdBandMm: { minMm: 0.78, maxMm: 0.93 } },
+          lab: { ecdMm: measuredMm },
+        }),
+      );
     expect(banded(0.78)?.withinBand).toBe(true);
     expect(banded(0.93)?.withinBand).toBe(true);
     expect(banded(0.77)?.withinBand).toBe(false);
@@ -50,6 +55,12 @@ describe('shift summary', () => {
   it('no pairs without both depths; an empty shift gives zeros and no means', () => {
     expect(ecdComparison(make({ prediction: undefined, lab: { ecdMm: 0.8 } }))).toBeUndefined();
     const empty = summarizeShift([]);
-    expect(empty).toEqual({ loads: 0, furnaces: [], byStatus: { planned: 0, inFurnace: 0, done: 0, onHold: 0, rejected: 0 }, openItems: [], ecdPairs: [] });
+    expect(empty).toEqual({
+      loads: 0,
+      furnaces: [],
+      byStatus: { planned: 0, inFurnace: 0, done: 0, onHold: 0, rejected: 0 },
+      openItems: [],
+      ecdPairs: [],
+    });
   });
 });

@@ -26,13 +26,18 @@ function syntheticLog(kTrue: number, jobs: number, noiseMm: number, seed: number
 describe('furnace calibration: least-squares diffusivity factor k', () => {
   it('recovers k exactly from noise-free synthetic logs', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.5, max: 2, noNaN: true }), fc.integer({ min: 3, max: 30 }), fc.nat(), (k, jobs, seed) => {
-        const fit = fitDiffusivityFactor(syntheticLog(k, jobs, 0, seed));
-        expect(fit.ok).toBe(true);
-        if (!fit.ok) return;
-        expect(fit.value.factor / k).toBeCloseTo(1, 8);
-        expect(fit.value.rmsResidualMm).toBeLessThan(1e-8);
-      }),
+      fc.property(
+        fc.double({ min: 0.5, max: 2, noNaN: true }),
+        fc.integer({ min: 3, max: 30 }),
+        fc.nat(),
+        (k, jobs, seed) => {
+          const fit = fitDiffusivityFactor(syntheticLog(k, jobs, 0, seed));
+          expect(fit.ok).toBe(true);
+          if (!fit.ok) return;
+          expect(fit.value.factor / k).toBeCloseTo(1, 8);
+          expect(fit.value.rmsResidualMm).toBeLessThan(1e-8);
+        },
+      ),
       { numRuns: 50 },
     );
   });
@@ -57,7 +62,10 @@ describe('furnace calibration: least-squares diffusivity factor k', () => {
     expect(covered / 400).toBeLessThan(0.99);
   });
   it('refuses fewer than three jobs, and factors beyond 0.1–10', () => {
-    expect(fitDiffusivityFactor(syntheticLog(1, 2, 0, 1))).toMatchObject({ ok: false, error: { code: 'calibration.tooFewJobs' } });
+    expect(fitDiffusivityFactor(syntheticLog(1, 2, 0, 1))).toMatchObject({
+      ok: false,
+      error: { code: 'calibration.tooFewJobs' },
+    });
     const absurd = syntheticLog(1, 5, 0, 1).map((s) => ({ ...s, measuredEcdMm: s.measuredEcdMm * 10 }));
     expect(fitDiffusivityFactor(absurd)).toMatchObject({ ok: false, error: { code: 'calibration.factorOutOfRange' } });
   });

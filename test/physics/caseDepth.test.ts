@@ -47,7 +47,11 @@ describe('carbon potential and the alloy factor', () => {
   it('warns when the potential or the surface is above saturation (soot, carbides)', () => {
     const r = value(caseDepth({ ...base, temperatureC: 850, surfaceCarbonPct: 1.2 }));
     expect(r.warnings.map((w) => w.code)).toEqual(
-      expect.arrayContaining(['saturation.potentialAboveAcm', 'saturation.surfaceAboveAcm', 'hardness.retainedAustenite']),
+      expect.arrayContaining([
+        'saturation.potentialAboveAcm',
+        'saturation.surfaceAboveAcm',
+        'hardness.retainedAustenite',
+      ]),
     );
   });
   it('cautions a carburizing atmosphere below 760 °C (common practice, NFPA 86)', () => {

@@ -32,7 +32,9 @@ describe('constant-surface solution (Crank, The Mathematics of Diffusion, eq. 3.
   it('4× time gives 2× depth (depth ∝ √t)', () => {
     fc.assert(
       fc.property(fc.double({ min: 0.1, max: 100, noNaN: true }), (timeH) => {
-        const ratio = constantSurfaceDepth(4 * timeH * hour, D, 0.9, 0.2, 0.4) / constantSurfaceDepth(timeH * hour, D, 0.9, 0.2, 0.4);
+        const ratio =
+          constantSurfaceDepth(4 * timeH * hour, D, 0.9, 0.2, 0.4) /
+          constantSurfaceDepth(timeH * hour, D, 0.9, 0.2, 0.4);
         expect(ratio).toBeCloseTo(2, 12);
       }),
     );

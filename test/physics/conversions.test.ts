@@ -4,7 +4,12 @@ import { convertRequest } from '../../src/physics/conversions';
 describe('convert request', () => {
   it('converts one value into every unit of its quantity (NIST SP 811 factors)', () => {
     const r = convertRequest({ value: 925, from: 'C' });
-    expect(r.ok && r.value.values).toEqual({ C: 925, F: expect.closeTo(1697, 9), K: 1198.15, R: expect.closeTo(2156.67, 9) });
+    expect(r.ok && r.value.values).toEqual({
+      C: 925,
+      F: expect.closeTo(1697, 9),
+      K: 1198.15,
+      R: expect.closeTo(2156.67, 9),
+    });
   });
   it('converts to one unit when asked: 0.040 in = 1.016 mm', () => {
     const r = convertRequest({ value: '0,040', from: 'in', to: 'mm' });

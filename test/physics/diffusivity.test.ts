@@ -11,10 +11,17 @@ import {
 const K = (c: number) => c + 273.15;
 
 /** Largest |D_model / D_Ågren − 1| over a grid of temperatures (°C) and carbon (wt%). */
-function worstDeviationFromAgren(model: (tK: number, c: number) => number, t0: number, t1: number, c0: number, c1: number) {
+function worstDeviationFromAgren(
+  model: (tK: number, c: number) => number,
+  t0: number,
+  t1: number,
+  c0: number,
+  c1: number,
+) {
   let worst = 0;
   for (let t = t0; t <= t1; t += 5) {
-    for (let c = c0; c <= c1 + 1e-9; c += 0.05) worst = Math.max(worst, Math.abs(model(K(t), c) / agrenDiffusivity(K(t), c) - 1));
+    for (let c = c0; c <= c1 + 1e-9; c += 0.05)
+      worst = Math.max(worst, Math.abs(model(K(t), c) / agrenDiffusivity(K(t), c) - 1));
   }
   return worst;
 }

@@ -19,7 +19,15 @@ function midpointRampIntegral(ratio: (tempC: number) => number, fromC: number, t
 
 describe('equivalent time t_eq = ∫ D(T(t))/D(T_set) dt', () => {
   it('a history at the set temperature is worth its clock time', () => {
-    const r = value(equivalentTime({ history: [{ timeH: 0, temperatureC: 925 }, { timeH: 3, temperatureC: 925 }], setTemperatureC: 925 }));
+    const r = value(
+      equivalentTime({
+        history: [
+          { timeH: 0, temperatureC: 925 },
+          { timeH: 3, temperatureC: 925 },
+        ],
+        setTemperatureC: 925,
+      }),
+    );
     expect(r.equivalentTimeH).toBeCloseTo(3, 12);
     expect(r.lostTimeH).toBeCloseTo(0, 12);
   });
@@ -60,7 +68,10 @@ describe('equivalent time t_eq = ∫ D(T(t))/D(T_set) dt', () => {
       { timeH: 0, temperatureC: 20 },
       { timeH: 2, temperatureC: 925 },
     ];
-    expect(value(equivalentTime({ history: ramp, setTemperatureC: 925 })).equivalentTimeH / reference).toBeCloseTo(1, 6);
+    expect(value(equivalentTime({ history: ramp, setTemperatureC: 925 })).equivalentTimeH / reference).toBeCloseTo(
+      1,
+      6,
+    );
   });
   it('running hot gives negative lost time and no extra soak once the requirement is met', () => {
     const hot = [

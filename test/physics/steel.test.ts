@@ -16,7 +16,8 @@ describe('saturation of austenite (Acm)', () => {
     expect(saturationCarbonPct(1200)).toBeUndefined();
   });
   it('rises with temperature', () => {
-    for (let t = 727; t + 7 <= 1148; t += 7) expect(saturationCarbonPct(t + 7)!).toBeGreaterThan(saturationCarbonPct(t)!);
+    for (let t = 727; t + 7 <= 1148; t += 7)
+      expect(saturationCarbonPct(t + 7)!).toBeGreaterThan(saturationCarbonPct(t)!);
   });
 });
 

@@ -52,19 +52,28 @@ if (firstParts.length === 0 || firstParts.length !== restParts.length) {
 }
 const staticLocales = staticFiles.filter((f) => LOCALE_CHUNK.test(f));
 if (staticLocales.length > 0) {
-  console.error(`locale chunks loaded statically with the entry (they must be dynamic imports):\n  ${staticLocales.join('\n  ')}`);
+  console.error(
+    `locale chunks loaded statically with the entry (they must be dynamic imports):\n  ${staticLocales.join('\n  ')}`,
+  );
   process.exit(1);
 }
 const largestFirst = firstParts[0]!;
 
 /** Sources that belong in lazily loaded chunks only. */
-const LAZY_ONLY = [/node_modules\/idb\//, /node_modules\/valibot\//, /node_modules\/papaparse\//, /src\/jobs\/(store|schema|migrations)/];
+const LAZY_ONLY = [
+  /node_modules\/idb\//,
+  /node_modules\/valibot\//,
+  /node_modules\/papaparse\//,
+  /src\/jobs\/(store|schema|migrations)/,
+];
 const misplaced = staticFiles.flatMap((file) => {
   const mapPath = join(dist, `${file}.map`);
   // Only bundler glue comes without a map; anything larger must be checkable.
   if (!existsSync(mapPath)) return gzipKb(file) < 1 ? [] : [`${file}: no source map to check`];
   const map = JSON.parse(readFileSync(mapPath, 'utf8')) as { sources: string[] };
-  return map.sources.filter((source) => LAZY_ONLY.some((pattern) => pattern.test(source))).map((source) => `${file}: ${source}`);
+  return map.sources
+    .filter((source) => LAZY_ONLY.some((pattern) => pattern.test(source)))
+    .map((source) => `${file}: ${source}`);
 });
 if (misplaced.length > 0) {
   console.error(`code for lazy screens in the first screen:\n  ${misplaced.join('\n  ')}`);
@@ -80,12 +89,16 @@ for (const file of staticFiles) {
   line(kb, file);
 }
 line(codeKb, 'code subtotal');
-console.log(`first part of the largest locale (${firstParts.map((c) => `${c.lang} ${c.kb.toFixed(2)}`).join(', ')} kB):`);
+console.log(
+  `first part of the largest locale (${firstParts.map((c) => `${c.lang} ${c.kb.toFixed(2)}`).join(', ')} kB):`,
+);
 line(largestFirst.kb, largestFirst.file);
 console.log('not counted: the rest of each locale, loaded after the first paint:');
 for (const c of restParts) line(c.kb, c.file);
 const total = codeKb + largestFirst.kb;
-console.log(`first-screen JavaScript: ${total.toFixed(2)} kB gzip = code ${codeKb.toFixed(2)} + locale ${largestFirst.kb.toFixed(2)} (budget ${FIRST_SCREEN_BUDGET_KB} kB)`);
+console.log(
+  `first-screen JavaScript: ${total.toFixed(2)} kB gzip = code ${codeKb.toFixed(2)} + locale ${largestFirst.kb.toFixed(2)} (budget ${FIRST_SCREEN_BUDGET_KB} kB)`,
+);
 if (total > FIRST_SCREEN_BUDGET_KB) {
   console.error(`over budget by ${(total - FIRST_SCREEN_BUDGET_KB).toFixed(2)} kB`);
   process.exit(1);

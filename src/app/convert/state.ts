@@ -31,7 +31,9 @@ export const DEFAULT_CONVERT_FORM: ConvertForm = {
 export const convertForm = persisted<ConvertForm>('form.convert', DEFAULT_CONVERT_FORM);
 
 export function quantityOfForm(form: ConvertForm): ConvertQuantity {
-  return (CONVERT_QUANTITIES as readonly string[]).includes(form.quantity) ? (form.quantity as ConvertQuantity) : 'temperature';
+  return (CONVERT_QUANTITIES as readonly string[]).includes(form.quantity)
+    ? (form.quantity as ConvertQuantity)
+    : 'temperature';
 }
 
 export function unitOfForm(form: ConvertForm, quantity: ConvertQuantity): string {

@@ -11,7 +11,11 @@ export function tableRows(profile: readonly ProfilePoint[], maxRows = 11): Profi
 
 export function ProfileTable({ profile, ctx }: { profile: readonly ProfilePoint[]; ctx: ScreenContext }) {
   const { t, show } = ctx;
-  const rows = tableRows(profile).map((p) => ({ depth: show.depth(p.depthMm), carbon: show.carbon(p.carbonPct), hardness: show.hardnessHrc(p.hardnessHrc) }));
+  const rows = tableRows(profile).map((p) => ({
+    depth: show.depth(p.depthMm),
+    carbon: show.carbon(p.carbonPct),
+    hardness: show.hardnessHrc(p.hardnessHrc),
+  }));
   return (
     <div class="table-wrap">
       <table class="numbers">

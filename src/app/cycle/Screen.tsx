@@ -39,7 +39,11 @@ export default function CycleScreen() {
     <div class="screen cycle">
       <CycleTabs current="cycle" />
       <h1 tabIndex={-1}>{t('app.cycle.title')}</h1>
-      <Answer label={view ? t('app.depth.answerDepth') : t('app.common.noResult')} value={view?.answer} note={view?.answerNote} />
+      <Answer
+        label={view ? t('app.depth.answerDepth') : t('app.common.noResult')}
+        value={view?.answer}
+        note={view?.answerNote}
+      />
 
       <section aria-labelledby="cycle-steps">
         <h2 id="cycle-steps">{t('app.cycle.stepsHeading')}</h2>
@@ -68,15 +72,39 @@ export default function CycleScreen() {
 
       <section class="card" aria-labelledby="cycle-part">
         <h2 id="cycle-part">{t('app.cycle.partHeading')}</h2>
-        <ShapeFields idPrefix="cycle" shape={form.shape} size={form.size} onChange={(changes) => patch(cycleForm, changes)} error={word(errors.size)} ctx={ctx} />
-        <SteelFields idPrefix="cycle-steel" steel={form.steel} onChange={(s) => patch(cycleForm, { steel: s })} errors={errors} word={word} />
+        <ShapeFields
+          idPrefix="cycle"
+          shape={form.shape}
+          size={form.size}
+          onChange={(changes) => patch(cycleForm, changes)}
+          error={word(errors.size)}
+          ctx={ctx}
+        />
+        <SteelFields
+          idPrefix="cycle-steel"
+          steel={form.steel}
+          onChange={(s) => patch(cycleForm, { steel: s })}
+          errors={errors}
+          word={word}
+        />
         <ModelField id="cycle-model" value={form.model} onChange={(v) => patch(cycleForm, { model: v })} ctx={ctx} />
-        <ThresholdField id="cycle-threshold" value={form.threshold} onInput={(v) => patch(cycleForm, { threshold: v })} error={word(errors.threshold)} show={show} />
+        <ThresholdField
+          id="cycle-threshold"
+          value={form.threshold}
+          onInput={(v) => patch(cycleForm, { threshold: v })}
+          error={word(errors.threshold)}
+          show={show}
+        />
         <FurnaceField id="cycle-furnace" model={isModelId(form.model) ? form.model : model.value} ctx={ctx} />
       </section>
 
       <ResultsCard id="cycle-results" error={word(outcome.general)} view={view}>
-        <CycleBand id="cycle-band" recipe={result?.recipe} diffusivityFactor={result ? factorOf(result.calibration) : 1} ctx={ctx} />
+        <CycleBand
+          id="cycle-band"
+          recipe={result?.recipe}
+          diffusivityFactor={result ? factorOf(result.calibration) : 1}
+          ctx={ctx}
+        />
         {view && <ProfileChart data={view.chart} label={t('app.cycle.chartLabel')} theme={theme.value} />}
         {result && <ProfileTable profile={result.simulation.profile} ctx={ctx} />}
       </ResultsCard>

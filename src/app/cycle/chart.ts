@@ -12,7 +12,15 @@ export interface ProfileChartData {
   thresholdPct: number;
   ecd: number;
   /** Legend names in full; axes carry only the unit symbols so they fit a phone. */
-  labels: { depth: string; carbon: string; hardness: string; threshold: string; ecd: string; carbonAxis: string; hardnessAxis: string };
+  labels: {
+    depth: string;
+    carbon: string;
+    hardness: string;
+    threshold: string;
+    ecd: string;
+    carbonAxis: string;
+    hardnessAxis: string;
+  };
 }
 
 const cssVar = (name: string) => getComputedStyle(document.documentElement).getPropertyValue(name).trim() || '#888';
@@ -39,7 +47,11 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
     legend: { show: true, live: false },
     cursor: { drag: { x: false, y: false } },
     scales: { x: { time: false }, c: { auto: true }, hrc: { auto: false, range: [15, 70] } },
-    axes: [axis(data.labels.depth, 'x'), { ...axis(data.labels.carbonAxis, 'c'), size: 46 }, { ...axis(data.labels.hardnessAxis, 'hrc', 1), size: 44, grid: { show: false } }],
+    axes: [
+      axis(data.labels.depth, 'x'),
+      { ...axis(data.labels.carbonAxis, 'c'), size: 46 },
+      { ...axis(data.labels.hardnessAxis, 'hrc', 1), size: 44, grid: { show: false } },
+    ],
     series: [
       {},
       { label: data.labels.carbon, scale: 'c', stroke: carbon, width: 3 },

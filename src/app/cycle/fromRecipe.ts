@@ -35,7 +35,11 @@ export function cycleFormOfRecipe(recipe: Recipe, extras: FormExtras): CycleForm
     endTemp: field(text(step.endTempC), 'C'),
     neutral: step.carbonPotentialPct === null,
     carbonPotential: field(step.carbonPotentialPct === null ? '' : text(step.carbonPotentialPct)),
-    beta: field(step.betaMPerS === undefined || step.betaMPerS === extras.defaultBetaMPerS ? '' : text(step.betaMPerS / BETA_INPUT_SCALE)),
+    beta: field(
+      step.betaMPerS === undefined || step.betaMPerS === extras.defaultBetaMPerS
+        ? ''
+        : text(step.betaMPerS / BETA_INPUT_SCALE),
+    ),
   }));
   return {
     steps,

@@ -2,7 +2,13 @@
 import { computed } from '@preact/signals';
 import { ALLOY_ELEMENTS, isModelId, type DiffusivityModelId } from '../../physics';
 import type { Recipe, RecipeStep, SimulationResult } from '../../physics/cycle/recipe';
-import { calibrations, calibrationState, chosenFurnace, factorOf, type CalibrationState } from '../settings/calibration';
+import {
+  calibrations,
+  calibrationState,
+  chosenFurnace,
+  factorOf,
+  type CalibrationState,
+} from '../settings/calibration';
 import { BETA_INPUT_SCALE, defaults, model } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
 import { FieldReader, placeError, type Outcome } from '../ui/outcome';
@@ -42,7 +48,9 @@ export function formFields(form: CycleForm): ReadonlySet<string> {
     'threshold',
     'size',
     ...ALLOY_ELEMENTS.map((e) => `composition.${e}`),
-    ...form.steps.flatMap((_, i) => ['durationH', 'startTempC', 'endTempC', 'carbonPotentialPct', 'betaMPerS'].map((f) => `steps.${i}.${f}`)),
+    ...form.steps.flatMap((_, i) =>
+      ['durationH', 'startTempC', 'endTempC', 'carbonPotentialPct', 'betaMPerS'].map((f) => `steps.${i}.${f}`),
+    ),
   ]);
 }
 
@@ -50,7 +58,11 @@ export function formFields(form: CycleForm): ReadonlySet<string> {
 export type BaseForm = Pick<CycleForm, 'steel' | 'model' | 'threshold' | 'shape' | 'size'>;
 
 /** Steel, model, threshold and shape of a cycle or plan request (errors into `read`); undefined when a field cannot be read. */
-export function readBaseFields(form: BaseForm, settings: CycleDefaults, read: FieldReader): Omit<Recipe, 'steps' | 'name'> | undefined {
+export function readBaseFields(
+  form: BaseForm,
+  settings: CycleDefaults,
+  read: FieldReader,
+): Omit<Recipe, 'steps' | 'name'> | undefined {
   const coreCarbonPct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
   const composition = read.value(readComposition(form.steel));
   const threshold = read.value(readOptionalField(form.threshold, 'threshold'));
@@ -65,15 +77,26 @@ export function readBaseFields(form: BaseForm, settings: CycleDefaults, read: Fi
   };
 }
 
-export function buildRecipe(form: CycleForm, settings: CycleDefaults): { recipe?: Recipe; errors: FieldReader['errors'] } {
+export function buildRecipe(
+  form: CycleForm,
+  settings: CycleDefaults,
+): { recipe?: Recipe; errors: FieldReader['errors'] } {
   const read = new FieldReader();
   const steps: (RecipeStep | undefined)[] = form.steps.map((s, i) => {
     const durationH = read.value(readField(s.duration, `steps.${i}.durationH`, PHYSICS_UNITS.time));
     const startTempC = read.value(readField(s.startTemp, `steps.${i}.startTempC`, PHYSICS_UNITS.temperature));
     const endTempC = read.value(readField(s.endTemp, `steps.${i}.endTempC`, PHYSICS_UNITS.temperature));
-    const carbonPotentialPct = s.neutral ? null : read.value(readField(s.carbonPotential, `steps.${i}.carbonPotentialPct`));
+    const carbonPotentialPct = s.neutral
+      ? null
+      : read.value(readField(s.carbonPotential, `steps.${i}.carbonPotentialPct`));
     const betaTyped = read.value(readOptionalField(s.beta, `steps.${i}.betaMPerS`));
-    if (durationH === undefined || startTempC === undefined || endTempC === undefined || carbonPotentialPct === undefined) return undefined;
+    if (
+      durationH === undefined ||
+      startTempC === undefined ||
+      endTempC === undefined ||
+      carbonPotentialPct === undefined
+    )
+      return undefined;
     return {
       ...(s.label.trim() ? { label: s.label.trim() } : {}),
       durationH,

@@ -42,7 +42,12 @@ const step = (key: number, durationH: string, startC: string, endC: string, cp: 
 
 /** A boost and diffuse cycle for pinion KR-2231 (SAE 8620) of the demo scenario, then a drop to 845 °C. */
 export const DEFAULT_CYCLE_FORM: CycleForm = {
-  steps: [step(1, '3.5', '925', '925', '1.1'), step(2, '2', '925', '925', '0.8'), step(3, '0.5', '925', '845', '0.8'), step(4, '0.5', '845', '845', '0.8')],
+  steps: [
+    step(1, '3.5', '925', '925', '1.1'),
+    step(2, '2', '925', '925', '0.8'),
+    step(3, '0.5', '925', '845', '0.8'),
+    step(4, '0.5', '845', '845', '0.8'),
+  ],
   shape: 'semi-infinite',
   size: field('20', 'mm'),
   steel: defaultSteel('sae-8620'),
@@ -58,7 +63,9 @@ export const MAX_STEPS = 12;
 export function addStep(form: CycleForm): CycleForm {
   if (form.steps.length >= MAX_STEPS) return form;
   const last = form.steps[form.steps.length - 1];
-  const base = last ? { ...last, label: '', startTemp: last.endTemp, duration: { ...last.duration, text: '1' } } : step(0, '1', '925', '925', '0.8');
+  const base = last
+    ? { ...last, label: '', startTemp: last.endTemp, duration: { ...last.duration, text: '1' } }
+    : step(0, '1', '925', '925', '0.8');
   return { ...form, steps: [...form.steps, { ...base, key: form.nextKey }], nextKey: form.nextKey + 1 };
 }
 

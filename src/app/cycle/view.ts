@@ -24,7 +24,12 @@ const toUnit = (mm: number, unit: string) => {
   return r.ok ? r.value : Number.NaN;
 };
 
-export function cycleView({ recipe, simulation, calibration }: CycleResult, t: TFunction, show: Show, units: DisplayUnits): CycleView {
+export function cycleView(
+  { recipe, simulation, calibration }: CycleResult,
+  t: TFunction,
+  show: Show,
+  units: DisplayUnits,
+): CycleView {
   const totalH = recipe.steps.reduce((sum, s) => sum + s.durationH, 0);
   const threshold = recipe.thresholdCarbonPct ?? 0;
   const calibrated = calibrationWords(calibration, t, show);
@@ -32,8 +37,15 @@ export function cycleView({ recipe, simulation, calibration }: CycleResult, t: T
     answer: show.depth(simulation.effectiveCaseDepthMm),
     ...(calibrated?.short ? { answerNote: calibrated.short } : {}),
     rows: [
-      ...(calibrated ? [{ key: 'calibration', label: t('app.calibration.label'), value: calibrated.sentence, text: true }] : []),
-      { key: 'ecd', label: t('app.depth.ecd', { threshold: show.carbon(threshold) }), value: show.depth(simulation.effectiveCaseDepthMm), main: true },
+      ...(calibrated
+        ? [{ key: 'calibration', label: t('app.calibration.label'), value: calibrated.sentence, text: true }]
+        : []),
+      {
+        key: 'ecd',
+        label: t('app.depth.ecd', { threshold: show.carbon(threshold) }),
+        value: show.depth(simulation.effectiveCaseDepthMm),
+        main: true,
+      },
       { key: 'total', label: t('app.cycle.totalCase'), value: show.depth(simulation.totalCaseDepthMm) },
       { key: 'surface', label: t('app.depth.surfaceCarbon'), value: show.carbon(simulation.surfaceCarbonPct) },
       { key: 'duration', label: t('app.cycle.cycleTime'), value: show.time(totalH), detail: show.hoursMinutes(totalH) },

@@ -34,9 +34,20 @@ export default function DepthScreen() {
   return (
     <div class="screen depth">
       <h1 tabIndex={-1}>{t('app.depth.title')}</h1>
-      <Answer label={view ? view.answerLabel : t('app.common.noResult')} value={view?.answer} detail={view?.answerDetail} note={view?.answerNote} />
+      <Answer
+        label={view ? view.answerLabel : t('app.common.noResult')}
+        value={view?.answer}
+        detail={view?.answerDetail}
+        note={view?.answerNote}
+      />
 
-      <Segmented name="depth-mode" legend={t('app.depth.solveForLegend')} value={mode} choices={modeChoices} onChange={(v) => patch(depthForm, { solveFor: v })} />
+      <Segmented
+        name="depth-mode"
+        legend={t('app.depth.solveForLegend')}
+        value={mode}
+        choices={modeChoices}
+        onChange={(v) => patch(depthForm, { solveFor: v })}
+      />
 
       <section class="card" aria-labelledby="depth-inputs">
         <h2 id="depth-inputs">{t('app.common.inputs')}</h2>
@@ -88,9 +99,21 @@ export default function DepthScreen() {
             onInput={(v) => patch(depthForm, { carbon: v })}
             error={word(errors.carbon)}
           />
-          <ThresholdField id="depth-threshold" value={form.threshold} onInput={(v) => patch(depthForm, { threshold: v })} error={word(errors.threshold)} show={show} />
+          <ThresholdField
+            id="depth-threshold"
+            value={form.threshold}
+            onInput={(v) => patch(depthForm, { threshold: v })}
+            error={word(errors.threshold)}
+            show={show}
+          />
         </div>
-        <SteelFields idPrefix="depth-steel" steel={form.steel} onChange={(s) => patch(depthForm, { steel: s })} errors={errors} word={word} />
+        <SteelFields
+          idPrefix="depth-steel"
+          steel={form.steel}
+          onChange={(s) => patch(depthForm, { steel: s })}
+          errors={errors}
+          word={word}
+        />
         <FurnaceField id="depth-furnace" model={model.value} ctx={ctx} />
       </section>
 

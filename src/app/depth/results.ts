@@ -14,7 +14,13 @@ import {
   type TemperatureResult,
   type TimeResult,
 } from '../../physics';
-import { calibrations, calibrationState, chosenFurnace, factorOf, type CalibrationState } from '../settings/calibration';
+import {
+  calibrations,
+  calibrationState,
+  chosenFurnace,
+  factorOf,
+  type CalibrationState,
+} from '../settings/calibration';
 import { defaults, model } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
 import { FieldReader, placeError, type Outcome } from '../ui/outcome';
@@ -93,14 +99,19 @@ export function usesField(mode: SolveFor, name: 'temperature' | 'time' | 'target
 export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<DepthResult> {
   const mode = solveFor(form);
   const read = new FieldReader();
-  const temperatureC = usesField(mode, 'temperature') ? read.value(readField(form.temperature, 'temperature', PHYSICS_UNITS.temperature)) : undefined;
+  const temperatureC = usesField(mode, 'temperature')
+    ? read.value(readField(form.temperature, 'temperature', PHYSICS_UNITS.temperature))
+    : undefined;
   const timeH = usesField(mode, 'time') ? read.value(readField(form.time, 'time', PHYSICS_UNITS.time)) : undefined;
-  const targetDepthMm = usesField(mode, 'targetDepth') ? read.value(readField(form.targetDepth, 'targetDepth', PHYSICS_UNITS.depth)) : undefined;
+  const targetDepthMm = usesField(mode, 'targetDepth')
+    ? read.value(readField(form.targetDepth, 'targetDepth', PHYSICS_UNITS.depth))
+    : undefined;
   const carbonPct = read.value(readField(form.carbon, 'carbon'));
   const corePct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
   const thresholdPct = read.value(readOptionalField(form.threshold, 'threshold'));
   const composition = read.value(readComposition(form.steel));
-  if (read.failed || corePct === undefined || carbonPct === undefined || composition === undefined) return { errors: read.errors };
+  if (read.failed || corePct === undefined || carbonPct === undefined || composition === undefined)
+    return { errors: read.errors };
 
   const calibration = settings.calibration ?? { kind: 'none' };
   const factor = factorOf(calibration);
@@ -118,7 +129,11 @@ export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<
     totalCaseMarginPct: settings.totalCaseMarginPct,
   };
   const calculated =
-    mode === 'time' ? timeForCaseDepth(request) : mode === 'temperature' ? temperatureForCaseDepth(request) : caseDepth(request);
+    mode === 'time'
+      ? timeForCaseDepth(request)
+      : mode === 'temperature'
+        ? temperatureForCaseDepth(request)
+        : caseDepth(request);
   if (!calculated.ok) return placeError(calculated.error, FIELD_MAP, FORM_FIELDS);
   return { errors: {}, result: { solveFor: mode, figures: calculated.value, request, calibration } as DepthResult };
 }

@@ -21,10 +21,14 @@ export interface DepthView {
 export function depthView(result: DepthResult, t: TFunction, show: Show, marginPct: number): DepthView {
   const f = result.figures;
   const calibration = calibrationWords(result.calibration, t, show);
-  const calibrationRows: ResultRow[] = calibration ? [{ key: 'calibration', label: t('app.calibration.label'), value: calibration.sentence, text: true }] : [];
+  const calibrationRows: ResultRow[] = calibration
+    ? [{ key: 'calibration', label: t('app.calibration.label'), value: calibration.sentence, text: true }]
+    : [];
   const band = bandRow(f.uncertaintyMm, t, show);
   const answerNote = calibration?.short;
-  const byModel = MODEL_IDS.map((id) => `${t(`app.models.${id}`)} ${show.depth(f.modelRangeMm.byModel[id])}`).join(' · ');
+  const byModel = MODEL_IDS.map((id) => `${t(`app.models.${id}`)} ${show.depth(f.modelRangeMm.byModel[id])}`).join(
+    ' · ',
+  );
   const ecdRow: ResultRow = {
     key: 'ecd',
     label: t('app.depth.ecd', { threshold: show.carbon(f.thresholdCarbonPct) }),
@@ -37,14 +41,24 @@ export function depthView(result: DepthResult, t: TFunction, show: Show, marginP
       value: show.depth(f.totalCaseDepthMm),
     },
     { key: 'sqrtDt', label: t('app.depth.sqrtDt'), value: show.depth(f.sqrtDtMm), detail: t('app.depth.sqrtDtDetail') },
-    { key: 'harris', label: t('app.depth.harris'), value: show.depth(f.harrisDepthMm), detail: t('app.depth.harrisDetail') },
+    {
+      key: 'harris',
+      label: t('app.depth.harris'),
+      value: show.depth(f.harrisDepthMm),
+      detail: t('app.depth.harrisDetail'),
+    },
     {
       key: 'diffusivity',
       label: t('app.depth.diffusivity'),
       value: show.diffusivity(f.diffusivityM2PerS),
       detail: DIFFUSIVITY_MODELS[f.model].source,
     },
-    { key: 'modelRange', label: t('app.depth.modelRange'), value: show.depthRange(f.modelRangeMm.min, f.modelRangeMm.max), detail: byModel },
+    {
+      key: 'modelRange',
+      label: t('app.depth.modelRange'),
+      value: show.depthRange(f.modelRangeMm.min, f.modelRangeMm.max),
+      detail: byModel,
+    },
     {
       key: 'sensitivity',
       label: t('app.depth.sensitivity', { step: show.temperatureDifference(f.temperatureSensitivity.stepC) }),
@@ -57,7 +71,10 @@ export function depthView(result: DepthResult, t: TFunction, show: Show, marginP
       key: 'surface',
       label: t('app.depth.surfaceCarbon'),
       value: show.carbon(f.surfaceCarbonPct),
-      detail: t('app.depth.alloyFactor', { factor: show.number(f.alloyFactor, 3), potential: show.carbon(f.carbonPotentialPct) }),
+      detail: t('app.depth.alloyFactor', {
+        factor: show.number(f.alloyFactor, 3),
+        potential: show.carbon(f.carbonPotentialPct),
+      }),
     },
     {
       key: 'hardness',
@@ -75,7 +92,13 @@ export function depthView(result: DepthResult, t: TFunction, show: Show, marginP
       answerNote,
       rows: [
         ...calibrationRows,
-        { key: 'time', label: t('app.depth.timeNeeded'), value: show.time(f.timeH), detail: show.hoursMinutes(f.timeH), main: true },
+        {
+          key: 'time',
+          label: t('app.depth.timeNeeded'),
+          value: show.time(f.timeH),
+          detail: show.hoursMinutes(f.timeH),
+          main: true,
+        },
         {
           key: 'timeRange',
           label: t('app.depth.timeRange'),
@@ -95,7 +118,12 @@ export function depthView(result: DepthResult, t: TFunction, show: Show, marginP
       answerNote,
       rows: [
         ...calibrationRows,
-        { key: 'temperature', label: t('app.depth.temperatureNeeded'), value: show.temperature(f.temperatureC), main: true },
+        {
+          key: 'temperature',
+          label: t('app.depth.temperatureNeeded'),
+          value: show.temperature(f.temperatureC),
+          main: true,
+        },
         {
           key: 'temperatureRange',
           label: t('app.depth.temperatureRange'),

@@ -30,7 +30,9 @@ export function CalibrationView() {
   return (
     <>
       <h1 tabIndex={-1}>{t('app.calibration.title')}</h1>
-      <p class="note">{t('app.calibration.intro', { count: DEFAULT_CALIBRATION_JOBS, model: t(`app.models.${current}`) })}</p>
+      <p class="note">
+        {t('app.calibration.intro', { count: DEFAULT_CALIBRATION_JOBS, model: t(`app.models.${current}`) })}
+      </p>
       {list.state === 'failed' && <ErrorNote message={describeJobsError(t, list.error)} />}
       {list.state === 'ready' && cards.length === 0 && <p class="note">{t('app.calibration.noLabResults')}</p>}
       {cards.map((card) => (
@@ -40,7 +42,15 @@ export function CalibrationView() {
   );
 }
 
-function FurnaceCalibrationCard({ card, byId, ctx }: { card: FurnaceCard; byId: ReadonlyMap<string, Job>; ctx: ScreenContext }) {
+function FurnaceCalibrationCard({
+  card,
+  byId,
+  ctx,
+}: {
+  card: FurnaceCard;
+  byId: ReadonlyMap<string, Job>;
+  ctx: ScreenContext;
+}) {
   const { t, show, locale } = ctx;
   const { furnace, calibration, stored, fresh, stale } = card;
   const fit = calibration.fit;
@@ -51,7 +61,10 @@ function FurnaceCalibrationCard({ card, byId, ctx }: { card: FurnaceCard; byId: 
           key: 'factor',
           label: t('app.calibration.factor'),
           value: t('app.calibration.factorValue', { factor: show.number(fit.value.factor, 2) }),
-          detail: t('app.calibration.interval', { low: show.number(fit.value.interval95.low, 2), high: show.number(fit.value.interval95.high, 2) }),
+          detail: t('app.calibration.interval', {
+            low: show.number(fit.value.interval95.low, 2),
+            high: show.number(fit.value.interval95.high, 2),
+          }),
           main: true,
         },
         { key: 'jobs', label: t('app.calibration.jobs'), value: String(fit.value.jobCount) },
@@ -69,9 +82,16 @@ function FurnaceCalibrationCard({ card, byId, ctx }: { card: FurnaceCard; byId: 
       <h2 id={`${id}-title`}>{t('app.calibration.furnaceHeading', { furnace })}</h2>
       {!fit.ok && <ErrorNote message={errorMessage(t, fit.error)} />}
       {fit.ok && <ResultList rows={rows} label={t('app.calibration.furnaceHeading', { furnace })} />}
-      {calibration.skipped.length > 0 && <p class="note">{t('app.calibration.skipped', { count: calibration.skipped.length })}</p>}
+      {calibration.skipped.length > 0 && (
+        <p class="note">{t('app.calibration.skipped', { count: calibration.skipped.length })}</p>
+      )}
       {(fresh || stored) && (
-        <CheckField id={`${id}-apply`} label={t('app.calibration.apply', { furnace })} checked={stored?.apply ?? false} onChange={apply} />
+        <CheckField
+          id={`${id}-apply`}
+          label={t('app.calibration.apply', { furnace })}
+          checked={stored?.apply ?? false}
+          onChange={apply}
+        />
       )}
       {stored && stale && (
         <div class="calibration-stale">
@@ -95,7 +115,15 @@ function FurnaceCalibrationCard({ card, byId, ctx }: { card: FurnaceCard; byId: 
   );
 }
 
-function ResidualsTable({ fit, byId, ctx }: { fit: CalibrationFit; byId: ReadonlyMap<string, Job>; ctx: ScreenContext }) {
+function ResidualsTable({
+  fit,
+  byId,
+  ctx,
+}: {
+  fit: CalibrationFit;
+  byId: ReadonlyMap<string, Job>;
+  ctx: ScreenContext;
+}) {
   const { t, show } = ctx;
   return (
     <details class="disclosure">

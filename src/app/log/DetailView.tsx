@@ -11,7 +11,15 @@ import { formatCalendarDate, formatMoment } from './dates';
 import { DamagedRecords } from './DamagedRecords';
 import { FormActions } from './FormActions';
 import { JobFields, jobFieldLabel } from './JobFields';
-import { changesOf, formOfJob, missingFields, placeJobsError, placeMissing, type JobForm, type PlacedErrors } from './jobForm';
+import {
+  changesOf,
+  formOfJob,
+  missingFields,
+  placeJobsError,
+  placeMissing,
+  type JobForm,
+  type PlacedErrors,
+} from './jobForm';
 import { comparisonRows, labRows, planRows, predictionRows } from './jobRows';
 import { LabEditor } from './LabEditor';
 import { useLogRead } from './useLog';
@@ -56,7 +64,9 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
   const [message, setMessage] = useState<string | undefined>(undefined);
   const [error, setError] = useState<string | undefined>(undefined);
   const wording = { t, show: ctx.show, locale };
-  const title = job.workOrder ? t('app.log.detail.title', { workOrder: job.workOrder }) : t('app.log.detail.titleNoOrder', { part: job.partNumber });
+  const title = job.workOrder
+    ? t('app.log.detail.title', { workOrder: job.workOrder })
+    : t('app.log.detail.titleNoOrder', { part: job.partNumber });
 
   const setStatus = async (status: JobStatus) => {
     setMessage(undefined);
@@ -73,8 +83,23 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
     { key: 'part', label: t('app.log.fields.partNumber'), value: job.partNumber, text: true },
     { key: 'furnace', label: t('app.log.fields.furnace'), value: job.furnace, text: true },
     { key: 'operator', label: t('app.log.fields.operator'), value: job.operator, text: true },
-    { key: 'shift', label: t('app.log.detail.shift'), value: t(`jobs.shift.${job.shift}`), detail: formatCalendarDate(job.shiftDate, locale), text: true },
-    { key: 'created', label: t('app.log.detail.created'), value: formatMoment(job.createdAt, locale), text: true, detail: job.updatedAt !== job.createdAt ? t('app.log.detail.updated', { when: formatMoment(job.updatedAt, locale) }) : undefined },
+    {
+      key: 'shift',
+      label: t('app.log.detail.shift'),
+      value: t(`jobs.shift.${job.shift}`),
+      detail: formatCalendarDate(job.shiftDate, locale),
+      text: true,
+    },
+    {
+      key: 'created',
+      label: t('app.log.detail.created'),
+      value: formatMoment(job.createdAt, locale),
+      text: true,
+      detail:
+        job.updatedAt !== job.createdAt
+          ? t('app.log.detail.updated', { when: formatMoment(job.updatedAt, locale) })
+          : undefined,
+    },
   ];
 
   return (
@@ -87,7 +112,14 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
       <ErrorNote message={error} />
 
       <div class="card">
-        <Segmented wrap name="job-status" legend={t('app.log.fields.status')} value={job.status} choices={JOB_STATUSES.map((s) => ({ value: s, label: t(`jobs.status.${s}`) }))} onChange={(s) => void setStatus(s as JobStatus)} />
+        <Segmented
+          wrap
+          name="job-status"
+          legend={t('app.log.fields.status')}
+          value={job.status}
+          choices={JOB_STATUSES.map((s) => ({ value: s, label: t(`jobs.status.${s}`) }))}
+          onChange={(s) => void setStatus(s as JobStatus)}
+        />
       </div>
 
       {mode === 'edit' ? (
@@ -111,7 +143,14 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
       ) : (
         <section class="card" aria-labelledby="job-lab">
           <h2 id="job-lab">{t('app.log.lab.heading')}</h2>
-          {job.lab ? <ResultList rows={[...labRows(job.lab, wording), ...comparisonRows(job, wording)]} label={t('app.log.lab.heading')} /> : <p class="note">{t('app.log.lab.none')}</p>}
+          {job.lab ? (
+            <ResultList
+              rows={[...labRows(job.lab, wording), ...comparisonRows(job, wording)]}
+              label={t('app.log.lab.heading')}
+            />
+          ) : (
+            <p class="note">{t('app.log.lab.none')}</p>
+          )}
           <button type="button" class="button button-primary" onClick={() => setMode('lab')}>
             {job.lab ? t('app.log.lab.change') : t('app.log.lab.record')}
           </button>
@@ -120,7 +159,14 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
 
       <section class="card" aria-labelledby="job-plan">
         <h2 id="job-plan">{t('app.log.detail.plan')}</h2>
-        {job.prediction ? <ResultList rows={predictionRows(job.prediction, job.inputs?.kind, wording)} label={t('app.log.detail.plan')} /> : <p class="note">{t('app.log.detail.noPrediction')}</p>}
+        {job.prediction ? (
+          <ResultList
+            rows={predictionRows(job.prediction, job.inputs?.kind, wording)}
+            label={t('app.log.detail.plan')}
+          />
+        ) : (
+          <p class="note">{t('app.log.detail.noPrediction')}</p>
+        )}
         <h3 class="card-subheading">{t('app.common.inputs')}</h3>
         <ResultList rows={planRows(job.steel, job.inputs, wording)} label={t('app.common.inputs')} />
         <p class="note">{t('app.common.estimateNote')}</p>
@@ -153,8 +199,20 @@ function JobEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void
   return (
     <form class="card log-form" aria-labelledby="job-edit" onSubmit={(e) => void save(e)} noValidate>
       <h2 id="job-edit">{t('app.log.detail.editTitle')}</h2>
-      <JobFields idPrefix="job-edit" form={form} onChange={(changes) => setForm({ ...form, ...changes })} errors={placed?.fields ?? {}} askGradeName withStatus={false} />
-      <FormActions error={placed?.general} submitLabel={t('app.log.detail.saveEdit')} disabled={busy} onCancel={() => onDone(false)} />
+      <JobFields
+        idPrefix="job-edit"
+        form={form}
+        onChange={(changes) => setForm({ ...form, ...changes })}
+        errors={placed?.fields ?? {}}
+        askGradeName
+        withStatus={false}
+      />
+      <FormActions
+        error={placed?.general}
+        submitLabel={t('app.log.detail.saveEdit')}
+        disabled={busy}
+        onCancel={() => onDone(false)}
+      />
     </form>
   );
 }

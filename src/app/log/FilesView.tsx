@@ -4,7 +4,15 @@
  * copy of each job wins; nothing is deleted) and its counts reported.
  */
 import { useState } from 'preact/hooks';
-import { describeJobsError, exportBackup, exportCsv, exportFileName, importBackup, type ExportFile, type JobsResult } from '../../jobs';
+import {
+  describeJobsError,
+  exportBackup,
+  exportCsv,
+  exportFileName,
+  importBackup,
+  type ExportFile,
+  type JobsResult,
+} from '../../jobs';
 import { language } from '../../i18n/useT';
 import { ErrorNote } from '../ui/Notices';
 import { Segmented } from '../ui/Segmented';
@@ -34,7 +42,11 @@ export function FilesView() {
     setBusy(true);
     setExported(undefined);
     const store = await jobStore();
-    const file: JobsResult<ExportFile> = !store.ok ? store : kind === 'csv' ? await exportCsv(store.value, { decimalMark }) : await exportBackup(store.value, APP_VERSION);
+    const file: JobsResult<ExportFile> = !store.ok
+      ? store
+      : kind === 'csv'
+        ? await exportCsv(store.value, { decimalMark })
+        : await exportBackup(store.value, APP_VERSION);
     setBusy(false);
     if (!file.ok) {
       setExported({ ok: false, text: describeJobsError(t, file.error) });
@@ -45,7 +57,10 @@ export function FilesView() {
     const skipped = file.value.skipped;
     setExported({
       ok: skipped.length === 0,
-      text: [t('app.log.files.exported', { count: file.value.jobCount, name }), ...(skipped.length ? [t('jobs.exportSkipped', { count: skipped.length, id: skipped[0]!.key })] : [])].join(' '),
+      text: [
+        t('app.log.files.exported', { count: file.value.jobCount, name }),
+        ...(skipped.length ? [t('jobs.exportSkipped', { count: skipped.length, id: skipped[0]!.key })] : []),
+      ].join(' '),
     });
   };
 
@@ -58,7 +73,11 @@ export function FilesView() {
     const text = await file.text();
     const result = await writeToLog((store) => importBackup(store, text));
     setBusy(false);
-    setImported(result.ok ? { ok: true, text: t('jobs.importReport', { ...result.value }) } : { ok: false, text: describeJobsError(t, result.error) });
+    setImported(
+      result.ok
+        ? { ok: true, text: t('jobs.importReport', { ...result.value }) }
+        : { ok: false, text: describeJobsError(t, result.error) },
+    );
   };
 
   return (
@@ -83,7 +102,9 @@ export function FilesView() {
         <button type="button" class="button" disabled={busy} onClick={() => void download('csv')}>
           {t('app.log.files.csv')}
         </button>
-        <div aria-live="polite">{exported && (exported.ok ? <p class="log-saved">{exported.text}</p> : <ErrorNote message={exported.text} />)}</div>
+        <div aria-live="polite">
+          {exported && (exported.ok ? <p class="log-saved">{exported.text}</p> : <ErrorNote message={exported.text} />)}
+        </div>
       </section>
 
       <section class="card" aria-labelledby="files-import">
@@ -91,9 +112,18 @@ export function FilesView() {
         <p class="note">{t('app.log.files.importIntro')}</p>
         <label class="button file-pick" for="files-import-input">
           {t('app.log.files.choose')}
-          <input id="files-import-input" class="file-input" type="file" accept=".json,application/json" disabled={busy} onChange={(e) => void pick(e.currentTarget)} />
+          <input
+            id="files-import-input"
+            class="file-input"
+            type="file"
+            accept=".json,application/json"
+            disabled={busy}
+            onChange={(e) => void pick(e.currentTarget)}
+          />
         </label>
-        <div aria-live="polite">{imported && (imported.ok ? <p class="log-saved">{imported.text}</p> : <ErrorNote message={imported.text} />)}</div>
+        <div aria-live="polite">
+          {imported && (imported.ok ? <p class="log-saved">{imported.text}</p> : <ErrorNote message={imported.text} />)}
+        </div>
       </section>
     </>
   );

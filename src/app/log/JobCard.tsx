@@ -20,7 +20,14 @@ export function JobCard({ job, t, show, locale }: { job: Job; t: TFunction; show
           <StatusBadge status={job.status} t={t} />
         </span>
         <span class="job-card-line">
-          {[job.workOrder ? job.partNumber : '', job.furnace, job.operator, `${job.shift} ${formatClockTime(job.createdAt, locale)}`].filter(Boolean).join(' · ')}
+          {[
+            job.workOrder ? job.partNumber : '',
+            job.furnace,
+            job.operator,
+            `${job.shift} ${formatClockTime(job.createdAt, locale)}`,
+          ]
+            .filter(Boolean)
+            .join(' · ')}
         </span>
         {(predicted || measured) && (
           <span class="job-card-line job-card-depths">

@@ -19,7 +19,8 @@ export interface JobFieldsProps {
 }
 
 /** The label of a job form field by its name (undefined for names that are not form fields). */
-export const jobFieldLabel = (t: TFunction) => (field: string) => ((JOB_FORM_FIELDS as readonly string[]).includes(field) ? t(`app.log.fields.${field}`) : undefined);
+export const jobFieldLabel = (t: TFunction) => (field: string) =>
+  (JOB_FORM_FIELDS as readonly string[]).includes(field) ? t(`app.log.fields.${field}`) : undefined;
 
 export function JobFields({ idPrefix, form, onChange, errors, askGradeName, withStatus }: JobFieldsProps) {
   const t = useT();
@@ -27,22 +28,87 @@ export function JobFields({ idPrefix, form, onChange, errors, askGradeName, with
   return (
     <div class="job-fields">
       <div class="field-grid">
-        <TextField id={id('work-order')} label={t('app.log.fields.workOrder')} value={form.workOrder} maxLength={TEXT_MAX.workOrder} autoCapitalize="characters" onInput={(v) => onChange({ workOrder: v })} error={errors.workOrder} />
-        <TextField id={id('operator')} label={t('app.log.fields.operator')} value={form.operator} maxLength={TEXT_MAX.operator} autoCapitalize="characters" hint={t('app.log.fields.operatorHint')} onInput={(v) => onChange({ operator: v })} error={errors.operator} />
+        <TextField
+          id={id('work-order')}
+          label={t('app.log.fields.workOrder')}
+          value={form.workOrder}
+          maxLength={TEXT_MAX.workOrder}
+          autoCapitalize="characters"
+          onInput={(v) => onChange({ workOrder: v })}
+          error={errors.workOrder}
+        />
+        <TextField
+          id={id('operator')}
+          label={t('app.log.fields.operator')}
+          value={form.operator}
+          maxLength={TEXT_MAX.operator}
+          autoCapitalize="characters"
+          hint={t('app.log.fields.operatorHint')}
+          onInput={(v) => onChange({ operator: v })}
+          error={errors.operator}
+        />
       </div>
-      <TextField id={id('part')} label={t('app.log.fields.partNumber')} value={form.partNumber} maxLength={TEXT_MAX.partNumber} autoCapitalize="characters" onInput={(v) => onChange({ partNumber: v })} error={errors.partNumber}>
-        <QuickPicks label={t('app.log.fields.partPicks')} values={DEMO_PART_NUMBERS} current={form.partNumber} onPick={(v) => onChange({ partNumber: v })} />
+      <TextField
+        id={id('part')}
+        label={t('app.log.fields.partNumber')}
+        value={form.partNumber}
+        maxLength={TEXT_MAX.partNumber}
+        autoCapitalize="characters"
+        onInput={(v) => onChange({ partNumber: v })}
+        error={errors.partNumber}
+      >
+        <QuickPicks
+          label={t('app.log.fields.partPicks')}
+          values={DEMO_PART_NUMBERS}
+          current={form.partNumber}
+          onPick={(v) => onChange({ partNumber: v })}
+        />
       </TextField>
-      <TextField id={id('furnace')} label={t('app.log.fields.furnace')} value={form.furnace} maxLength={TEXT_MAX.furnace} autoCapitalize="characters" onInput={(v) => onChange({ furnace: v })} error={errors.furnace}>
-        <QuickPicks label={t('app.log.fields.furnacePicks')} values={DEMO_FURNACES} current={form.furnace} onPick={(v) => onChange({ furnace: v })} />
+      <TextField
+        id={id('furnace')}
+        label={t('app.log.fields.furnace')}
+        value={form.furnace}
+        maxLength={TEXT_MAX.furnace}
+        autoCapitalize="characters"
+        onInput={(v) => onChange({ furnace: v })}
+        error={errors.furnace}
+      >
+        <QuickPicks
+          label={t('app.log.fields.furnacePicks')}
+          values={DEMO_FURNACES}
+          current={form.furnace}
+          onPick={(v) => onChange({ furnace: v })}
+        />
       </TextField>
       {askGradeName && (
-        <TextField id={id('grade')} label={t('app.log.fields.gradeName')} value={form.gradeName} maxLength={TEXT_MAX.gradeName} hint={t('app.log.fields.gradeNameHint')} onInput={(v) => onChange({ gradeName: v })} error={errors.gradeName} />
+        <TextField
+          id={id('grade')}
+          label={t('app.log.fields.gradeName')}
+          value={form.gradeName}
+          maxLength={TEXT_MAX.gradeName}
+          hint={t('app.log.fields.gradeNameHint')}
+          onInput={(v) => onChange({ gradeName: v })}
+          error={errors.gradeName}
+        />
       )}
       {withStatus && (
-        <Segmented wrap name={id('status')} legend={t('app.log.fields.status')} value={form.status} choices={JOB_STATUSES.map((s) => ({ value: s, label: t(`jobs.status.${s}`) }))} onChange={(v) => onChange({ status: v as JobStatus })} />
+        <Segmented
+          wrap
+          name={id('status')}
+          legend={t('app.log.fields.status')}
+          value={form.status}
+          choices={JOB_STATUSES.map((s) => ({ value: s, label: t(`jobs.status.${s}`) }))}
+          onChange={(v) => onChange({ status: v as JobStatus })}
+        />
       )}
-      <TextAreaField id={id('notes')} label={t('app.log.fields.notes')} value={form.notes} maxLength={TEXT_MAX.notes} onInput={(v) => onChange({ notes: v })} error={errors.notes} />
+      <TextAreaField
+        id={id('notes')}
+        label={t('app.log.fields.notes')}
+        value={form.notes}
+        maxLength={TEXT_MAX.notes}
+        onInput={(v) => onChange({ notes: v })}
+        error={errors.notes}
+      />
     </div>
   );
 }

@@ -38,19 +38,80 @@ export function LabEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) 
   return (
     <form class="card log-form" aria-labelledby="lab-title" onSubmit={(e) => void save(e)} noValidate>
       <h2 id="lab-title">{t('app.log.lab.title')}</h2>
-      <NumberField id="lab-ecd" label={t('app.log.lab.ecd')} unit={units.depth} value={form.ecd} onInput={(v) => set({ ecd: v })} error={fieldError('ecd')} />
+      <NumberField
+        id="lab-ecd"
+        label={t('app.log.lab.ecd')}
+        unit={units.depth}
+        value={form.ecd}
+        onInput={(v) => set({ ecd: v })}
+        error={fieldError('ecd')}
+      />
       <div class="lab-hardness">
-        <NumberField id="lab-surface-hardness" label={t('app.log.lab.surfaceHardness')} unitLabel={UNIT_SYMBOLS[form.surfaceUnit]} value={form.surfaceHardness} onInput={(v) => set({ surfaceHardness: v })} error={fieldError('surfaceHardness')} />
-        <Segmented hideLegend name="lab-surface-unit" legend={t('app.log.lab.surfaceUnit')} value={form.surfaceUnit} choices={hardnessChoices} onChange={(v) => set({ surfaceUnit: v as HardnessUnit })} />
+        <NumberField
+          id="lab-surface-hardness"
+          label={t('app.log.lab.surfaceHardness')}
+          unitLabel={UNIT_SYMBOLS[form.surfaceUnit]}
+          value={form.surfaceHardness}
+          onInput={(v) => set({ surfaceHardness: v })}
+          error={fieldError('surfaceHardness')}
+        />
+        <Segmented
+          hideLegend
+          name="lab-surface-unit"
+          legend={t('app.log.lab.surfaceUnit')}
+          value={form.surfaceUnit}
+          choices={hardnessChoices}
+          onChange={(v) => set({ surfaceUnit: v as HardnessUnit })}
+        />
       </div>
       <div class="lab-hardness">
-        <NumberField id="lab-core-hardness" label={t('app.log.lab.coreHardness')} unitLabel={UNIT_SYMBOLS[form.coreUnit]} value={form.coreHardness} onInput={(v) => set({ coreHardness: v })} error={fieldError('coreHardness')} />
-        <Segmented hideLegend name="lab-core-unit" legend={t('app.log.lab.coreUnit')} value={form.coreUnit} choices={hardnessChoices} onChange={(v) => set({ coreUnit: v as HardnessUnit })} />
+        <NumberField
+          id="lab-core-hardness"
+          label={t('app.log.lab.coreHardness')}
+          unitLabel={UNIT_SYMBOLS[form.coreUnit]}
+          value={form.coreHardness}
+          onInput={(v) => set({ coreHardness: v })}
+          error={fieldError('coreHardness')}
+        />
+        <Segmented
+          hideLegend
+          name="lab-core-unit"
+          legend={t('app.log.lab.coreUnit')}
+          value={form.coreUnit}
+          choices={hardnessChoices}
+          onChange={(v) => set({ coreUnit: v as HardnessUnit })}
+        />
       </div>
-      <NumberField id="lab-surface-carbon" label={t('app.log.lab.surfaceCarbon')} unitLabel={UNIT_SYMBOLS.pctC} value={form.surfaceCarbon} hint={t('app.log.lab.surfaceCarbonHint')} onInput={(v) => set({ surfaceCarbon: v })} error={fieldError('surfaceCarbon')} />
-      <TextField id="lab-by" label={t('app.log.lab.by')} value={form.by} onInput={(v) => set({ by: v })} error={fieldError('by')} />
-      <TextField id="lab-at" type="date" label={t('app.log.lab.at')} value={form.at} onInput={(v) => set({ at: v })} error={fieldError('at')} />
-      <FormActions error={placed?.general} submitLabel={t('app.log.lab.save')} disabled={busy} onCancel={() => onDone(false)} />
+      <NumberField
+        id="lab-surface-carbon"
+        label={t('app.log.lab.surfaceCarbon')}
+        unitLabel={UNIT_SYMBOLS.pctC}
+        value={form.surfaceCarbon}
+        hint={t('app.log.lab.surfaceCarbonHint')}
+        onInput={(v) => set({ surfaceCarbon: v })}
+        error={fieldError('surfaceCarbon')}
+      />
+      <TextField
+        id="lab-by"
+        label={t('app.log.lab.by')}
+        value={form.by}
+        onInput={(v) => set({ by: v })}
+        error={fieldError('by')}
+      />
+      <TextField
+        id="lab-at"
+        type="date"
+        label={t('app.log.lab.at')}
+        value={form.at}
+        onInput={(v) => set({ at: v })}
+        error={fieldError('at')}
+      />
+      <FormActions
+        error={placed?.general}
+        submitLabel={t('app.log.lab.save')}
+        disabled={busy}
+        onCancel={() => onDone(false)}
+      />
     </form>
   );
 }

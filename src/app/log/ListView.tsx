@@ -15,7 +15,10 @@ import { useLogRead } from './useLog';
 const PAGE = 50;
 
 /** Furnaces and parts met in the log this session (the filter offers them). */
-const seen = signal<{ furnaces: string[]; parts: string[] }>({ furnaces: [...DEMO_FURNACES], parts: [...DEMO_PART_NUMBERS] });
+const seen = signal<{ furnaces: string[]; parts: string[] }>({
+  furnaces: [...DEMO_FURNACES],
+  parts: [...DEMO_PART_NUMBERS],
+});
 
 function remember(jobs: readonly Job[]): void {
   const furnaces = new Set(seen.value.furnaces);

@@ -42,12 +42,26 @@ export default function LogScreen() {
     <div class="screen log">
       <nav class="view-tabs" aria-label={t('app.log.tabs.label')}>
         {VIEWS.map((v) => (
-          <a key={v} href={v === 'list' ? hrefFor('log') : hrefFor('log', v)} aria-current={tab === v ? 'page' : undefined}>
+          <a
+            key={v}
+            href={v === 'list' ? hrefFor('log') : hrefFor('log', v)}
+            aria-current={tab === v ? 'page' : undefined}
+          >
             {t(`app.log.tabs.${v}`)}
           </a>
         ))}
       </nav>
-      {view === 'job' && jobId ? <DetailView id={jobId} /> : view === 'summary' ? <SummaryView /> : view === 'calibration' ? <CalibrationView /> : view === 'files' ? <FilesView /> : <ListView />}
+      {view === 'job' && jobId ? (
+        <DetailView id={jobId} />
+      ) : view === 'summary' ? (
+        <SummaryView />
+      ) : view === 'calibration' ? (
+        <CalibrationView />
+      ) : view === 'files' ? (
+        <FilesView />
+      ) : (
+        <ListView />
+      )}
       {persistence.value && (
         <p class="note log-persistence" data-persistence={persistence.value}>
           {t(`jobs.persist.${persistence.value}`)}

@@ -50,7 +50,12 @@ export function SummaryView() {
         <ResultList
           label={t('app.log.summary.loadsHeading')}
           rows={[
-            { key: 'furnaces', label: t('app.log.summary.furnaces'), value: summary.furnaces.join(', ') || NO_VALUE, text: true },
+            {
+              key: 'furnaces',
+              label: t('app.log.summary.furnaces'),
+              value: summary.furnaces.join(', ') || NO_VALUE,
+              text: true,
+            },
             ...JOB_STATUSES.map((s) => ({ key: s, label: t(`jobs.status.${s}`), value: String(summary.byStatus[s]) })),
           ]}
         />
@@ -78,8 +83,24 @@ export function SummaryView() {
             <ResultList
               label={t('app.log.summary.ecdHeading')}
               rows={[
-                { key: 'mean', label: t('app.log.summary.meanDifference'), value: show.depthChange(summary.meanDifferenceMm ?? Number.NaN), detail: t('app.log.summary.meanAbs', { pct: signedPercent(summary.meanAbsDifferencePct ?? Number.NaN, locale).replace(/^\+/u, '') }) },
-                ...(withBand > 0 ? [{ key: 'band', label: t('app.log.compare.band'), value: t('app.log.summary.inBand', { inside: inBand, count: withBand }), text: true }] : []),
+                {
+                  key: 'mean',
+                  label: t('app.log.summary.meanDifference'),
+                  value: show.depthChange(summary.meanDifferenceMm ?? Number.NaN),
+                  detail: t('app.log.summary.meanAbs', {
+                    pct: signedPercent(summary.meanAbsDifferencePct ?? Number.NaN, locale).replace(/^\+/u, ''),
+                  }),
+                },
+                ...(withBand > 0
+                  ? [
+                      {
+                        key: 'band',
+                        label: t('app.log.compare.band'),
+                        value: t('app.log.summary.inBand', { inside: inBand, count: withBand }),
+                        text: true,
+                      },
+                    ]
+                  : []),
               ]}
             />
             <PairsTable pairs={summary.ecdPairs} />
@@ -120,7 +141,11 @@ function PairsTable({ pairs }: { pairs: readonly EcdComparison[] }) {
               <td>
                 {show.depthChange(pair.differenceMm)}
                 <span class="pair-detail">{signedPercent(pair.differencePct, locale)}</span>
-                {pair.withinBand !== undefined && <span class={pair.withinBand ? 'pair-detail pair-in' : 'pair-detail pair-out'}>{pair.withinBand ? t('app.log.compare.inside') : t('app.log.compare.outside')}</span>}
+                {pair.withinBand !== undefined && (
+                  <span class={pair.withinBand ? 'pair-detail pair-in' : 'pair-detail pair-out'}>
+                    {pair.withinBand ? t('app.log.compare.inside') : t('app.log.compare.outside')}
+                  </span>
+                )}
               </td>
             </tr>
           ))}

@@ -20,19 +20,45 @@ export interface FurnaceCard {
 }
 
 /** A fit as the figures the settings keep. */
-export function storableFit(furnace: string, fit: CalibrationFit, model: DiffusivityModelId, fittedAt: string, apply: boolean): StoredCalibration {
-  return { furnace, factor: fit.factor, low: fit.interval95.low, high: fit.interval95.high, jobCount: fit.jobCount, rmsMm: fit.rmsResidualMm, fittedAt, model, apply };
+export function storableFit(
+  furnace: string,
+  fit: CalibrationFit,
+  model: DiffusivityModelId,
+  fittedAt: string,
+  apply: boolean,
+): StoredCalibration {
+  return {
+    furnace,
+    factor: fit.factor,
+    low: fit.interval95.low,
+    high: fit.interval95.high,
+    jobCount: fit.jobCount,
+    rmsMm: fit.rmsResidualMm,
+    fittedAt,
+    model,
+    apply,
+  };
 }
 
 const sameFit = (a: StoredCalibration, b: StoredCalibration) =>
-  a.model === b.model && a.jobCount === b.jobCount && Math.abs(a.factor - b.factor) <= 1e-9 * b.factor && Math.abs(a.low - b.low) <= 1e-9 * b.low;
+  a.model === b.model &&
+  a.jobCount === b.jobCount &&
+  Math.abs(a.factor - b.factor) <= 1e-9 * b.factor &&
+  Math.abs(a.low - b.low) <= 1e-9 * b.low;
 
-export function calibrationCards(jobs: readonly Job[], stored: readonly StoredCalibration[], model: DiffusivityModelId, now: Date): FurnaceCard[] {
+export function calibrationCards(
+  jobs: readonly Job[],
+  stored: readonly StoredCalibration[],
+  model: DiffusivityModelId,
+  now: Date,
+): FurnaceCard[] {
   const furnaces = [...new Set([...furnacesWithLabDepth(jobs), ...stored.map((s) => s.furnace)])].sort();
   return furnaces.map((furnace) => {
     const calibration = calibrateFurnace(jobs, furnace, { model });
     const kept = stored.find((s) => s.furnace === furnace);
-    const fresh = calibration.fit.ok ? storableFit(furnace, calibration.fit.value, model, now.toISOString(), kept?.apply ?? false) : undefined;
+    const fresh = calibration.fit.ok
+      ? storableFit(furnace, calibration.fit.value, model, now.toISOString(), kept?.apply ?? false)
+      : undefined;
     return {
       furnace,
       calibration,

@@ -17,7 +17,13 @@ function dateFormat(locale: string, options: Intl.DateTimeFormatOptions): Intl.D
 export function formatCalendarDate(isoDate: string, locale: string): string {
   const ms = Date.parse(`${isoDate}T00:00:00.000Z`);
   if (Number.isNaN(ms)) return NO_VALUE;
-  return dateFormat(locale, { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' }).format(ms);
+  return dateFormat(locale, {
+    weekday: 'short',
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+    timeZone: 'UTC',
+  }).format(ms);
 }
 
 /** A timestamp's local clock time, e.g. "14:32". */

@@ -30,7 +30,8 @@ let placedShift = currentShiftForm();
 
 export const filterForm = signal<FilterForm>(placedShift);
 
-const sameForm = (a: FilterForm, b: FilterForm) => (Object.keys(a) as (keyof FilterForm)[]).every((key) => a[key] === b[key]);
+const sameForm = (a: FilterForm, b: FilterForm) =>
+  (Object.keys(a) as (keyof FilterForm)[]).every((key) => a[key] === b[key]);
 
 /**
  * Called when the log is opened: a filter still showing the shift that was current when it was

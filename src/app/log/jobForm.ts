@@ -26,9 +26,25 @@ export interface JobForm {
   gradeName: string;
 }
 
-export const EMPTY_JOB_FORM: JobForm = { workOrder: '', partNumber: '', furnace: '', operator: '', status: 'planned', notes: '', gradeName: '' };
+export const EMPTY_JOB_FORM: JobForm = {
+  workOrder: '',
+  partNumber: '',
+  furnace: '',
+  operator: '',
+  status: 'planned',
+  notes: '',
+  gradeName: '',
+};
 
-export const JOB_FORM_FIELDS = ['workOrder', 'partNumber', 'furnace', 'operator', 'status', 'notes', 'gradeName'] as const;
+export const JOB_FORM_FIELDS = [
+  'workOrder',
+  'partNumber',
+  'furnace',
+  'operator',
+  'status',
+  'notes',
+  'gradeName',
+] as const;
 export type JobFormField = (typeof JOB_FORM_FIELDS)[number];
 
 export const TEXT_MAX: Record<JobFormField, number> = {
@@ -57,7 +73,15 @@ export function draftOf(form: JobForm, entry: LogEntry): Record<string, unknown>
 }
 
 export function formOfJob(job: Job): JobForm {
-  return { workOrder: job.workOrder, partNumber: job.partNumber, furnace: job.furnace, operator: job.operator, status: job.status, notes: job.notes, gradeName: job.steel.gradeName };
+  return {
+    workOrder: job.workOrder,
+    partNumber: job.partNumber,
+    furnace: job.furnace,
+    operator: job.operator,
+    status: job.status,
+    notes: job.notes,
+    gradeName: job.steel.gradeName,
+  };
 }
 
 /** Only the fields the person changed, so an edit made meanwhile in another tab to other fields is kept. */
@@ -85,13 +109,21 @@ export interface PlacedErrors {
 
 /** Fields the log requires that are still empty (checked before the store, for a plain "required"). */
 export function missingFields(form: JobForm, askGradeName: boolean): JobFormField[] {
-  const required: JobFormField[] = ['partNumber', 'furnace', 'operator', ...(askGradeName ? (['gradeName'] as const) : [])];
+  const required: JobFormField[] = [
+    'partNumber',
+    'furnace',
+    'operator',
+    ...(askGradeName ? (['gradeName'] as const) : []),
+  ];
   return required.filter((field) => form[field].trim() === '');
 }
 
 /** The "required" errors for `missing`, in the shape of a placed store error. */
 export function placeMissing(t: TFunction, missing: readonly JobFormField[]): PlacedErrors {
-  return { fields: Object.fromEntries(missing.map((field) => [field, t('app.log.fields.required')])), general: t('jobs.errors.record.invalid') };
+  return {
+    fields: Object.fromEntries(missing.map((field) => [field, t('app.log.fields.required')])),
+    general: t('jobs.errors.record.invalid'),
+  };
 }
 
 /**
@@ -99,7 +131,12 @@ export function placeMissing(t: TFunction, missing: readonly JobFormField[]): Pl
  * first part, mapped through `fieldOf`), named by the field's label (format examples are the
  * fields' own hints).
  */
-export function placeJobsError(t: TFunction, error: JobsError, labelOf: (field: string) => string | undefined, fieldOf: (path: string) => string = jobFieldOf): PlacedErrors {
+export function placeJobsError(
+  t: TFunction,
+  error: JobsError,
+  labelOf: (field: string) => string | undefined,
+  fieldOf: (path: string) => string = jobFieldOf,
+): PlacedErrors {
   const fields: Partial<Record<string, string>> = {};
   for (const issue of error.issues ?? []) {
     const field = fieldOf(issue.path);
@@ -109,5 +146,11 @@ export function placeJobsError(t: TFunction, error: JobsError, labelOf: (field: 
     fields[field] = t(key, { ...params, path: label });
   }
   const placedAll = (error.issues ?? []).every((issue) => labelOf(fieldOf(issue.path)) !== undefined);
-  return { fields, general: placedAll && error.issues?.length ? t(`jobs.errors.${error.code}`, error.params ?? {}) : describeJobsError(t, error) };
+  return {
+    fields,
+    general:
+      placedAll && error.issues?.length
+        ? t(`jobs.errors.${error.code}`, error.params ?? {})
+        : describeJobsError(t, error),
+  };
 }

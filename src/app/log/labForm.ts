@@ -22,7 +22,14 @@ export interface LabForm {
 export const LAB_FIELDS = ['ecd', 'surfaceHardness', 'coreHardness', 'surfaceCarbon', 'by', 'at'] as const;
 
 /** Schema names of the lab record → form fields. */
-const SCHEMA_FIELDS: Record<string, string> = { ecdMm: 'ecd', surfaceHardness: 'surfaceHardness', coreHardness: 'coreHardness', surfaceCarbonPct: 'surfaceCarbon', by: 'by', measuredAt: 'at' };
+const SCHEMA_FIELDS: Record<string, string> = {
+  ecdMm: 'ecd',
+  surfaceHardness: 'surfaceHardness',
+  coreHardness: 'coreHardness',
+  surfaceCarbonPct: 'surfaceCarbon',
+  by: 'by',
+  measuredAt: 'at',
+};
 
 /** The form field of a stored-record problem such as `lab.surfaceHardness`. */
 export function labFieldOf(path: string): string {
@@ -60,8 +67,12 @@ export function readLabForm(form: LabForm): { lab?: LabResult | undefined; error
   if (!measured) return { lab: undefined, errors: {} };
   const lab: LabResult = {
     ...(ecdMm === undefined ? {} : { ecdMm }),
-    ...(surface === undefined || !isHardnessUnit(form.surfaceUnit) ? {} : { surfaceHardness: { value: surface, unit: form.surfaceUnit } }),
-    ...(core === undefined || !isHardnessUnit(form.coreUnit) ? {} : { coreHardness: { value: core, unit: form.coreUnit } }),
+    ...(surface === undefined || !isHardnessUnit(form.surfaceUnit)
+      ? {}
+      : { surfaceHardness: { value: surface, unit: form.surfaceUnit } }),
+    ...(core === undefined || !isHardnessUnit(form.coreUnit)
+      ? {}
+      : { coreHardness: { value: core, unit: form.coreUnit } }),
     ...(surfaceCarbonPct === undefined ? {} : { surfaceCarbonPct }),
     ...(by ? { by } : {}),
     ...(form.at ? { measuredAt: form.at } : {}),

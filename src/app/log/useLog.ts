@@ -6,7 +6,10 @@ import { jobStore, logChanges } from './db';
 export type Loaded<T> = { state: 'loading' } | { state: 'ready'; value: T } | { state: 'failed'; error: JobsError };
 
 /** The latest answer of `read`; the previous answer stays on screen while a new one is read. */
-export function useLogRead<T>(read: (store: JobStore) => Promise<JobsResult<T>>, inputs: readonly unknown[]): Loaded<T> {
+export function useLogRead<T>(
+  read: (store: JobStore) => Promise<JobsResult<T>>,
+  inputs: readonly unknown[],
+): Loaded<T> {
   const [loaded, setLoaded] = useState<Loaded<T>>({ state: 'loading' });
   const changes = logChanges.value;
   useEffect(() => {
@@ -14,7 +17,8 @@ export function useLogRead<T>(read: (store: JobStore) => Promise<JobsResult<T>>,
     void (async () => {
       const store = await jobStore();
       const result = store.ok ? await read(store.value) : store;
-      if (current) setLoaded(result.ok ? { state: 'ready', value: result.value } : { state: 'failed', error: result.error });
+      if (current)
+        setLoaded(result.ok ? { state: 'ready', value: result.value } : { state: 'failed', error: result.error });
     })();
     return () => {
       current = false;

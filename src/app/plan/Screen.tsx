@@ -40,7 +40,17 @@ export default function PlanScreen() {
   const errors = outcome.errors;
   const result = outcome.result;
   const view = useMemo(() => (result ? planView(result, t, show) : undefined), [result, t, units]);
-  const logEntry = useMemo(() => (result?.plan.reachable ? cycleLogEntry({ recipe: result.plan.recipe, simulation: result.plan.predicted, calibration: result.calibration }) : undefined), [result]);
+  const logEntry = useMemo(
+    () =>
+      result?.plan.reachable
+        ? cycleLogEntry({
+            recipe: result.plan.recipe,
+            simulation: result.plan.predicted,
+            calibration: result.calibration,
+          })
+        : undefined,
+    [result],
+  );
   const formModel = isModelId(form.model) ? form.model : model.value;
   const betaPlaceholder = show.number(defaults.value.betaMPerS / 1e-7, 2);
   const openInEditor = () => {
@@ -51,7 +61,8 @@ export default function PlanScreen() {
       threshold: form.threshold,
       size: form.size,
       defaultBetaMPerS: defaults.value.betaMPerS,
-      labelOf: (label) => (label === 'boost' || label === 'diffuse' || label === 'hardening' ? t(`app.plan.steps.${label}`) : label),
+      labelOf: (label) =>
+        label === 'boost' || label === 'diffuse' || label === 'hardening' ? t(`app.plan.steps.${label}`) : label,
     });
     location.hash = hrefFor('cycle');
   };
@@ -60,44 +71,129 @@ export default function PlanScreen() {
     <div class="screen plan">
       <CycleTabs current="plan" />
       <h1 tabIndex={-1}>{t('app.plan.title')}</h1>
-      <Answer label={view ? view.answerLabel : t('app.common.noResult')} value={view?.answer} detail={view?.answerDetail} note={view?.answerNote} />
+      <Answer
+        label={view ? view.answerLabel : t('app.common.noResult')}
+        value={view?.answer}
+        detail={view?.answerDetail}
+        note={view?.answerNote}
+      />
 
       <section class="card" aria-labelledby="plan-targets">
         <h2 id="plan-targets">{t('app.plan.targetsHeading')}</h2>
         <fieldset class="plan-group plan-range">
           <legend>{t('app.plan.ecdTarget')}</legend>
           <div class="field-grid">
-            <NumberField id="plan-ecd-min" label={t('app.plan.atLeast')} unit={units.depth} value={form.ecdMin} onInput={(v) => patch(planForm, { ecdMin: v })} error={word(errors['targetEcdMm.min'])} />
-            <NumberField id="plan-ecd-max" label={t('app.plan.atMost')} unit={units.depth} value={form.ecdMax} onInput={(v) => patch(planForm, { ecdMax: v })} error={word(errors['targetEcdMm.max'])} />
+            <NumberField
+              id="plan-ecd-min"
+              label={t('app.plan.atLeast')}
+              unit={units.depth}
+              value={form.ecdMin}
+              onInput={(v) => patch(planForm, { ecdMin: v })}
+              error={word(errors['targetEcdMm.min'])}
+            />
+            <NumberField
+              id="plan-ecd-max"
+              label={t('app.plan.atMost')}
+              unit={units.depth}
+              value={form.ecdMax}
+              onInput={(v) => patch(planForm, { ecdMax: v })}
+              error={word(errors['targetEcdMm.max'])}
+            />
           </div>
         </fieldset>
         <fieldset class="plan-group plan-range">
           <legend>{t('app.plan.surfaceTarget')}</legend>
           <div class="field-grid">
-            <NumberField id="plan-surface-min" label={t('app.plan.atLeast')} unitLabel={UNIT_SYMBOLS.pctC} value={form.surfaceMin} onInput={(v) => patch(planForm, { surfaceMin: v })} error={word(errors['targetSurfaceCarbonPct.min'])} />
-            <NumberField id="plan-surface-max" label={t('app.plan.atMost')} unitLabel={UNIT_SYMBOLS.pctC} value={form.surfaceMax} onInput={(v) => patch(planForm, { surfaceMax: v })} error={word(errors['targetSurfaceCarbonPct.max'])} />
+            <NumberField
+              id="plan-surface-min"
+              label={t('app.plan.atLeast')}
+              unitLabel={UNIT_SYMBOLS.pctC}
+              value={form.surfaceMin}
+              onInput={(v) => patch(planForm, { surfaceMin: v })}
+              error={word(errors['targetSurfaceCarbonPct.min'])}
+            />
+            <NumberField
+              id="plan-surface-max"
+              label={t('app.plan.atMost')}
+              unitLabel={UNIT_SYMBOLS.pctC}
+              value={form.surfaceMax}
+              onInput={(v) => patch(planForm, { surfaceMax: v })}
+              error={word(errors['targetSurfaceCarbonPct.max'])}
+            />
           </div>
         </fieldset>
-        <ThresholdField id="plan-threshold" value={form.threshold} onInput={(v) => patch(planForm, { threshold: v })} error={word(errors.threshold)} show={show} />
+        <ThresholdField
+          id="plan-threshold"
+          value={form.threshold}
+          onInput={(v) => patch(planForm, { threshold: v })}
+          error={word(errors.threshold)}
+          show={show}
+        />
       </section>
 
       <section class="card" aria-labelledby="plan-steps">
         <h2 id="plan-steps">{t('app.plan.stepsHeading')}</h2>
-        <StepFields name="boost" step={form.boost} onChange={(boost) => patch(planForm, { boost })} errors={errors} betaPlaceholder={betaPlaceholder} ctx={ctx} />
-        <StepFields name="diffuse" step={form.diffuse} onChange={(diffuse) => patch(planForm, { diffuse })} errors={errors} betaPlaceholder={betaPlaceholder} ctx={ctx} />
-        <CheckField id="plan-hardening" label={t('app.plan.hardening')} checked={form.hardening} onChange={(hardening) => patch(planForm, { hardening })} />
+        <StepFields
+          name="boost"
+          step={form.boost}
+          onChange={(boost) => patch(planForm, { boost })}
+          errors={errors}
+          betaPlaceholder={betaPlaceholder}
+          ctx={ctx}
+        />
+        <StepFields
+          name="diffuse"
+          step={form.diffuse}
+          onChange={(diffuse) => patch(planForm, { diffuse })}
+          errors={errors}
+          betaPlaceholder={betaPlaceholder}
+          ctx={ctx}
+        />
+        <CheckField
+          id="plan-hardening"
+          label={t('app.plan.hardening')}
+          checked={form.hardening}
+          onChange={(hardening) => patch(planForm, { hardening })}
+        />
         {form.hardening && (
           <div class="field-grid">
-            <NumberField id="plan-hardening-temperature" label={t('app.fields.temperature')} unit={units.temperature} value={form.hardeningTemp} onInput={(v) => patch(planForm, { hardeningTemp: v })} error={word(errors['hardening.temperatureC'])} />
-            <NumberField id="plan-hardening-time" label={t('app.cycle.duration')} unit={units.time} value={form.hardeningTime} onInput={(v) => patch(planForm, { hardeningTime: v })} error={word(errors['hardening.timeH'])} />
+            <NumberField
+              id="plan-hardening-temperature"
+              label={t('app.fields.temperature')}
+              unit={units.temperature}
+              value={form.hardeningTemp}
+              onInput={(v) => patch(planForm, { hardeningTemp: v })}
+              error={word(errors['hardening.temperatureC'])}
+            />
+            <NumberField
+              id="plan-hardening-time"
+              label={t('app.cycle.duration')}
+              unit={units.time}
+              value={form.hardeningTime}
+              onInput={(v) => patch(planForm, { hardeningTime: v })}
+              error={word(errors['hardening.timeH'])}
+            />
           </div>
         )}
       </section>
 
       <section class="card" aria-labelledby="plan-part">
         <h2 id="plan-part">{t('app.cycle.partHeading')}</h2>
-        <ShapeFields idPrefix="plan" shape={form.shape} size={form.size} onChange={(changes) => patch(planForm, changes)} error={word(errors.size)} ctx={ctx} />
-        <SteelFields idPrefix="plan-steel" steel={form.steel} onChange={(s) => patch(planForm, { steel: s })} errors={errors} word={word} />
+        <ShapeFields
+          idPrefix="plan"
+          shape={form.shape}
+          size={form.size}
+          onChange={(changes) => patch(planForm, changes)}
+          error={word(errors.size)}
+          ctx={ctx}
+        />
+        <SteelFields
+          idPrefix="plan-steel"
+          steel={form.steel}
+          onChange={(s) => patch(planForm, { steel: s })}
+          errors={errors}
+          word={word}
+        />
         <ModelField id="plan-model" value={form.model} onChange={(v) => patch(planForm, { model: v })} ctx={ctx} />
         <FurnaceField id="plan-furnace" model={formModel} ctx={ctx} />
       </section>
@@ -120,10 +216,21 @@ export default function PlanScreen() {
       )}
 
       <ResultsCard id="plan-results" error={word(outcome.general)} view={view}>
-        <CycleBand id="plan-band" recipe={result?.plan.recipe} diffusivityFactor={result ? factorOf(result.calibration) : 1} ctx={ctx} />
+        <CycleBand
+          id="plan-band"
+          recipe={result?.plan.recipe}
+          diffusivityFactor={result ? factorOf(result.calibration) : 1}
+          ctx={ctx}
+        />
       </ResultsCard>
       <div class="plan-actions">
-        <button type="button" class="button button-primary button-wide" disabled={!result} onClick={openInEditor} aria-describedby="plan-open-hint">
+        <button
+          type="button"
+          class="button button-primary button-wide"
+          disabled={!result}
+          onClick={openInEditor}
+          aria-describedby="plan-open-hint"
+        >
           {t('app.plan.openInEditor')}
         </button>
         <p id="plan-open-hint" class="note">

@@ -22,9 +22,31 @@ export function StepFields({ name, step, onChange, errors, betaPlaceholder, ctx 
     <fieldset class="plan-group plan-step">
       <legend>{t(`app.plan.steps.${name}`)}</legend>
       <div class="field-grid">
-        <NumberField id={`${id}-temperature`} label={t('app.fields.temperature')} unit={units.temperature} value={step.temperature} onInput={(v) => onChange({ ...step, temperature: v })} error={err('temperatureC')} />
-        <NumberField id={`${id}-cp`} label={t('app.plan.potential')} unitLabel={UNIT_SYMBOLS.pctC} value={step.carbonPotential} onInput={(v) => onChange({ ...step, carbonPotential: v })} error={err('carbonPotentialPct')} />
-        <NumberField id={`${id}-beta`} label={t('app.cycle.beta')} unitLabel={UNIT_SYMBOLS.beta7} value={step.beta} placeholder={betaPlaceholder} onInput={(v) => onChange({ ...step, beta: v })} error={err('betaMPerS')} />
+        <NumberField
+          id={`${id}-temperature`}
+          label={t('app.fields.temperature')}
+          unit={units.temperature}
+          value={step.temperature}
+          onInput={(v) => onChange({ ...step, temperature: v })}
+          error={err('temperatureC')}
+        />
+        <NumberField
+          id={`${id}-cp`}
+          label={t('app.plan.potential')}
+          unitLabel={UNIT_SYMBOLS.pctC}
+          value={step.carbonPotential}
+          onInput={(v) => onChange({ ...step, carbonPotential: v })}
+          error={err('carbonPotentialPct')}
+        />
+        <NumberField
+          id={`${id}-beta`}
+          label={t('app.cycle.beta')}
+          unitLabel={UNIT_SYMBOLS.beta7}
+          value={step.beta}
+          placeholder={betaPlaceholder}
+          onInput={(v) => onChange({ ...step, beta: v })}
+          error={err('betaMPerS')}
+        />
       </div>
     </fieldset>
   );

@@ -21,7 +21,11 @@ export interface PlanOutcome {
 }
 
 /** Request field paths → form fields where they differ (other errors sit on the field of the same path). */
-const FIELD_MAP: Record<string, string> = { ...CYCLE_FIELD_MAP, targetEcdMm: 'targetEcdMm.max', targetSurfaceCarbonPct: 'targetSurfaceCarbonPct.max' };
+const FIELD_MAP: Record<string, string> = {
+  ...CYCLE_FIELD_MAP,
+  targetEcdMm: 'targetEcdMm.max',
+  targetSurfaceCarbonPct: 'targetSurfaceCarbonPct.max',
+};
 
 const STEP_FIELDS = ['temperatureC', 'carbonPotentialPct', 'betaMPerS'];
 
@@ -40,11 +44,18 @@ function readStep(step: PotentialStepForm, name: string, read: FieldReader, defa
   const temperatureC = read.value(readField(step.temperature, `${name}.temperatureC`, PHYSICS_UNITS.temperature));
   const carbonPotentialPct = read.value(readField(step.carbonPotential, `${name}.carbonPotentialPct`));
   const beta = read.value(readOptionalField(step.beta, `${name}.betaMPerS`));
-  return { temperatureC, carbonPotentialPct, betaMPerS: beta === undefined ? defaultBetaMPerS : beta * BETA_INPUT_SCALE };
+  return {
+    temperatureC,
+    carbonPotentialPct,
+    betaMPerS: beta === undefined ? defaultBetaMPerS : beta * BETA_INPUT_SCALE,
+  };
 }
 
 /** The `plan` request of the form (numbers still unchecked: physics checks ranges), or the fields it cannot read. */
-export function buildPlanRequest(form: PlanForm, settings: CycleDefaults): { request?: Record<string, unknown>; errors: FieldReader['errors'] } {
+export function buildPlanRequest(
+  form: PlanForm,
+  settings: CycleDefaults,
+): { request?: Record<string, unknown>; errors: FieldReader['errors'] } {
   const read = new FieldReader();
   const base = readBaseFields(form, settings, read);
   const boost = readStep(form.boost, 'boost', read, settings.betaMPerS);

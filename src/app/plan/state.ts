@@ -30,7 +30,11 @@ export interface PlanForm {
   surfaceMax: FieldText;
 }
 
-const potentialStep = (tempC: string, cp: string): PotentialStepForm => ({ temperature: field(tempC, 'C'), carbonPotential: field(cp), beta: field('') });
+const potentialStep = (tempC: string, cp: string): PotentialStepForm => ({
+  temperature: field(tempC, 'C'),
+  carbonPotential: field(cp),
+  beta: field(''),
+});
 
 /** Pinion KR-2231 of the demo scenario (SAE 8620, ECD 0.75–1.00 mm at 550 HV, surface 0.75–0.90 %C). */
 export const DEFAULT_PLAN_FORM: PlanForm = {

@@ -33,22 +33,45 @@ export function planView({ plan, request, calibration }: PlanOutcome, t: TFuncti
   const threshold = typeof request.thresholdCarbonPct === 'number' ? request.thresholdCarbonPct : Number.NaN;
   const range = plan.surfaceRangePct;
   const rows: ResultRow[] = [
-    ...(calibrated ? [{ key: 'calibration', label: t('app.calibration.label'), value: calibrated.sentence, text: true }] : []),
-    { key: 'status', label: t('app.plan.status'), value: plan.reachable ? t('app.plan.reachable') : t('app.plan.notReachable'), text: true },
+    ...(calibrated
+      ? [{ key: 'calibration', label: t('app.calibration.label'), value: calibrated.sentence, text: true }]
+      : []),
+    {
+      key: 'status',
+      label: t('app.plan.status'),
+      value: plan.reachable ? t('app.plan.reachable') : t('app.plan.notReachable'),
+      text: true,
+    },
     timeRow('boost', t('app.plan.boostTime'), plan.boostH, show),
     timeRow('diffuse', t('app.plan.diffuseTime'), plan.diffuseH, show),
     ...(plan.hardeningH > 0 ? [timeRow('hardening', t('app.plan.hardeningTime'), plan.hardeningH, show)] : []),
     timeRow('total', t('app.plan.totalTime'), plan.totalH, show, true),
-    { key: 'ecd', label: t('app.depth.ecd', { threshold: show.carbon(threshold) }), value: show.depth(plan.predicted.effectiveCaseDepthMm) },
+    {
+      key: 'ecd',
+      label: t('app.depth.ecd', { threshold: show.carbon(threshold) }),
+      value: show.depth(plan.predicted.effectiveCaseDepthMm),
+    },
     { key: 'surface', label: t('app.depth.surfaceCarbon'), value: show.carbon(plan.predicted.surfaceCarbonPct) },
     { key: 'totalCase', label: t('app.cycle.totalCase'), value: show.depth(plan.predicted.totalCaseDepthMm) },
-    ...(range ? [{ key: 'surfaceRange', label: t('app.plan.surfaceRange'), value: show.carbonRange(range.min, range.max), detail: t('app.plan.surfaceRangeDetail') }] : []),
+    ...(range
+      ? [
+          {
+            key: 'surfaceRange',
+            label: t('app.plan.surfaceRange'),
+            value: show.carbonRange(range.min, range.max),
+            detail: t('app.plan.surfaceRangeDetail'),
+          },
+        ]
+      : []),
   ];
   return {
     reachable: plan.reachable,
     answerLabel: plan.reachable ? t('app.plan.answerReachable') : t('app.plan.answerMissed'),
     answer: show.hoursMinutes(plan.totalH),
-    answerDetail: t('app.plan.answerDetail', { boost: show.hoursMinutes(plan.boostH), diffuse: show.hoursMinutes(plan.diffuseH) }),
+    answerDetail: t('app.plan.answerDetail', {
+      boost: show.hoursMinutes(plan.boostH),
+      diffuse: show.hoursMinutes(plan.diffuseH),
+    }),
     ...(calibrated?.short ? { answerNote: calibrated.short } : {}),
     rows,
     ...(plan.binding ? { binding: wordWarning(t, plan.binding, show) } : {}),

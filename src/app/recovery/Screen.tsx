@@ -19,10 +19,26 @@ export default function RecoveryScreen() {
   const r = outcome.result;
   const rows: ResultRow[] = r
     ? [
-        { key: 'extra', label: t('app.recovery.extraTime'), value: show.time(r.extraTimeH ?? 0), detail: show.hoursMinutes(r.extraTimeH ?? 0), main: true },
-        { key: 'equivalent', label: t('app.recovery.equivalentTime', { temperature: show.temperature(r.setTemperatureC) }), value: show.time(r.equivalentTimeH), detail: show.hoursMinutes(r.equivalentTimeH) },
+        {
+          key: 'extra',
+          label: t('app.recovery.extraTime'),
+          value: show.time(r.extraTimeH ?? 0),
+          detail: show.hoursMinutes(r.extraTimeH ?? 0),
+          main: true,
+        },
+        {
+          key: 'equivalent',
+          label: t('app.recovery.equivalentTime', { temperature: show.temperature(r.setTemperatureC) }),
+          value: show.time(r.equivalentTimeH),
+          detail: show.hoursMinutes(r.equivalentTimeH),
+        },
         { key: 'elapsed', label: t('app.recovery.elapsed'), value: show.time(r.elapsedH) },
-        { key: 'lost', label: r.lostTimeH >= 0 ? t('app.recovery.lostTime') : t('app.recovery.gainedTime'), value: show.time(Math.abs(r.lostTimeH)), detail: show.hoursMinutes(Math.abs(r.lostTimeH)) },
+        {
+          key: 'lost',
+          label: r.lostTimeH >= 0 ? t('app.recovery.lostTime') : t('app.recovery.gainedTime'),
+          value: show.time(Math.abs(r.lostTimeH)),
+          detail: show.hoursMinutes(Math.abs(r.lostTimeH)),
+        },
       ]
     : [];
   const note = r ? recoveryNote(r, t, show) : undefined;
@@ -32,14 +48,32 @@ export default function RecoveryScreen() {
       <h1 tabIndex={-1}>{t('app.recovery.title')}</h1>
       <p class="note">{t('app.recovery.intro')}</p>
       <div class="answer" aria-live="polite">
-        <span class="answer-label">{r ? t('app.recovery.answerLabel', { temperature: show.temperature(r.setTemperatureC) }) : t('app.common.noResult')}</span>
+        <span class="answer-label">
+          {r
+            ? t('app.recovery.answerLabel', { temperature: show.temperature(r.setTemperatureC) })
+            : t('app.common.noResult')}
+        </span>
         <span class="answer-value">{r ? show.hoursMinutes(r.extraTimeH ?? 0) : NO_VALUE}</span>
       </div>
       <section class="card" aria-labelledby="recovery-plan">
         <h2 id="recovery-plan">{t('app.recovery.planHeading')}</h2>
         <div class="field-grid">
-          <NumberField id="recovery-set" label={t('app.recovery.setTemperature')} unit={units.temperature} value={form.setTemperature} onInput={(v) => patch(recoveryForm, { setTemperature: v })} error={word(outcome.errors.setTemperatureC)} />
-          <NumberField id="recovery-required" label={t('app.recovery.requiredTime')} unit={units.time} value={form.requiredTime} onInput={(v) => patch(recoveryForm, { requiredTime: v })} error={word(outcome.errors.requiredTimeH)} />
+          <NumberField
+            id="recovery-set"
+            label={t('app.recovery.setTemperature')}
+            unit={units.temperature}
+            value={form.setTemperature}
+            onInput={(v) => patch(recoveryForm, { setTemperature: v })}
+            error={word(outcome.errors.setTemperatureC)}
+          />
+          <NumberField
+            id="recovery-required"
+            label={t('app.recovery.requiredTime')}
+            unit={units.time}
+            value={form.requiredTime}
+            onInput={(v) => patch(recoveryForm, { requiredTime: v })}
+            error={word(outcome.errors.requiredTimeH)}
+          />
         </div>
       </section>
       <section class="card" aria-labelledby="recovery-readings">
@@ -57,16 +91,44 @@ export default function RecoveryScreen() {
               <span class="reading-number" aria-hidden="true">
                 {i + 1}
               </span>
-              <NumberField compact hideLabel id={`reading-${i}-time`} label={t('app.recovery.readingTime', { n: i + 1 })} unit={units.time} value={reading.time} onInput={(v) => (recoveryForm.value = setReading(form, i, { time: v }))} error={word(outcome.errors[`history.${i}.timeH`])} />
-              <NumberField compact hideLabel id={`reading-${i}-temperature`} label={t('app.recovery.readingTemperature', { n: i + 1 })} unit={units.temperature} value={reading.temperature} onInput={(v) => (recoveryForm.value = setReading(form, i, { temperature: v }))} error={word(outcome.errors[`history.${i}.temperatureC`])} />
-              <button type="button" class="button reading-remove" aria-label={t('app.recovery.removeReading', { n: i + 1 })} onClick={() => (recoveryForm.value = removeReading(form, i))}>
+              <NumberField
+                compact
+                hideLabel
+                id={`reading-${i}-time`}
+                label={t('app.recovery.readingTime', { n: i + 1 })}
+                unit={units.time}
+                value={reading.time}
+                onInput={(v) => (recoveryForm.value = setReading(form, i, { time: v }))}
+                error={word(outcome.errors[`history.${i}.timeH`])}
+              />
+              <NumberField
+                compact
+                hideLabel
+                id={`reading-${i}-temperature`}
+                label={t('app.recovery.readingTemperature', { n: i + 1 })}
+                unit={units.temperature}
+                value={reading.temperature}
+                onInput={(v) => (recoveryForm.value = setReading(form, i, { temperature: v }))}
+                error={word(outcome.errors[`history.${i}.temperatureC`])}
+              />
+              <button
+                type="button"
+                class="button reading-remove"
+                aria-label={t('app.recovery.removeReading', { n: i + 1 })}
+                onClick={() => (recoveryForm.value = removeReading(form, i))}
+              >
                 <Icon name="remove" />
               </button>
             </li>
           ))}
         </ol>
         <ErrorNote message={generalReadingsError} />
-        <button type="button" class="button" disabled={form.readings.length >= MAX_READINGS} onClick={() => (recoveryForm.value = addReading(form))}>
+        <button
+          type="button"
+          class="button"
+          disabled={form.readings.length >= MAX_READINGS}
+          onClick={() => (recoveryForm.value = addReading(form))}
+        >
           {t('app.recovery.addReading')}
         </button>
       </section>

@@ -30,7 +30,9 @@ export const MAX_READINGS = 48;
 export function addReading(form: RecoveryForm): RecoveryForm {
   if (form.readings.length >= MAX_READINGS) return form;
   const last = form.readings[form.readings.length - 1];
-  const next: Reading = last ? { time: { ...last.time, text: '' }, temperature: { ...last.temperature } } : { time: field('0', 'h'), temperature: field('', 'C') };
+  const next: Reading = last
+    ? { time: { ...last.time, text: '' }, temperature: { ...last.temperature } }
+    : { time: field('0', 'h'), temperature: field('', 'C') };
   return { ...form, readings: [...form.readings, next] };
 }
 

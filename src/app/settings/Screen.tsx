@@ -14,7 +14,16 @@ import { temperatureDifferenceText } from '../ui/fieldText';
 import { UNIT_CHOICES, UNIT_SYSTEMS, type DisplayQuantity, type UnitSystem } from '../ui/units';
 import { hrefFor } from '../shell/route';
 import { calibrations } from './calibration';
-import { readBeta, readBetaRange, readMargin, readThreshold, readTolerance, setLanguage, settings, THEMES } from './state';
+import {
+  readBeta,
+  readBetaRange,
+  readMargin,
+  readThreshold,
+  readTolerance,
+  setLanguage,
+  settings,
+  THEMES,
+} from './state';
 import './screen.css';
 
 /** Each language names itself, so it can be found whatever the current language. */
@@ -25,17 +34,20 @@ export default function SettingsScreen() {
   const s = settings.value;
   const tolerance = readTolerance(s.temperatureTolerance);
   const betaRange = readBetaRange(s.betaRangeMin, s.betaRangeMax);
-  const betaRangeError = (field: string) => (!betaRange.ok && betaRange.error.field === field ? word(betaRange.error) : undefined);
+  const betaRangeError = (field: string) =>
+    !betaRange.ok && betaRange.error.field === field ? word(betaRange.error) : undefined;
   const beta = readBeta(s.beta);
   const threshold = readThreshold(s.ecdThreshold);
   const margin = readMargin(s.totalCaseMargin);
-  const marginError = margin === 'notPositive' ? t('app.settings.marginNotPositive') : margin.ok ? undefined : word(margin.error);
+  const marginError =
+    margin === 'notPositive' ? t('app.settings.marginNotPositive') : margin.ok ? undefined : word(margin.error);
   const unitChoices = (q: DisplayQuantity) => [
     { value: 'auto', label: t('app.settings.followSystem') },
     ...UNIT_CHOICES[q].map((u) => ({ value: u, label: UNIT_SYMBOLS[u] ?? u })),
   ];
   const shiftsValid = parseShiftConfig(s.shiftStarts).ok;
-  const setOverride = (q: DisplayQuantity, value: string) => patch(settings, { overrides: { ...s.overrides, [q]: value } });
+  const setOverride = (q: DisplayQuantity, value: string) =>
+    patch(settings, { overrides: { ...s.overrides, [q]: value } });
 
   return (
     <div class="screen settings">
@@ -60,7 +72,14 @@ export default function SettingsScreen() {
           onChange={(v) => patch(settings, { unitSystem: v as UnitSystem })}
         />
         {(Object.keys(UNIT_CHOICES) as DisplayQuantity[]).map((q) => (
-          <Segmented key={q} name={`settings-unit-${q}`} legend={t(`app.settings.quantity.${q}`)} value={s.overrides[q]} choices={unitChoices(q)} onChange={(v) => setOverride(q, v)} />
+          <Segmented
+            key={q}
+            name={`settings-unit-${q}`}
+            legend={t(`app.settings.quantity.${q}`)}
+            value={s.overrides[q]}
+            choices={unitChoices(q)}
+            onChange={(v) => setOverride(q, v)}
+          />
         ))}
         <p class="note">{t('app.settings.overrideHint')}</p>
       </section>
@@ -115,8 +134,22 @@ export default function SettingsScreen() {
           error={tolerance.ok ? undefined : word(tolerance.error)}
           hint={t('app.settings.toleranceHint')}
         />
-        <NumberField id="settings-beta-min" label={t('app.settings.betaRangeMin')} unitLabel={UNIT_SYMBOLS.beta7} value={s.betaRangeMin} onInput={(v) => patch(settings, { betaRangeMin: v })} error={betaRangeError('betaRangeMin')} />
-        <NumberField id="settings-beta-max" label={t('app.settings.betaRangeMax')} unitLabel={UNIT_SYMBOLS.beta7} value={s.betaRangeMax} onInput={(v) => patch(settings, { betaRangeMax: v })} error={betaRangeError('betaRangeMax')} />
+        <NumberField
+          id="settings-beta-min"
+          label={t('app.settings.betaRangeMin')}
+          unitLabel={UNIT_SYMBOLS.beta7}
+          value={s.betaRangeMin}
+          onInput={(v) => patch(settings, { betaRangeMin: v })}
+          error={betaRangeError('betaRangeMin')}
+        />
+        <NumberField
+          id="settings-beta-max"
+          label={t('app.settings.betaRangeMax')}
+          unitLabel={UNIT_SYMBOLS.beta7}
+          value={s.betaRangeMax}
+          onInput={(v) => patch(settings, { betaRangeMax: v })}
+          error={betaRangeError('betaRangeMax')}
+        />
         <p class="note">{t('app.settings.betaRangeHint')}</p>
       </section>
       <section class="card" aria-labelledby="settings-calibration">
@@ -127,7 +160,8 @@ export default function SettingsScreen() {
           <ul class="settings-calibrations">
             {calibrations.value.map((c) => (
               <li key={c.furnace}>
-                {t('app.calibration.furnaceHeading', { furnace: c.furnace })}: {t('app.calibration.factorValue', { factor: show.number(c.factor, 2) })} ·{' '}
+                {t('app.calibration.furnaceHeading', { furnace: c.furnace })}:{' '}
+                {t('app.calibration.factorValue', { factor: show.number(c.factor, 2) })} ·{' '}
                 {c.apply ? t('app.settings.calibrationOn') : t('app.settings.calibrationOff')}
               </li>
             ))}

@@ -28,7 +28,8 @@ export interface StoredCalibration {
 /** Longest furnace name, characters (the log's limit for short text). */
 const FURNACE_MAX_LENGTH = 40;
 
-const finiteIn = (x: unknown, min: number, max: number): x is number => typeof x === 'number' && Number.isFinite(x) && x >= min && x <= max;
+const finiteIn = (x: unknown, min: number, max: number): x is number =>
+  typeof x === 'number' && Number.isFinite(x) && x >= min && x <= max;
 
 function isCalibration(raw: unknown): raw is StoredCalibration {
   if (typeof raw !== 'object' || raw === null) return false;
@@ -85,7 +86,11 @@ export type CalibrationState =
   | { kind: 'off' | 'otherModel' | 'applied'; furnace: string; calibration: StoredCalibration };
 
 /** What the chosen furnace's calibration means for a calculation with `model`. */
-export function calibrationState(list: readonly StoredCalibration[], furnace: string, model: DiffusivityModelId): CalibrationState {
+export function calibrationState(
+  list: readonly StoredCalibration[],
+  furnace: string,
+  model: DiffusivityModelId,
+): CalibrationState {
   if (furnace === '') return { kind: 'none' };
   const calibration = list.find((c) => c.furnace === furnace);
   if (!calibration) return { kind: 'uncalibrated', furnace };

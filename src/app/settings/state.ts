@@ -75,9 +75,13 @@ export async function setLanguage(lng: Language): Promise<void> {
 
 export const units = computed(() => displayUnits(settings.value.unitSystem, settings.value.overrides));
 
-export const model = computed<DiffusivityModelId>(() => (isModelId(settings.value.model) ? settings.value.model : DEFAULT_MODEL));
+export const model = computed<DiffusivityModelId>(() =>
+  isModelId(settings.value.model) ? settings.value.model : DEFAULT_MODEL,
+);
 
-export const theme = computed<Theme>(() => ((THEMES as readonly string[]).includes(settings.value.theme) ? (settings.value.theme as Theme) : 'dark'));
+export const theme = computed<Theme>(() =>
+  (THEMES as readonly string[]).includes(settings.value.theme) ? (settings.value.theme as Theme) : 'dark',
+);
 
 /** Default β in m/s, validated. */
 export function readBeta(value: FieldText): Result<number> {
@@ -113,7 +117,9 @@ export function readBetaRange(min: FieldText, max: FieldText): Result<Range> {
   if (!high.ok) return high;
   const highM = checkBeta(high.value * BETA_INPUT_SCALE, 'betaRangeMax');
   if (!highM.ok) return highM;
-  return lowM.value <= highM.value ? { ok: true, value: { min: lowM.value, max: highM.value } } : fail('range.minAboveMax', 'betaRangeMax', { min: low.value, max: high.value });
+  return lowM.value <= highM.value
+    ? { ok: true, value: { min: lowM.value, max: highM.value } }
+    : fail('range.minAboveMax', 'betaRangeMax', { min: low.value, max: high.value });
 }
 
 /** Settings read for use: invalid entries fall back to the defaults (and are flagged on the settings screen). */

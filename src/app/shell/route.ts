@@ -14,13 +14,15 @@ export function screenFromHash(hash: string): ScreenId {
 /** The parts of the route after the screen id (#/log/job/abc → ['job', 'abc']), decoded. */
 export function subPathFromHash(hash: string): string[] {
   const parts = hash.replace(/^#\/?/, '').split('?')[0]!.split('/').slice(1);
-  return parts.filter((p) => p !== '').map((p) => {
-    try {
-      return decodeURIComponent(p);
-    } catch {
-      return p;
-    }
-  });
+  return parts
+    .filter((p) => p !== '')
+    .map((p) => {
+      try {
+        return decodeURIComponent(p);
+      } catch {
+        return p;
+      }
+    });
 }
 
 export const hrefFor = (id: ScreenId, ...sub: string[]) => `#/${[id, ...sub.map(encodeURIComponent)].join('/')}`;

@@ -21,7 +21,14 @@ export const LOADERS: Record<Exclude<ScreenId, 'depth'>, Loader> = {
 export const FIRST_SCREEN = DepthScreen;
 
 /** Screens in the bottom navigation, in order (safety sits in the header). */
-export const NAV_SCREENS = ['depth', 'cycle', 'recovery', 'log', 'convert', 'settings'] as const satisfies readonly ScreenId[];
+export const NAV_SCREENS = [
+  'depth',
+  'cycle',
+  'recovery',
+  'log',
+  'convert',
+  'settings',
+] as const satisfies readonly ScreenId[];
 
 /** Screens reached from a navigation item rather than having one: planning is the cycle item's second view. */
 const NAV_ITEM_OF: Partial<Record<ScreenId, (typeof NAV_SCREENS)[number]>> = { plan: 'cycle' };

@@ -19,7 +19,12 @@ export function ChoiceField({ id, label, value, choices, onChange, hint, compact
     <div class={compact ? 'field field-compact' : 'field'}>
       <label for={id}>{label}</label>
       <div class="field-box">
-        <select id={id} value={value} aria-describedby={hint ? `${id}-hint` : undefined} onChange={(e) => onChange(e.currentTarget.value)}>
+        <select
+          id={id}
+          value={value}
+          aria-describedby={hint ? `${id}-hint` : undefined}
+          onChange={(e) => onChange(e.currentTarget.value)}
+        >
           {choices.map((c) => (
             <option key={c.value} value={c.value}>
               {c.label}

@@ -26,12 +26,22 @@ export function CycleBand({ id, recipe, diffusivityFactor, ctx }: CycleBandProps
   const [open, setOpen] = useState(false);
   const { temperatureToleranceC, betaRangeMPerS } = defaults.value;
   const band = useMemo(
-    () => (open && recipe ? timed('band', () => cycleDepthBand(recipe, { diffusivityFactor, temperatureToleranceC, betaRangeMPerS })) : undefined),
+    () =>
+      open && recipe
+        ? timed('band', () => cycleDepthBand(recipe, { diffusivityFactor, temperatureToleranceC, betaRangeMPerS }))
+        : undefined,
     [open, recipe, diffusivityFactor, temperatureToleranceC, betaRangeMPerS.min, betaRangeMPerS.max],
   );
   return (
     <div class="cycle-band" id={id}>
-      <button type="button" class="button button-wide" aria-expanded={open} aria-controls={`${id}-body`} disabled={!recipe} onClick={() => setOpen(!open)}>
+      <button
+        type="button"
+        class="button button-wide"
+        aria-expanded={open}
+        aria-controls={`${id}-body`}
+        disabled={!recipe}
+        onClick={() => setOpen(!open)}
+      >
         {open ? t('app.band.hide') : t('app.band.show')}
       </button>
       <div id={`${id}-body`} class="cycle-band-body" hidden={!open}>

@@ -13,8 +13,20 @@ export function FurnaceField({ id, model, ctx }: { id: string; model: Diffusivit
   const names = list.map((c) => c.furnace);
   const choices = [
     { value: '', label: t('app.calibration.noFurnace') },
-    ...(furnace !== '' && !names.includes(furnace) ? [furnace] : []).concat(names).map((name) => ({ value: name, label: name })),
+    ...(furnace !== '' && !names.includes(furnace) ? [furnace] : [])
+      .concat(names)
+      .map((name) => ({ value: name, label: name })),
   ];
-  const hint = calibrationWords(calibrationState(list, furnace, model), t, show)?.sentence ?? t('app.calibration.chooseHint');
-  return <ChoiceField id={id} label={t('app.calibration.furnace')} value={furnace} choices={choices} onChange={(v) => (chosenFurnace.value = v)} hint={hint} />;
+  const hint =
+    calibrationWords(calibrationState(list, furnace, model), t, show)?.sentence ?? t('app.calibration.chooseHint');
+  return (
+    <ChoiceField
+      id={id}
+      label={t('app.calibration.furnace')}
+      value={furnace}
+      choices={choices}
+      onChange={(v) => (chosenFurnace.value = v)}
+      hint={hint}
+    />
+  );
 }

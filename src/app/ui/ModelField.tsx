@@ -4,7 +4,17 @@ import { model } from '../settings/state';
 import { ChoiceField } from './ChoiceField';
 import type { ScreenContext } from './screenContext';
 
-export function ModelField({ id, value, onChange, ctx }: { id: string; value: string; onChange: (value: string) => void; ctx: ScreenContext }) {
+export function ModelField({
+  id,
+  value,
+  onChange,
+  ctx,
+}: {
+  id: string;
+  value: string;
+  onChange: (value: string) => void;
+  ctx: ScreenContext;
+}) {
   const { t } = ctx;
   const choices = [
     { value: '', label: t('app.cycle.modelFromSettings', { model: t(`app.models.${model.value}`) }) },

@@ -20,7 +20,19 @@ export interface NumberFieldProps {
   hideLabel?: boolean;
 }
 
-export function NumberField({ id, label, value, unit = '', unitLabel, onInput, error, hint, placeholder, compact, hideLabel }: NumberFieldProps) {
+export function NumberField({
+  id,
+  label,
+  value,
+  unit = '',
+  unitLabel,
+  onInput,
+  error,
+  hint,
+  placeholder,
+  compact,
+  hideLabel,
+}: NumberFieldProps) {
   const shown = displayText(value, unit, language.value);
   const symbol = unitLabel ?? (unit ? (UNIT_SYMBOLS[unit] ?? unit) : '');
   return (

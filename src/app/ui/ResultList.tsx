@@ -13,7 +13,11 @@ export function ResultList({ rows, label }: { rows: readonly ResultRow[]; label:
   return (
     <dl class="results" aria-label={label}>
       {rows.map((row) => (
-        <div key={row.key} class={['result', row.main ? 'result-main' : '', row.text ? 'result-text' : ''].filter(Boolean).join(' ')} data-result={row.key}>
+        <div
+          key={row.key}
+          class={['result', row.main ? 'result-main' : '', row.text ? 'result-text' : ''].filter(Boolean).join(' ')}
+          data-result={row.key}
+        >
           <dt>{row.label}</dt>
           <dd>
             <span class="result-value">{row.value}</span>

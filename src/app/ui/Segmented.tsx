@@ -20,7 +20,13 @@ export function Segmented({ name, legend, value, choices, onChange, wrap, hideLe
       <div class="segmented-options">
         {choices.map((c) => (
           <label key={c.value} class={c.value === value ? 'segment segment-on' : 'segment'}>
-            <input type="radio" name={name} value={c.value} checked={c.value === value} onChange={() => onChange(c.value)} />
+            <input
+              type="radio"
+              name={name}
+              value={c.value}
+              checked={c.value === value}
+              onChange={() => onChange(c.value)}
+            />
             <span>{c.label}</span>
           </label>
         ))}

@@ -18,7 +18,13 @@ export function ShapeFields({ idPrefix, shape, size, onChange, error, ctx }: Sha
   const { t, units } = ctx;
   return (
     <>
-      <ChoiceField id={`${idPrefix}-shape`} label={t('app.cycle.shape')} value={shape} choices={SHAPES.map((s) => ({ value: s, label: t(`app.cycle.shapes.${s}`) }))} onChange={(v) => onChange({ shape: v })} />
+      <ChoiceField
+        id={`${idPrefix}-shape`}
+        label={t('app.cycle.shape')}
+        value={shape}
+        choices={SHAPES.map((s) => ({ value: s, label: t(`app.cycle.shapes.${s}`) }))}
+        onChange={(v) => onChange({ shape: v })}
+      />
       {(shape === 'plate' || shape === 'bar') && (
         <NumberField
           id={`${idPrefix}-size`}

@@ -19,7 +19,19 @@ export interface TextFieldProps {
   children?: ComponentChildren;
 }
 
-export function TextField({ id, label, value, onInput, placeholder, maxLength = 40, type = 'text', hint, error, autoCapitalize, children }: TextFieldProps) {
+export function TextField({
+  id,
+  label,
+  value,
+  onInput,
+  placeholder,
+  maxLength = 40,
+  type = 'text',
+  hint,
+  error,
+  autoCapitalize,
+  children,
+}: TextFieldProps) {
   return (
     <div class="field">
       <label for={id}>{label}</label>
@@ -46,7 +58,15 @@ export function TextField({ id, label, value, onInput, placeholder, maxLength = 
 }
 
 /** Several lines of free text (notes); kept exactly as written. */
-export function TextAreaField({ id, label, value, onInput, maxLength, hint, error }: Omit<TextFieldProps, 'type' | 'placeholder' | 'children' | 'autoCapitalize'>) {
+export function TextAreaField({
+  id,
+  label,
+  value,
+  onInput,
+  maxLength,
+  hint,
+  error,
+}: Omit<TextFieldProps, 'type' | 'placeholder' | 'children' | 'autoCapitalize'>) {
   return (
     <div class="field">
       <label for={id}>{label}</label>
@@ -67,7 +87,17 @@ export function TextAreaField({ id, label, value, onInput, maxLength, hint, erro
 }
 
 /** A large checkbox with its label. */
-export function CheckField({ id, label, checked, onChange }: { id: string; label: string; checked: boolean; onChange: (checked: boolean) => void }) {
+export function CheckField({
+  id,
+  label,
+  checked,
+  onChange,
+}: {
+  id: string;
+  label: string;
+  checked: boolean;
+  onChange: (checked: boolean) => void;
+}) {
   return (
     <label class="check" for={id}>
       <input id={id} type="checkbox" checked={checked} onChange={(e) => onChange(e.currentTarget.checked)} />
@@ -77,12 +107,28 @@ export function CheckField({ id, label, checked, onChange }: { id: string; label
 }
 
 /** One-tap values under a field (the plant's furnaces, its usual parts). */
-export function QuickPicks({ label, values, current, onPick }: { label: string; values: readonly string[]; current: string; onPick: (value: string) => void }) {
+export function QuickPicks({
+  label,
+  values,
+  current,
+  onPick,
+}: {
+  label: string;
+  values: readonly string[];
+  current: string;
+  onPick: (value: string) => void;
+}) {
   if (values.length === 0) return null;
   return (
     <div class="quick-picks" role="group" aria-label={label}>
       {values.map((value) => (
-        <button key={value} type="button" class="button quick-pick" aria-pressed={value === current ? 'true' : 'false'} onClick={() => onPick(value)}>
+        <button
+          key={value}
+          type="button"
+          class="button quick-pick"
+          aria-pressed={value === current ? 'true' : 'false'}
+          onClick={() => onPick(value)}
+        >
           {value}
         </button>
       ))}

@@ -7,8 +7,16 @@ import type { Show } from './show';
 export function bandRow(band: DepthBand, t: TFunction, show: Show): ResultRow {
   const parts = [
     t('app.band.models', { range: show.depthRange(band.models.min, band.models.max) }),
-    t('app.band.temperature', { tolerance: show.temperatureDifference(band.temperatureToleranceC), range: show.depthRange(band.temperature.min, band.temperature.max) }),
+    t('app.band.temperature', {
+      tolerance: show.temperatureDifference(band.temperatureToleranceC),
+      range: show.depthRange(band.temperature.min, band.temperature.max),
+    }),
     ...(band.beta ? [t('app.band.beta', { range: show.depthRange(band.beta.min, band.beta.max) })] : []),
   ];
-  return { key: 'band', label: t('app.band.label'), value: show.depthRange(band.minMm, band.maxMm), detail: parts.join(' · ') };
+  return {
+    key: 'band',
+    label: t('app.band.label'),
+    value: show.depthRange(band.minMm, band.maxMm),
+    detail: parts.join(' · '),
+  };
 }

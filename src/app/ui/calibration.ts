@@ -16,10 +16,17 @@ export function calibrationWords(state: CalibrationState, t: TFunction, show: Sh
   if (state.kind === 'uncalibrated') return { sentence: t('app.calibration.notFitted', { furnace }) };
   const c = state.calibration;
   if (state.kind === 'off') return { sentence: t('app.calibration.off', { furnace }) };
-  if (state.kind === 'otherModel') return { sentence: t('app.calibration.otherModel', { furnace, model: t(`app.models.${c.model}`) }) };
+  if (state.kind === 'otherModel')
+    return { sentence: t('app.calibration.otherModel', { furnace, model: t(`app.models.${c.model}`) }) };
   const factor = show.number(c.factor, 2);
   return {
-    sentence: t('app.calibration.applied', { furnace, factor, low: show.number(c.low, 2), high: show.number(c.high, 2), count: c.jobCount }),
+    sentence: t('app.calibration.applied', {
+      furnace,
+      factor,
+      low: show.number(c.low, 2),
+      high: show.number(c.high, 2),
+      count: c.jobCount,
+    }),
     short: t('app.calibration.short', { furnace, factor }),
   };
 }

@@ -10,7 +10,9 @@ import { formatQuantity } from './format';
 import type { DisplayUnits } from './units';
 
 /** Error codes whose params are in °C / mm / h, and which params they are. */
-const UNIT_PARAMS: Partial<Record<InputError['code'], { quantity: keyof DisplayUnits; physicsUnit: string; params: string[] }>> = {
+const UNIT_PARAMS: Partial<
+  Record<InputError['code'], { quantity: keyof DisplayUnits; physicsUnit: string; params: string[] }>
+> = {
   'temperature.outOfRange': { quantity: 'temperature', physicsUnit: 'C', params: ['value', 'min', 'max'] },
   'solve.temperatureBelowRange': { quantity: 'temperature', physicsUnit: 'C', params: ['minC', 'maxC'] },
   'solve.temperatureAboveRange': { quantity: 'temperature', physicsUnit: 'C', params: ['minC', 'maxC'] },

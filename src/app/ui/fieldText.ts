@@ -43,12 +43,16 @@ const isTemperatureUnit = (unit: string): unit is 'C' | 'F' => unit === 'C' || u
 export function readTemperatureDifferenceC(value: FieldText, name: string): Result<number> {
   const parsed = parseNumber(value.text);
   if (!parsed.ok) return fail(parsed.error.code, name, parsed.error.params);
-  return isTemperatureUnit(value.unit) ? { ok: true, value: convertTemperatureDifference(parsed.value, value.unit, 'C') } : parsed;
+  return isTemperatureUnit(value.unit)
+    ? { ok: true, value: convertTemperatureDifference(parsed.value, value.unit, 'C') }
+    : parsed;
 }
 
 /** The text of a temperature difference shown in `displayUnit`: as typed, or converted as a difference. */
 export function temperatureDifferenceText(value: FieldText, displayUnit: 'C' | 'F', locale: string): string {
   if (!isTemperatureUnit(value.unit) || value.unit === displayUnit) return value.text;
   const parsed = parseNumber(value.text);
-  return parsed.ok ? formatInput(convertTemperatureDifference(parsed.value, value.unit, displayUnit), displayUnit, locale) : value.text;
+  return parsed.ok
+    ? formatInput(convertTemperatureDifference(parsed.value, value.unit, displayUnit), displayUnit, locale)
+    : value.text;
 }

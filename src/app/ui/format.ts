@@ -68,14 +68,22 @@ function numberFormat(locale: string, digits: number, grouping: boolean): Intl.N
   const key = `${locale}|${digits}|${grouping}`;
   let nf = cache.get(key);
   if (!nf) {
-    nf = new Intl.NumberFormat(locale, { maximumFractionDigits: digits, minimumFractionDigits: digits, useGrouping: grouping });
+    nf = new Intl.NumberFormat(locale, {
+      maximumFractionDigits: digits,
+      minimumFractionDigits: digits,
+      useGrouping: grouping,
+    });
     cache.set(key, nf);
   }
   return nf;
 }
 
 /** A finite number in the locale's notation; NO_VALUE otherwise. */
-export function formatNumber(value: number, locale: string, { digits = 2, grouping = true }: NumberOptions = {}): string {
+export function formatNumber(
+  value: number,
+  locale: string,
+  { digits = 2, grouping = true }: NumberOptions = {},
+): string {
   if (typeof value !== 'number' || !Number.isFinite(value)) return NO_VALUE;
   const text = numberFormat(locale, digits, grouping).format(value);
   return text.replace(/^-(?=0(?:\D0*)?$)/, '').replace(/^-/, '\u2212'); // no "−0", true minus sign
@@ -88,7 +96,13 @@ export function formatQuantity(value: number, unit: string, locale: string, digi
 }
 
 /** A range "a–b unit"; NO_VALUE when either end is not finite. */
-export function formatRange(min: number, max: number, unit: string, locale: string, digits = RESULT_DIGITS[unit] ?? 2): string {
+export function formatRange(
+  min: number,
+  max: number,
+  unit: string,
+  locale: string,
+  digits = RESULT_DIGITS[unit] ?? 2,
+): string {
   const a = formatNumber(min, locale, { digits });
   const b = formatNumber(max, locale, { digits });
   return a === NO_VALUE || b === NO_VALUE ? NO_VALUE : `${a}–${b}${UNIT_GAP}${UNIT_SYMBOLS[unit] ?? unit}`;

@@ -32,7 +32,11 @@ export class FieldReader {
  * Places a physics error: on the form field its `field` maps to (through `fieldMap`,
  * or as is when the form has a field of that name), otherwise as a general error.
  */
-export function placeError<T>(error: InputError, fieldMap: Record<string, string>, formFields: ReadonlySet<string>): Outcome<T> {
+export function placeError<T>(
+  error: InputError,
+  fieldMap: Record<string, string>,
+  formFields: ReadonlySet<string>,
+): Outcome<T> {
   const raw = error.field ?? '';
   const mapped = fieldMap[raw] ?? raw;
   return formFields.has(mapped) ? { errors: { [mapped]: error } } : { errors: {}, general: error };

@@ -70,7 +70,11 @@ function write(key: string, value: unknown): void {
  * A signal restored from storage at start and saved on every change. `restore` checks the
  * stored value where merging over the defaults cannot (lists and maps of any length).
  */
-export function persisted<T>(key: string, defaults: T, restore: (stored: unknown) => T = (stored) => mergeDefaults(defaults, stored)): Signal<T> {
+export function persisted<T>(
+  key: string,
+  defaults: T,
+  restore: (stored: unknown) => T = (stored) => mergeDefaults(defaults, stored),
+): Signal<T> {
   const state = signal<T>(restore(read(key)));
   effect(() => write(key, state.value));
   return state;

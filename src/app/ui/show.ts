@@ -44,7 +44,8 @@ export function makeShow(units: DisplayUnits, locale: string): Show {
     },
     temperature: (c) => formatQuantity(temp(c), units.temperature, locale),
     temperatureRange: (a, b) => formatRange(temp(a), temp(b), units.temperature, locale),
-    temperatureDifference: (d) => formatQuantity(convertTemperatureDifference(d, 'C', units.temperature), units.temperature, locale),
+    temperatureDifference: (d) =>
+      formatQuantity(convertTemperatureDifference(d, 'C', units.temperature), units.temperature, locale),
     time: (h) => formatQuantity(time(h), units.time, locale),
     timeRange: (a, b) => formatRange(time(a), time(b), units.time, locale),
     hoursMinutes: (h) => formatHoursMinutes(h, locale),

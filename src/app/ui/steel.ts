@@ -19,7 +19,9 @@ export const defaultSteel = (gradeId: string): SteelForm => {
   return {
     grade: gradeId,
     coreCarbon: field(String(grade?.coreCarbonPct ?? 0.2)),
-    composition: Object.fromEntries(ALLOY_ELEMENTS.map((e) => [e, field(String(grade?.composition[e] ?? 0))])) as SteelForm['composition'],
+    composition: Object.fromEntries(
+      ALLOY_ELEMENTS.map((e) => [e, field(String(grade?.composition[e] ?? 0))]),
+    ) as SteelForm['composition'],
   };
 };
 

@@ -39,4 +39,3 @@ export function displayUnits(system: UnitSystem, overrides: UnitOverrides): Disp
     time: overrides.time === 'auto' ? base.time : overrides.time,
   };
 }
-

@@ -55,5 +55,9 @@ export function wordWarning(t: TFunction, warning: Warning, show: Show): string 
 
 /** A cycle's cautions, each prefixed with its step when it concerns one. */
 export function stepCautions(warnings: readonly Warning[], t: TFunction, show: Show): string[] {
-  return warnings.map((w) => (w.stepIndex === undefined ? wordWarning(t, w, show) : t('app.cycle.stepCaution', { n: w.stepIndex + 1, message: wordWarning(t, w, show) })));
+  return warnings.map((w) =>
+    w.stepIndex === undefined
+      ? wordWarning(t, w, show)
+      : t('app.cycle.stepCaution', { n: w.stepIndex + 1, message: wordWarning(t, w, show) }),
+  );
 }

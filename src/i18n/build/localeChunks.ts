@@ -19,7 +19,8 @@ const LOCALE_FILE = /[\\/]locales[\\/][^\\/]+[\\/]translation\.json$/u;
 const isPart = (value: string): value is LocalePart => (LOCALE_PARTS as readonly string[]).includes(value);
 
 /** The chunk file name of a locale part (its own name, so the size check and a reader can find it). */
-export const localeChunkFileName = (lang: string, part: LocalePart, assetsDir: string) => `${assetsDir}/locale-${part}-${lang}-[hash].js`;
+export const localeChunkFileName = (lang: string, part: LocalePart, assetsDir: string) =>
+  `${assetsDir}/locale-${part}-${lang}-[hash].js`;
 
 export function localeChunks(options: { localesDir?: string } = {}): Plugin {
   let localesDir = options.localesDir ?? resolve('locales');

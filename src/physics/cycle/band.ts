@@ -48,7 +48,9 @@ export function cycleDepthBand(recipe: Recipe, options: CycleBandOptions = {}): 
     const key = `${c.model}|${c.tempOffsetC}|${c.betaMPerS ?? ''}`;
     let ecdMm = cache.get(key);
     if (ecdMm === undefined) {
-      const run = solveRecipe(bandRecipe(recipe, c), { diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS[c.model].diffusivity, factor) });
+      const run = solveRecipe(bandRecipe(recipe, c), {
+        diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS[c.model].diffusivity, factor),
+      });
       ecdMm = depthToCarbonM(run, thresholdPct) * 1e3;
       cache.set(key, ecdMm);
     }

@@ -49,7 +49,8 @@ export function buildGrid(extentM: number, resolution: number, radiusM?: number)
     const innerArea = areaAt(nextFaceM);
     centreDepthM[i] = (faceDepthM + nextFaceM) / 2;
     halfWidthM[i] = (nextFaceM - faceDepthM) / 2;
-    volumeM[i] = radiusM === undefined ? nextFaceM - faceDepthM : ((outerArea + innerArea) / 2) * (nextFaceM - faceDepthM);
+    volumeM[i] =
+      radiusM === undefined ? nextFaceM - faceDepthM : ((outerArea + innerArea) / 2) * (nextFaceM - faceDepthM);
     faceArea[i + 1] = innerArea;
     faceDepthM = nextFaceM;
     widthM *= growth;

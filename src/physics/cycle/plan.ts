@@ -99,5 +99,10 @@ export function planCycle(recipe: Recipe, diffusivity: DiffusivityFunction, reso
     return { ...step, endTimesS: stepEndTimes(step.durationS, count, growth, ramp) };
   });
   const semiInfiniteDepthM = Math.max(DOMAIN_DEPTHS * Math.sqrt(totalDt), MIN_DOMAIN_M);
-  return { steps, semiInfiniteDepthM, minCarbonPct: Math.min(...carbonValues), maxCarbonPct: Math.max(...carbonValues) };
+  return {
+    steps,
+    semiInfiniteDepthM,
+    minCarbonPct: Math.min(...carbonValues),
+    maxCarbonPct: Math.max(...carbonValues),
+  };
 }

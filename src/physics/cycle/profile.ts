@@ -65,7 +65,11 @@ export function sampleProfile(run: SolverRun, maxDepthM: number): ProfilePoint[]
   for (let k = 0; k < PROFILE_POINTS; k++) {
     const depthM = (maxDepthM * k) / (PROFILE_POINTS - 1);
     node = interpolate(run, depthM, node, value);
-    points.push({ depthMm: depthM * 1e3, carbonPct: value.carbonPct, hardnessHrc: asQuenchedHardnessHrc(value.carbonPct) });
+    points.push({
+      depthMm: depthM * 1e3,
+      carbonPct: value.carbonPct,
+      hardnessHrc: asQuenchedHardnessHrc(value.carbonPct),
+    });
   }
   return points;
 }

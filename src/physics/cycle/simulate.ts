@@ -58,7 +58,11 @@ function surfaceHistory(run: SolverRun): SurfaceHistoryPoint[] {
 }
 
 /** Simulation result of a validated recipe. */
-export function runCycle(recipe: Recipe, resolution = 1, options: Omit<CycleOptions, 'resolution'> = {}): SimulationResult {
+export function runCycle(
+  recipe: Recipe,
+  resolution = 1,
+  options: Omit<CycleOptions, 'resolution'> = {},
+): SimulationResult {
   const run = solveRecipe(recipe, { ...options, resolution });
   const effectiveM = depthToCarbonM(run, recipe.thresholdCarbonPct ?? DEFAULT_ECD_THRESHOLD_PCT);
   const totalM = depthToCarbonM(run, totalCaseThresholdPct(recipe.steel.coreCarbonPct, recipe.totalCaseMarginPct));
@@ -84,10 +88,12 @@ function allFinite(result: SimulationResult): boolean {
 }
 
 /** `simulate`: request → validated recipe → simulation, or a typed error. `options` may replace D (a calibrated furnace). */
-export function simulateCycle(request: unknown, options: Omit<CycleOptions, 'resolution'> = {}): Result<SimulationResult> {
+export function simulateCycle(
+  request: unknown,
+  options: Omit<CycleOptions, 'resolution'> = {},
+): Result<SimulationResult> {
   const recipe = readRecipe(request);
   if (!recipe.ok) return recipe;
   const result = runCycle(recipe.value, 1, options);
   return allFinite(result) ? ok(result) : fail('solve.noConvergence', 'steps');
 }
-

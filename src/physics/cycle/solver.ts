@@ -158,7 +158,12 @@ function advance(ws: Workspace, dtS: number, ratio: number, tempK: number, step:
 }
 
 /** Runs the planned steps (time steps placed by timeSteps.ts) on `grid` from uniform core carbon. */
-export function solveCycle(steps: readonly PlannedStep[], grid: Grid, table: DiffusivityTable, corePct: number): SolverRun {
+export function solveCycle(
+  steps: readonly PlannedStep[],
+  grid: Grid,
+  table: DiffusivityTable,
+  corePct: number,
+): SolverRun {
   const ws = new Workspace(grid, table, corePct);
   const size = 1 + steps.reduce((sum, s) => sum + s.endTimesS.length, 0);
   const historyTimeS = new Float64Array(size);

@@ -58,7 +58,12 @@ export function stepEndTimes(durationS: number, count: number, growth: number, p
   for (let j = 1; j <= count; j++) {
     const share = growth > 1 ? (growth ** j - 1) / (growth ** count - 1) : j / count;
     const target = share * total;
-    ends[j - 1] = j === count ? durationS : !progress || !(total > 0) ? share * durationS : timeAtProgress(progress, durationS, target, cursor);
+    ends[j - 1] =
+      j === count
+        ? durationS
+        : !progress || !(total > 0)
+          ? share * durationS
+          : timeAtProgress(progress, durationS, target, cursor);
   }
   return ends;
 }

@@ -33,13 +33,24 @@ const middle = (range: { min: number; max: number }) => (range.min + range.max) 
 const factorOf = (request: PlanRequest) => (request.steel.composition ? alloyFactor(request.steel.composition) : 1);
 
 /** Coolest temperature at which the diffuse potential is held (the hardening soak uses it too), °C. */
-const diffuseLowestC = (request: PlanRequest) => Math.min(request.diffuse.temperatureC, request.hardening?.temperatureC ?? Infinity);
+const diffuseLowestC = (request: PlanRequest) =>
+  Math.min(request.diffuse.temperatureC, request.hardening?.temperatureC ?? Infinity);
 
 /** Carbon potentials above saturation (Acm) at their temperature: soot and carbides, no acceptable plan. */
 export function saturationFinding(request: PlanRequest): Finding | undefined {
   const checks = [
-    { code: 'plan.boostPotentialAboveSaturation', fix: 'plan.lowerBoostPotential', tempC: request.boost.temperatureC, potentialPct: request.boost.carbonPotentialPct },
-    { code: 'plan.diffusePotentialAboveSaturation', fix: 'plan.lowerDiffusePotential', tempC: diffuseLowestC(request), potentialPct: request.diffuse.carbonPotentialPct },
+    {
+      code: 'plan.boostPotentialAboveSaturation',
+      fix: 'plan.lowerBoostPotential',
+      tempC: request.boost.temperatureC,
+      potentialPct: request.boost.carbonPotentialPct,
+    },
+    {
+      code: 'plan.diffusePotentialAboveSaturation',
+      fix: 'plan.lowerDiffusePotential',
+      tempC: diffuseLowestC(request),
+      potentialPct: request.diffuse.carbonPotentialPct,
+    },
   ] as const;
   for (const { code, fix, tempC, potentialPct } of checks) {
     const limitPct = saturationCarbonPct(tempC);
@@ -66,7 +77,9 @@ function temperatureChangeC(request: PlanRequest, ratio: number): number | undef
   const hottestC = Math.max(request.boost.temperatureC, request.diffuse.temperatureC);
   const coolestC = Math.min(request.boost.temperatureC, request.diffuse.temperatureC);
   const [lo, hi] =
-    ratio > 1 ? [referenceC, referenceC + TEMPERATURE_LIMITS_C.max - hottestC] : [referenceC - (coolestC - EUTECTOID_TEMP_C - 1), referenceC];
+    ratio > 1
+      ? [referenceC, referenceC + TEMPERATURE_LIMITS_C.max - hottestC]
+      : [referenceC - (coolestC - EUTECTOID_TEMP_C - 1), referenceC];
   const root = brentRoot(excess, lo, hi, 1e-9);
   return root === undefined ? undefined : root.x - referenceC;
 }
@@ -86,7 +99,8 @@ function caseTooShallow(request: PlanRequest, point: PlanPoint, hardeningH: numb
   const ratio = (middle(request.targetEcdMm) / reachedMm) ** 2;
   const suggestions: Warning[] = [];
   const deltaC = temperatureChangeC(request, ratio);
-  if (deltaC !== undefined) suggestions.push({ code: 'plan.raiseTemperature', params: { deltaC: ceilTo(deltaC, TEMPERATURE_STEP_C) } });
+  if (deltaC !== undefined)
+    suggestions.push({ code: 'plan.raiseTemperature', params: { deltaC: ceilTo(deltaC, TEMPERATURE_STEP_C) } });
   suggestions.push(...richerBoost(request));
   const totalH = ceilTo(point.carburizeH * ratio + hardeningH, TIME_STEP_H);
   if (totalH <= MAX_TIME_H) suggestions.push({ code: 'plan.allowMoreTime', params: { totalH } });
@@ -112,11 +126,16 @@ function caseTooDeep(request: PlanRequest, point: PlanPoint, context: FindingCon
   if (deltaC !== undefined && hardeningAloneMm < request.targetEcdMm.max) {
     suggestions.push({ code: 'plan.lowerTemperature', params: { deltaC: ceilTo(-deltaC, TEMPERATURE_STEP_C) } });
   }
-  if (request.hardening) suggestions.push({ code: 'plan.shortenHardening', params: { timeH: request.hardening.timeH } });
+  if (request.hardening)
+    suggestions.push({ code: 'plan.shortenHardening', params: { timeH: request.hardening.timeH } });
   return {
     binding: {
       code: 'plan.caseDepthTooDeepForShortestCycle',
-      params: { targetMm: request.targetEcdMm.max, reachedMm: round(reachedMm, 3), totalH: round(point.carburizeH + hardeningH, 2) },
+      params: {
+        targetMm: request.targetEcdMm.max,
+        reachedMm: round(reachedMm, 3),
+        totalH: round(point.carburizeH + hardeningH, 2),
+      },
     },
     suggestions,
   };
@@ -133,13 +152,22 @@ function diffusePotentialFor(request: PlanRequest, surfacePct: number, raise: bo
 }
 
 /** The surface target lies outside what plans of the aimed depth leave. */
-function surfaceOutOfRange(request: PlanRequest, tooHigh: boolean, point: PlanPoint, rangePct: { min: number; max: number }, hardeningH: number): Finding {
+function surfaceOutOfRange(
+  request: PlanRequest,
+  tooHigh: boolean,
+  point: PlanPoint,
+  rangePct: { min: number; max: number },
+  hardeningH: number,
+): Finding {
   const target = request.targetSurfaceCarbonPct;
   const aimPct = middle(target);
   const potentialPct = request.diffuse.carbonPotentialPct;
   if (!tooHigh) {
     return {
-      binding: { code: 'plan.surfaceCarbonTooLowForDiffusePotential', params: { targetPct: target.max, reachedPct: round(rangePct.min, 3), potentialPct } },
+      binding: {
+        code: 'plan.surfaceCarbonTooLowForDiffusePotential',
+        params: { targetPct: target.max, reachedPct: round(rangePct.min, 3), potentialPct },
+      },
       suggestions: diffusePotentialFor(request, aimPct, false),
     };
   }
@@ -148,7 +176,12 @@ function surfaceOutOfRange(request: PlanRequest, tooHigh: boolean, point: PlanPo
     return {
       binding: {
         code: 'plan.surfaceCarbonTooHighForDiffusePotential',
-        params: { targetPct: target.min, reachedPct: round(rangePct.max, 3), potentialPct, equilibriumPct: round(equilibriumPct, 3) },
+        params: {
+          targetPct: target.min,
+          reachedPct: round(rangePct.max, 3),
+          potentialPct,
+          equilibriumPct: round(equilibriumPct, 3),
+        },
       },
       suggestions: diffusePotentialFor(request, aimPct, true),
     };
@@ -156,7 +189,11 @@ function surfaceOutOfRange(request: PlanRequest, tooHigh: boolean, point: PlanPo
   return {
     binding: {
       code: 'plan.surfaceCarbonTooHighForCycleTime',
-      params: { targetPct: target.min, reachedPct: round(rangePct.max, 3), totalH: round(point.carburizeH + hardeningH, 2) },
+      params: {
+        targetPct: target.min,
+        reachedPct: round(rangePct.max, 3),
+        totalH: round(point.carburizeH + hardeningH, 2),
+      },
     },
     suggestions: [...richerBoost(request), ...diffusePotentialFor(request, aimPct, true)],
   };
@@ -169,7 +206,11 @@ export interface FindingContext {
 }
 
 /** The finding of a search, if its targets are out of reach. */
-export function searchFinding(request: PlanRequest, outcome: SearchOutcome, context: FindingContext): Finding | undefined {
+export function searchFinding(
+  request: PlanRequest,
+  outcome: SearchOutcome,
+  context: FindingContext,
+): Finding | undefined {
   const { hardeningH } = context;
   if (outcome.kind === 'caseTooShallow') return caseTooShallow(request, outcome.point, hardeningH);
   if (outcome.kind === 'caseTooDeep') return caseTooDeep(request, outcome.point, context);

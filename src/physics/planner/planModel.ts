@@ -40,11 +40,15 @@ export class PlanModel {
 
   /** The recipe for these times; a step of zero length is left out. */
   recipe(boostH: number, diffuseH: number): Recipe {
-    const { boost, diffuse, hardening, name, steel, model, thresholdCarbonPct, totalCaseMarginPct, shape } = this.request;
+    const { boost, diffuse, hardening, name, steel, model, thresholdCarbonPct, totalCaseMarginPct, shape } =
+      this.request;
     const steps: RecipeStep[] = [];
     if (boostH > 0) steps.push(soak(PLAN_STEP_LABELS.boost, boostH, boost));
     if (diffuseH > 0) steps.push(soak(PLAN_STEP_LABELS.diffuse, diffuseH, diffuse));
-    if (hardening) steps.push(soak(PLAN_STEP_LABELS.hardening, hardening.timeH, { ...diffuse, temperatureC: hardening.temperatureC }));
+    if (hardening)
+      steps.push(
+        soak(PLAN_STEP_LABELS.hardening, hardening.timeH, { ...diffuse, temperatureC: hardening.temperatureC }),
+      );
     return {
       ...(name === undefined ? {} : { name }),
       ...(totalCaseMarginPct === undefined ? {} : { totalCaseMarginPct }),

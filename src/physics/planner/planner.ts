@@ -65,7 +65,10 @@ function roundedTimes(outcome: SearchOutcome, maxCarburizeH: number): { boostH: 
 
 function missFinding(ecdMm: number, surfacePct: number): Finding {
   return {
-    binding: { code: 'plan.missedInFinalCheck', params: { ecdMm: Number(ecdMm.toFixed(3)), surfacePct: Number(surfacePct.toFixed(3)) } },
+    binding: {
+      code: 'plan.missedInFinalCheck',
+      params: { ecdMm: Number(ecdMm.toFixed(3)), surfacePct: Number(surfacePct.toFixed(3)) },
+    },
     suggestions: [],
   };
 }
@@ -84,7 +87,11 @@ interface Attempt {
 /** Searches at `searchResolution`, rounds the times, and checks the plan forward at `verifyResolution`. */
 function attempt(model: PlanModel, searchResolution: number, verifyResolution: number): Attempt {
   const { request, hardeningH } = model;
-  const limits = { minCarburizeH: MIN_CARBURIZE_H, maxCarburizeH: request.maxTotalH - hardeningH, maxBoostShare: MAX_BOOST_SHARE };
+  const limits = {
+    minCarburizeH: MIN_CARBURIZE_H,
+    maxCarburizeH: request.maxTotalH - hardeningH,
+    maxBoostShare: MAX_BOOST_SHARE,
+  };
   const outcome = searchPlan(
     (boostShare, carburizeH) => model.probe(boostShare, carburizeH, searchResolution),
     limits,
@@ -94,7 +101,9 @@ function attempt(model: PlanModel, searchResolution: number, verifyResolution: n
   const { boostH, diffuseH } = roundedTimes(outcome, limits.maxCarburizeH);
   const recipe = model.recipe(boostH, diffuseH);
   const simulation = model.simulate(recipe, verifyResolution);
-  const meets = within(simulation.effectiveCaseDepthMm, request.targetEcdMm) && within(simulation.surfaceCarbonPct, request.targetSurfaceCarbonPct);
+  const meets =
+    within(simulation.effectiveCaseDepthMm, request.targetEcdMm) &&
+    within(simulation.surfaceCarbonPct, request.targetSurfaceCarbonPct);
   return { outcome, boostH, diffuseH, recipe, simulation, meets };
 }
 
@@ -107,15 +116,18 @@ export function planForTargets(request: PlanRequest, options: PlanOptions = {}):
   let tried = attempt(model, searchResolution, verifyResolution);
   const searchSaidMet = tried.outcome.kind === 'depthMet' && tried.outcome.surface === 'met';
   // Narrow targets on a steep profile can fall between the coarse search and the check: search again at the check's resolution.
-  if (!tried.meets && searchSaidMet && searchResolution !== verifyResolution) tried = attempt(model, verifyResolution, verifyResolution);
+  if (!tried.meets && searchSaidMet && searchResolution !== verifyResolution)
+    tried = attempt(model, verifyResolution, verifyResolution);
   const { outcome, boostH, diffuseH, recipe, simulation, meets } = tried;
   const { effectiveCaseDepthMm, surfaceCarbonPct, totalCaseDepthMm } = simulation;
   const finding =
     saturationFinding(request) ??
     (meets
       ? undefined
-      : (searchFinding(request, outcome, { hardeningH, hardeningOnlyEcdMm: () => model.probe(0, 0, searchResolution).ecdMm }) ??
-        missFinding(effectiveCaseDepthMm, surfaceCarbonPct)));
+      : (searchFinding(request, outcome, {
+          hardeningH,
+          hardeningOnlyEcdMm: () => model.probe(0, 0, searchResolution).ecdMm,
+        }) ?? missFinding(effectiveCaseDepthMm, surfaceCarbonPct)));
   return {
     reachable: finding === undefined,
     boostH,

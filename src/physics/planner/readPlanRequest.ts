@@ -64,7 +64,12 @@ function readObject<T>(fields: Fields, field: string, read: (f: Fields) => Resul
 }
 
 /** An optional number field with a default, range-checked. */
-function readOptionalChecked(f: Fields, field: string, fallback: number, check: (value: number, field: string) => Result<number>): Result<number> {
+function readOptionalChecked(
+  f: Fields,
+  field: string,
+  fallback: number,
+  check: (value: number, field: string) => Result<number>,
+): Result<number> {
   const raw = readOptionalNumber(f, field);
   return raw.ok ? check(raw.value ?? fallback, field) : raw;
 }
@@ -92,7 +97,9 @@ function readRange(check: (value: number, field: string) => Result<number>) {
     if (!min.ok) return min;
     const max = readChecked(f, 'max', check);
     if (!max.ok) return max;
-    return min.value <= max.value ? ok({ min: min.value, max: max.value }) : fail('range.minAboveMax', undefined, { min: min.value, max: max.value });
+    return min.value <= max.value
+      ? ok({ min: min.value, max: max.value })
+      : fail('range.minAboveMax', undefined, { min: min.value, max: max.value });
   };
 }
 
@@ -124,7 +131,8 @@ function crossCheck(plan: PlanRequest): Result<PlanRequest> {
     return fail('depth.tooDeep', 'targetEcdMm.max', { value: targetEcdMm.max, max: deepestMm });
   }
   const shortestH = (hardening?.timeH ?? 0) + MIN_CARBURIZE_H;
-  if (!(maxTotalH >= shortestH)) return fail('time.limitTooShort', 'maxTotalH', { value: maxTotalH, min: Number(shortestH.toFixed(2)) });
+  if (!(maxTotalH >= shortestH))
+    return fail('time.limitTooShort', 'maxTotalH', { value: maxTotalH, min: Number(shortestH.toFixed(2)) });
   return ok(plan);
 }
 
@@ -142,7 +150,8 @@ export function readPlanRequest(request: unknown): Result<PlanRequest> {
   if (!boost.ok) return boost;
   const diffuse = readObject(f, 'diffuse', readPotentialStep);
   if (!diffuse.ok) return diffuse;
-  const hardening = f.hardening === undefined || f.hardening === null ? ok(undefined) : readObject(f, 'hardening', readHardening);
+  const hardening =
+    f.hardening === undefined || f.hardening === null ? ok(undefined) : readObject(f, 'hardening', readHardening);
   if (!hardening.ok) return hardening;
   const targetEcdMm = readObject(f, 'targetEcdMm', readRange(checkDepthMm));
   if (!targetEcdMm.ok) return targetEcdMm;

@@ -42,7 +42,13 @@ export type SearchOutcome =
    * A plan of the aimed depth; `surface` says whether the surface target lies inside the range
    * such plans can leave (`surfaceRangePct`); if not, the point is the nearest end of that range.
    */
-  | { kind: 'depthMet'; surface: 'met' | 'tooHigh' | 'tooLow'; point: PlanPoint; aim: Aim; surfaceRangePct: TargetRange };
+  | {
+      kind: 'depthMet';
+      surface: 'met' | 'tooHigh' | 'tooLow';
+      point: PlanPoint;
+      aim: Aim;
+      surfaceRangePct: TargetRange;
+    };
 
 /**
  * A solve stops once its value is this close to the aim: far inside what a hardness traverse or a
@@ -138,7 +144,10 @@ export function searchPlan(
   const shallowest = at(0, minH);
   if (shallowest.probe.ecdMm > targetEcdMm.max) return { kind: 'caseTooDeep', point: shallowest };
   // The middle of what is both wanted and reachable: the most room for scatter on either side.
-  const ecdAim = middle(Math.max(targetEcdMm.min, shallowest.probe.ecdMm), Math.min(targetEcdMm.max, deepest.probe.ecdMm));
+  const ecdAim = middle(
+    Math.max(targetEcdMm.min, shallowest.probe.ecdMm),
+    Math.min(targetEcdMm.max, deepest.probe.ecdMm),
+  );
 
   const ecdExcess = (p: PlanPoint) => p.probe.ecdMm - ecdAim;
   const ecdTol = ECD_TOLERANCE * ecdAim;
@@ -147,7 +156,8 @@ export function searchPlan(
     solveIncreasing(
       (s) => ecdExcess(at(f, s * s)),
       Math.sqrt(guessH),
-      (s, excess) => s * Math.min(MAX_STEP_FACTOR, Math.max(1 / MAX_STEP_FACTOR, ecdAim / Math.max(excess + ecdAim, 1e-9))),
+      (s, excess) =>
+        s * Math.min(MAX_STEP_FACTOR, Math.max(1 / MAX_STEP_FACTOR, ecdAim / Math.max(excess + ecdAim, 1e-9))),
       Math.sqrt(minH),
       Math.sqrt(maxH),
       TIME_TOLERANCE,
@@ -185,7 +195,7 @@ export function searchPlan(
   });
   if (wantedLow > wantedHigh) {
     const tooHigh = targetSurfacePct.min > surfaceRangePct.max;
-    const nearest = (highPct >= lowPct) === tooHigh ? high : low;
+    const nearest = highPct >= lowPct === tooHigh ? high : low;
     return depthMet(tooHigh ? 'tooHigh' : 'tooLow', nearest, tooHigh ? targetSurfacePct.min : targetSurfacePct.max);
   }
   // Not the reachable point nearest the drawing's middle: the ends of the reachable range are where a
@@ -210,10 +220,17 @@ export function searchPlan(
     }
     return point;
   };
-  const f = solveShare((share) => onCurve(share).probe.surfacePct - surfaceAim, low.boostShare, high.boostShare, SURFACE_TOLERANCE_PCT);
+  const f = solveShare(
+    (share) => onCurve(share).probe.surfacePct - surfaceAim,
+    low.boostShare,
+    high.boostShare,
+    SURFACE_TOLERANCE_PCT,
+  );
   const best =
     f === undefined
-      ? [...along.values()].reduce((a, b) => (Math.abs(b.probe.surfacePct - surfaceAim) < Math.abs(a.probe.surfacePct - surfaceAim) ? b : a))
+      ? [...along.values()].reduce((a, b) =>
+          Math.abs(b.probe.surfacePct - surfaceAim) < Math.abs(a.probe.surfacePct - surfaceAim) ? b : a,
+        )
       : onCurve(f);
   return depthMet('met', best, surfaceAim);
 }

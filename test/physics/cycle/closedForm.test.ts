@@ -27,16 +27,21 @@ const CORE = 0.2;
 const THRESHOLD = 0.4;
 
 describe('constant D, very large β: the constant-surface erfc solution (Crank, eq. 3.13)', () => {
-  it.each([0.5, 2, 6, 12])('%s h at Cp 0.9: ECD within 0.5 %, surface at the potential, profile within 0.002 %C', (hours) => {
-    const timeS = hours * SECONDS_PER_HOUR;
-    const result = runCycle(plainRecipe([soak(hours, 925, CP, VERY_LARGE_BETA)]), 1, { diffusivity });
-    const exactMm = constantSurfaceDepth(timeS, CONSTANT_D, CP, CORE, THRESHOLD) * 1e3;
-    expect(relativeError(result.effectiveCaseDepthMm, exactMm)).toBeLessThan(0.005);
-    expect(result.surfaceCarbonPct).toBeCloseTo(CP, 6);
-    for (const p of result.profile) {
-      expect(Math.abs(p.carbonPct - constantSurfaceCarbon(p.depthMm / 1e3, timeS, CONSTANT_D, CP, CORE))).toBeLessThan(0.002);
-    }
-  });
+  it.each([0.5, 2, 6, 12])(
+    '%s h at Cp 0.9: ECD within 0.5 %, surface at the potential, profile within 0.002 %C',
+    (hours) => {
+      const timeS = hours * SECONDS_PER_HOUR;
+      const result = runCycle(plainRecipe([soak(hours, 925, CP, VERY_LARGE_BETA)]), 1, { diffusivity });
+      const exactMm = constantSurfaceDepth(timeS, CONSTANT_D, CP, CORE, THRESHOLD) * 1e3;
+      expect(relativeError(result.effectiveCaseDepthMm, exactMm)).toBeLessThan(0.005);
+      expect(result.surfaceCarbonPct).toBeCloseTo(CP, 6);
+      for (const p of result.profile) {
+        expect(
+          Math.abs(p.carbonPct - constantSurfaceCarbon(p.depthMm / 1e3, timeS, CONSTANT_D, CP, CORE)),
+        ).toBeLessThan(0.002);
+      }
+    },
+  );
 });
 
 describe('constant D, finite β: the surface-transfer solution (Crank, §3.3.2)', () => {
@@ -51,16 +56,22 @@ describe('constant D, finite β: the surface-transfer solution (Crank, §3.3.2)'
     const result = runCycle(plainRecipe([soak(hours, 925, CP, beta)]), 1, { diffusivity });
     const exactMm = surfaceTransferDepth(timeS, CONSTANT_D, beta, CP, CORE, THRESHOLD) * 1e3;
     expect(relativeError(result.effectiveCaseDepthMm, exactMm)).toBeLessThan(0.005);
-    expect(Math.abs(result.surfaceCarbonPct - surfaceTransferSurfaceCarbon(timeS, CONSTANT_D, beta, CP, CORE))).toBeLessThan(0.005);
+    expect(
+      Math.abs(result.surfaceCarbonPct - surfaceTransferSurfaceCarbon(timeS, CONSTANT_D, beta, CP, CORE)),
+    ).toBeLessThan(0.005);
     for (const p of result.profile) {
-      expect(Math.abs(p.carbonPct - surfaceTransferCarbon(p.depthMm / 1e3, timeS, CONSTANT_D, beta, CP, CORE))).toBeLessThan(0.002);
+      expect(
+        Math.abs(p.carbonPct - surfaceTransferCarbon(p.depthMm / 1e3, timeS, CONSTANT_D, beta, CP, CORE)),
+      ).toBeLessThan(0.002);
     }
   });
 
   it('carbon taken up matches the surface-transfer uptake M_t (Crank §3.3.2) within 0.5 %', () => {
     const timeS = 6 * SECONDS_PER_HOUR;
     const run = solveRecipe(plainRecipe([soak(6, 925, CP, 1.5e-7)]), { diffusivity });
-    expect(relativeError(gridUptake(run, CORE), surfaceTransferUptake(timeS, CONSTANT_D, 1.5e-7, CP, CORE))).toBeLessThan(0.005);
+    expect(
+      relativeError(gridUptake(run, CORE), surfaceTransferUptake(timeS, CONSTANT_D, 1.5e-7, CP, CORE)),
+    ).toBeLessThan(0.005);
   });
 });
 
@@ -71,7 +82,9 @@ describe('a single soak against the closed-form calculator (caseDepth.ts)', () =
   const { effectiveCaseDepthMm, totalCaseDepthMm, diffusivityM2PerS } = closedForm.value;
 
   it("with the calculator's own effective D and high β, ECD and total case agree within 0.5 %", () => {
-    const result = runCycle(plainRecipe([soak(6, 925, CP, VERY_LARGE_BETA)]), 1, { diffusivity: () => diffusivityM2PerS });
+    const result = runCycle(plainRecipe([soak(6, 925, CP, VERY_LARGE_BETA)]), 1, {
+      diffusivity: () => diffusivityM2PerS,
+    });
     expect(relativeError(result.effectiveCaseDepthMm, effectiveCaseDepthMm)).toBeLessThan(0.005);
     expect(relativeError(result.totalCaseDepthMm, totalCaseDepthMm)).toBeLessThan(0.005);
   });

@@ -7,7 +7,9 @@ import { runCycle } from '../../../src/physics/cycle/simulate';
 import { demoCycle, plainRecipe, relativeError, soak } from './fixtures';
 
 function example(file: string): Recipe {
-  const recipe = readRecipe(JSON.parse(readFileSync(new URL(`../../../public/examples/${file}`, import.meta.url), 'utf8')));
+  const recipe = readRecipe(
+    JSON.parse(readFileSync(new URL(`../../../public/examples/${file}`, import.meta.url), 'utf8')),
+  );
   if (!recipe.ok) throw new Error(`${file}: ${recipe.error.code}`);
   return recipe.value;
 }
@@ -31,7 +33,9 @@ describe('halving grid spacing and time step (resolution 2) at default resolutio
 
   it('the demo cycle at default resolution is within 0.2 % of a 16× finer run', () => {
     const recipe = demoCycle();
-    expect(relativeError(runCycle(recipe, 1).effectiveCaseDepthMm, runCycle(recipe, 16).effectiveCaseDepthMm)).toBeLessThan(0.002);
+    expect(
+      relativeError(runCycle(recipe, 1).effectiveCaseDepthMm, runCycle(recipe, 16).effectiveCaseDepthMm),
+    ).toBeLessThan(0.002);
   });
 
   it('errors shrink with resolution: second order, as the scheme is designed', () => {

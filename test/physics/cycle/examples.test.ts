@@ -14,17 +14,20 @@ const examples: [string, [number, number], [number, number]][] = [
 ];
 
 describe('demo cycle recipes', () => {
-  it.each(examples)('%s: ECD within the drawing range, sensible surface carbon, no cautions', (file, [minMm, maxMm], [minPct, maxPct]) => {
-    const result = simulateCycle(JSON.parse(read(file)));
-    if (!result.ok) throw new Error(result.error.code);
-    expect(result.value.effectiveCaseDepthMm).toBeGreaterThanOrEqual(minMm);
-    expect(result.value.effectiveCaseDepthMm).toBeLessThanOrEqual(maxMm);
-    expect(result.value.surfaceCarbonPct).toBeGreaterThanOrEqual(minPct);
-    expect(result.value.surfaceCarbonPct).toBeLessThanOrEqual(maxPct);
-    expect(result.value.warnings).toEqual([]);
-    expect(result.value.profile).toHaveLength(101);
-    expect(result.value.profile.at(-1)!.depthMm).toBeGreaterThan(result.value.totalCaseDepthMm);
-  });
+  it.each(examples)(
+    '%s: ECD within the drawing range, sensible surface carbon, no cautions',
+    (file, [minMm, maxMm], [minPct, maxPct]) => {
+      const result = simulateCycle(JSON.parse(read(file)));
+      if (!result.ok) throw new Error(result.error.code);
+      expect(result.value.effectiveCaseDepthMm).toBeGreaterThanOrEqual(minMm);
+      expect(result.value.effectiveCaseDepthMm).toBeLessThanOrEqual(maxMm);
+      expect(result.value.surfaceCarbonPct).toBeGreaterThanOrEqual(minPct);
+      expect(result.value.surfaceCarbonPct).toBeLessThanOrEqual(maxPct);
+      expect(result.value.warnings).toEqual([]);
+      expect(result.value.profile).toHaveLength(101);
+      expect(result.value.profile.at(-1)!.depthMm).toBeGreaterThan(result.value.totalCaseDepthMm);
+    },
+  );
 
   it('the CLI runs `simulate` on an example file and prints the same result', () => {
     const file = 'pinion-kr2231-cycle.json';
@@ -36,13 +39,20 @@ describe('demo cycle recipes', () => {
   });
 
   it('the CLI words a bad recipe as an error with its field and exits 1', () => {
-    const { output, exitCode } = runCli(['simulate'], () => JSON.stringify({ steel: { coreCarbonPct: 0.2 }, steps: [] }));
+    const { output, exitCode } = runCli(['simulate'], () =>
+      JSON.stringify({ steel: { coreCarbonPct: 0.2 }, steps: [] }),
+    );
     expect(exitCode).toBe(1);
-    expect(output).toEqual({ error: { code: 'steps.empty', field: 'steps', message: 'Enter at least one step of the cycle.' } });
+    expect(output).toEqual({
+      error: { code: 'steps.empty', field: 'steps', message: 'Enter at least one step of the cycle.' },
+    });
   });
 
   it('the CLI adds the English sentence to every cycle warning', () => {
-    const request = { steel: { coreCarbonPct: 0.2 }, steps: [{ durationH: 1, startTempC: 700, endTempC: 925, carbonPotentialPct: 0.9 }] };
+    const request = {
+      steel: { coreCarbonPct: 0.2 },
+      steps: [{ durationH: 1, startTempC: 700, endTempC: 925, carbonPotentialPct: 0.9 }],
+    };
     const { output } = runCli(['simulate'], () => JSON.stringify(request));
     const warnings = (output as { warnings: { code: string; message: string; stepIndex: number }[] }).warnings;
     expect(warnings[0]).toMatchObject({ code: 'safety.atmosphereBelowSafeTemperature', stepIndex: 0 });

@@ -38,12 +38,22 @@ export function demoCycle(shape: PartShape = { kind: 'semi-infinite' }): Recipe 
  * Plane sheet −l < x < l, initially C0, both faces held at C1 (Crank, The Mathematics of
  * Diffusion, 2nd ed., eq. 4.17), with x measured from a face: returns C at depth `depthM`.
  */
-export function plateConstantSurface(depthM: number, timeS: number, D: number, halfThicknessM: number, c1: number, c0: number): number {
+export function plateConstantSurface(
+  depthM: number,
+  timeS: number,
+  D: number,
+  halfThicknessM: number,
+  c1: number,
+  c0: number,
+): number {
   const x = halfThicknessM - depthM;
   let sum = 0;
   for (let n = 0; n < 400; n++) {
     const k = 2 * n + 1;
-    sum += ((n % 2 ? -1 : 1) / k) * Math.exp((-D * k * k * Math.PI ** 2 * timeS) / (4 * halfThicknessM ** 2)) * Math.cos((k * Math.PI * x) / (2 * halfThicknessM));
+    sum +=
+      ((n % 2 ? -1 : 1) / k) *
+      Math.exp((-D * k * k * Math.PI ** 2 * timeS) / (4 * halfThicknessM ** 2)) *
+      Math.cos((k * Math.PI * x) / (2 * halfThicknessM));
   }
   return c0 + (c1 - c0) * (1 - (4 / Math.PI) * sum);
 }
@@ -63,7 +73,14 @@ const J0_ROOTS = besselJ0Roots(200);
  * Cylinder of radius a, initially C0, surface held at C1 (Crank, The Mathematics of
  * Diffusion, 2nd ed., eq. 5.22): returns C at depth `depthM` below the surface.
  */
-export function cylinderConstantSurface(depthM: number, timeS: number, D: number, radiusM: number, c1: number, c0: number): number {
+export function cylinderConstantSurface(
+  depthM: number,
+  timeS: number,
+  D: number,
+  radiusM: number,
+  c1: number,
+  c0: number,
+): number {
   const r = radiusM - depthM;
   let sum = 0;
   for (const root of J0_ROOTS) {
@@ -83,14 +100,23 @@ export function crossingDepthM(profile: (depthM: number) => number, thresholdPct
  * Mathematics of Diffusion, 2nd ed., §3.3.2): M_t = (Cp − C0)/h · [exp(h²Dt)·erfc(h√(Dt)) − 1 + 2h√(Dt/π)],
  * h = β/D; wt%·m.
  */
-export function surfaceTransferUptake(timeS: number, D: number, betaMPerS: number, potentialPct: number, corePct: number): number {
+export function surfaceTransferUptake(
+  timeS: number,
+  D: number,
+  betaMPerS: number,
+  potentialPct: number,
+  corePct: number,
+): number {
   const h = betaMPerS / D;
   const s = h * Math.sqrt(D * timeS);
   return ((potentialPct - corePct) / h) * (erfcx(s) - 1 + (2 * s) / Math.sqrt(Math.PI));
 }
 
 /** Σ (C − C_core)·V over the grid: carbon taken up per unit surface area, wt%·m. */
-export function gridUptake(run: { grid: { cells: number; volumeM: Float64Array }; carbonPct: Float64Array }, corePct: number): number {
+export function gridUptake(
+  run: { grid: { cells: number; volumeM: Float64Array }; carbonPct: Float64Array },
+  corePct: number,
+): number {
   let sum = 0;
   for (let i = 0; i < run.grid.cells; i++) sum += (run.carbonPct[i]! - corePct) * run.grid.volumeM[i]!;
   return sum;

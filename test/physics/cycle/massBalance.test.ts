@@ -30,14 +30,17 @@ const cases: [string, Recipe][] = [
 ];
 
 describe('mass balance', () => {
-  it.each(cases)('%s: carbon taken up equals the time integral of the surface flux within 0.5 % (measured ~1e-14)', (_, recipe) => {
-    const run = solveRecipe(recipe);
-    const uptake = gridUptake(run, recipe.steel.coreCarbonPct);
-    expect(Math.abs(uptake)).toBeGreaterThan(0);
-    expect(relativeError(uptake, run.fluxUptakePctM)).toBeLessThan(0.005);
-    // Stricter: the scheme is conservative, so the two agree to rounding.
-    expect(relativeError(uptake, run.fluxUptakePctM)).toBeLessThan(1e-9);
-  });
+  it.each(cases)(
+    '%s: carbon taken up equals the time integral of the surface flux within 0.5 % (measured ~1e-14)',
+    (_, recipe) => {
+      const run = solveRecipe(recipe);
+      const uptake = gridUptake(run, recipe.steel.coreCarbonPct);
+      expect(Math.abs(uptake)).toBeGreaterThan(0);
+      expect(relativeError(uptake, run.fluxUptakePctM)).toBeLessThan(0.005);
+      // Stricter: the scheme is conservative, so the two agree to rounding.
+      expect(relativeError(uptake, run.fluxUptakePctM)).toBeLessThan(1e-9);
+    },
+  );
 
   it('a neutral-gas step moves carbon inward but takes up none (uptake stays at Crank §3.3.2 M_t of the boost)', () => {
     const recipe = plainRecipe([soak(3, 925, 0.9), soak(2, 925, null)]);

@@ -37,15 +37,18 @@ describe('grid', () => {
 });
 
 describe('diffusivity table', () => {
-  it.each(MODEL_IDS)('%s: tabulated D within 1e-4 of the published formula over 0.1–1.3 %C at 850, 925 and 1050 °C', (id) => {
-    const model = DIFFUSIVITY_MODELS[id].diffusivity;
-    const table = new DiffusivityTable(model, 0.1, 1.3, 1);
-    for (const tempC of [850, 925, 1050]) {
-      const tempK = celsiusToKelvin(tempC);
-      table.setTemperature(tempK);
-      for (let c = 0.1; c <= 1.3; c += 0.0137) expect(Math.abs(table.at(c) / model(tempK, c) - 1)).toBeLessThan(1e-4);
-    }
-  });
+  it.each(MODEL_IDS)(
+    '%s: tabulated D within 1e-4 of the published formula over 0.1–1.3 %C at 850, 925 and 1050 °C',
+    (id) => {
+      const model = DIFFUSIVITY_MODELS[id].diffusivity;
+      const table = new DiffusivityTable(model, 0.1, 1.3, 1);
+      for (const tempC of [850, 925, 1050]) {
+        const tempK = celsiusToKelvin(tempC);
+        table.setTemperature(tempK);
+        for (let c = 0.1; c <= 1.3; c += 0.0137) expect(Math.abs(table.at(c) / model(tempK, c) - 1)).toBeLessThan(1e-4);
+      }
+    },
+  );
 
   it('reads the end values outside its range and handles a single-value range', () => {
     const model = DIFFUSIVITY_MODELS.agren.diffusivity;

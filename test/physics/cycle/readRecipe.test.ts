@@ -14,7 +14,10 @@ const withStep = (patch: Record<string, unknown>) => withSteps(step, { ...step, 
 
 describe('readRecipe: defaults', () => {
   it('fills model, threshold, shape, β and a soak end temperature', () => {
-    const result = readRecipe({ steel: { coreCarbonPct: '0,2' }, steps: [{ durationH: 2, startTempC: 925, carbonPotentialPct: '0,9' }] });
+    const result = readRecipe({
+      steel: { coreCarbonPct: '0,2' },
+      steps: [{ durationH: 2, startTempC: 925, carbonPotentialPct: '0,9' }],
+    });
     expect(result).toEqual({
       ok: true,
       value: {
@@ -22,7 +25,9 @@ describe('readRecipe: defaults', () => {
         model: 'agren',
         thresholdCarbonPct: 0.4,
         shape: { kind: 'semi-infinite' },
-        steps: [{ durationH: 2, startTempC: 925, endTempC: 925, carbonPotentialPct: 0.9, betaMPerS: DEFAULT_BETA_M_PER_S }],
+        steps: [
+          { durationH: 2, startTempC: 925, endTempC: 925, carbonPotentialPct: 0.9, betaMPerS: DEFAULT_BETA_M_PER_S },
+        ],
       },
     });
   });
@@ -38,7 +43,11 @@ describe('readRecipe: defaults', () => {
     });
     if (!result.ok) throw new Error(result.error.code);
     expect(result.value.name).toBe('KR-2231');
-    expect(result.value.steel).toEqual({ grade: 'SAE 8620', coreCarbonPct: 0.2, composition: { Si: 0, Mn: 0, Cr: 0.5, Ni: 0, Mo: 0 } });
+    expect(result.value.steel).toEqual({
+      grade: 'SAE 8620',
+      coreCarbonPct: 0.2,
+      composition: { Si: 0, Mn: 0, Cr: 0.5, Ni: 0, Mo: 0 },
+    });
     expect(result.value.shape).toEqual({ kind: 'bar', diameterMm: 25.4 });
     expect(result.value.steps[0]).toMatchObject({ label: 'heat-up', startTempC: 20, carbonPotentialPct: null });
   });
@@ -47,21 +56,46 @@ describe('readRecipe: defaults', () => {
 const errorCases: [string, unknown, string, string | undefined][] = [
   ['request not an object', [1, 2], 'request.notObject', undefined],
   ['steel missing', { steps: [step] }, 'field.missing', 'steel'],
-  ['total-case margin above 1 %C', { ...valid, totalCaseMarginPct: 1.5 }, 'totalCaseMargin.outOfRange', 'totalCaseMarginPct'],
+  [
+    'total-case margin above 1 %C',
+    { ...valid, totalCaseMarginPct: 1.5 },
+    'totalCaseMargin.outOfRange',
+    'totalCaseMarginPct',
+  ],
   ['steel not an object', { ...valid, steel: 3 }, 'request.notObject', 'steel'],
   ['core carbon missing', { ...valid, steel: {} }, 'field.missing', 'steel.coreCarbonPct'],
   ['core carbon negative', { ...valid, steel: { coreCarbonPct: -0.1 } }, 'carbon.negative', 'steel.coreCarbonPct'],
   ['core carbon not a number', { ...valid, steel: { coreCarbonPct: 'x' } }, 'number.invalid', 'steel.coreCarbonPct'],
-  ['unknown alloy element', { ...valid, steel: { coreCarbonPct: 0.2, composition: { W: 1 } } }, 'composition.unknownElement', 'steel.composition.W'],
-  ['alloy content out of range', { ...valid, steel: { coreCarbonPct: 0.2, composition: { Cr: 50 } } }, 'composition.outOfRange', 'steel.composition.Cr'],
+  [
+    'unknown alloy element',
+    { ...valid, steel: { coreCarbonPct: 0.2, composition: { W: 1 } } },
+    'composition.unknownElement',
+    'steel.composition.W',
+  ],
+  [
+    'alloy content out of range',
+    { ...valid, steel: { coreCarbonPct: 0.2, composition: { Cr: 50 } } },
+    'composition.outOfRange',
+    'steel.composition.Cr',
+  ],
   ['unknown model', { ...valid, model: 'guess' }, 'model.unknown', 'model'],
   ['threshold at core carbon', { ...valid, thresholdCarbonPct: 0.2 }, 'threshold.notAboveCore', 'thresholdCarbonPct'],
   ['threshold above 2.11 %C', { ...valid, thresholdCarbonPct: 3 }, 'carbon.aboveMax', 'thresholdCarbonPct'],
   ['shape kind unknown', { ...valid, shape: { kind: 'sphere' } }, 'shape.unknown', 'shape.kind'],
   ['shape not an object', { ...valid, shape: 'plate' }, 'shape.unknown', 'shape.kind'],
-  ['plate thickness zero', { ...valid, shape: { kind: 'plate', thicknessMm: 0 } }, 'shape.sizeOutOfRange', 'shape.thicknessMm'],
+  [
+    'plate thickness zero',
+    { ...valid, shape: { kind: 'plate', thicknessMm: 0 } },
+    'shape.sizeOutOfRange',
+    'shape.thicknessMm',
+  ],
   ['bar diameter missing', { ...valid, shape: { kind: 'bar' } }, 'field.missing', 'shape.diameterMm'],
-  ['bar diameter too large', { ...valid, shape: { kind: 'bar', diameterMm: 5000 } }, 'shape.sizeOutOfRange', 'shape.diameterMm'],
+  [
+    'bar diameter too large',
+    { ...valid, shape: { kind: 'bar', diameterMm: 5000 } },
+    'shape.sizeOutOfRange',
+    'shape.diameterMm',
+  ],
   ['steps missing', { steel: valid.steel }, 'steps.empty', 'steps'],
   ['steps empty', withSteps(), 'steps.empty', 'steps'],
   ['steps not an array', { ...valid, steps: { 0: step } }, 'steps.empty', 'steps'],
@@ -69,14 +103,39 @@ const errorCases: [string, unknown, string, string | undefined][] = [
   ['a step not an object', withSteps(step, 'soak'), 'request.notObject', 'steps.1'],
   ['duration zero', withStep({ durationH: 0 }), 'time.notPositive', 'steps.1.durationH'],
   ['duration too long', withStep({ durationH: 2000 }), 'time.tooLong', 'steps.1.durationH'],
-  ['cycle too long in total', withSteps(...Array.from({ length: 3 }, () => ({ ...step, durationH: 400 }))), 'time.tooLong', 'steps'],
+  [
+    'cycle too long in total',
+    withSteps(...Array.from({ length: 3 }, () => ({ ...step, durationH: 400 }))),
+    'time.tooLong',
+    'steps',
+  ],
   ['start temperature too hot', withStep({ startTempC: 1200 }), 'temperature.outOfRange', 'steps.1.startTempC'],
   ['end temperature below 0 °C', withStep({ endTempC: -5 }), 'temperature.outOfRange', 'steps.1.endTempC'],
   ['start temperature missing', withStep({ startTempC: undefined }), 'field.missing', 'steps.1.startTempC'],
-  ['carbon potential missing', withStep({ carbonPotentialPct: undefined }), 'field.missing', 'steps.1.carbonPotentialPct'],
-  ['carbon potential above 2.11 %C', withStep({ carbonPotentialPct: 3 }), 'carbon.aboveMax', 'steps.1.carbonPotentialPct'],
-  ['carbon potential as text', withStep({ carbonPotentialPct: 'rich' }), 'number.invalid', 'steps.1.carbonPotentialPct'],
-  ['carbon potential as boolean', withStep({ carbonPotentialPct: true }), 'field.notNumber', 'steps.1.carbonPotentialPct'],
+  [
+    'carbon potential missing',
+    withStep({ carbonPotentialPct: undefined }),
+    'field.missing',
+    'steps.1.carbonPotentialPct',
+  ],
+  [
+    'carbon potential above 2.11 %C',
+    withStep({ carbonPotentialPct: 3 }),
+    'carbon.aboveMax',
+    'steps.1.carbonPotentialPct',
+  ],
+  [
+    'carbon potential as text',
+    withStep({ carbonPotentialPct: 'rich' }),
+    'number.invalid',
+    'steps.1.carbonPotentialPct',
+  ],
+  [
+    'carbon potential as boolean',
+    withStep({ carbonPotentialPct: true }),
+    'field.notNumber',
+    'steps.1.carbonPotentialPct',
+  ],
   ['β zero', withStep({ betaMPerS: 0 }), 'beta.notPositive', 'steps.1.betaMPerS'],
   ['duration infinite', withStep({ durationH: Number.POSITIVE_INFINITY }), 'field.notNumber', 'steps.1.durationH'],
 ];
@@ -101,16 +160,21 @@ describe('readRecipe and simulateCycle: each bad input returns its code and fiel
     }
   });
 
-  it.each(LANGUAGES)('every error above has its own message in %s (no fallback, no placeholder left unfilled)', (language) => {
-    const { t } = createI18n(language);
-    for (const [, request] of errorCases) {
-      const result = readRecipe(request);
-      if (result.ok) throw new Error('expected an error');
-      const own = result.error.code.split('.').reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].errors);
-      expect(typeof own, `${language} errors.${result.error.code}`).toBe('string');
-      const message = errorMessage(t, result.error);
-      expect(message).not.toBe(`errors.${result.error.code}`);
-      expect(message).not.toMatch(/\{\{/);
-    }
-  });
+  it.each(LANGUAGES)(
+    'every error above has its own message in %s (no fallback, no placeholder left unfilled)',
+    (language) => {
+      const { t } = createI18n(language);
+      for (const [, request] of errorCases) {
+        const result = readRecipe(request);
+        if (result.ok) throw new Error('expected an error');
+        const own = result.error.code
+          .split('.')
+          .reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].errors);
+        expect(typeof own, `${language} errors.${result.error.code}`).toBe('string');
+        const message = errorMessage(t, result.error);
+        expect(message).not.toBe(`errors.${result.error.code}`);
+        expect(message).not.toMatch(/\{\{/);
+      }
+    },
+  );
 });

@@ -32,7 +32,10 @@ describe('plate', () => {
 
   it('a 1 mm plate after 40 h reaches uniform carbon equal to Cp × alloy factor (SAE 8620)', () => {
     const composition = findGrade('sae-8620')!.composition;
-    const recipe = { ...plainRecipe([soak(40, 925, 0.8)], { kind: 'plate', thicknessMm: 1 }), steel: { coreCarbonPct: 0.2, composition } };
+    const recipe = {
+      ...plainRecipe([soak(40, 925, 0.8)], { kind: 'plate', thicknessMm: 1 }),
+      steel: { coreCarbonPct: 0.2, composition },
+    };
     const run = solveRecipe(recipe);
     const effectivePotential = 0.8 * alloyFactor(composition);
     for (const c of run.carbonPct) expect(Math.abs(c - effectivePotential)).toBeLessThan(1e-4);
@@ -46,7 +49,9 @@ describe('plate', () => {
       diffusivity: constantDiffusivity,
     });
     for (const p of result.profile) {
-      expect(Math.abs(p.carbonPct - plateConstantSurface(p.depthMm / 1e3, timeS, CONSTANT_D, 1e-3, 0.9, 0.2))).toBeLessThan(0.001);
+      expect(
+        Math.abs(p.carbonPct - plateConstantSurface(p.depthMm / 1e3, timeS, CONSTANT_D, 1e-3, 0.9, 0.2)),
+      ).toBeLessThan(0.001);
     }
   });
 });
@@ -68,15 +73,18 @@ describe('round bar', () => {
     [4, 6],
     [2, 10],
     [6, 12],
-  ])('matches the cylinder series solution (Crank eq. 5.22), %s mm bar, %s h, constant D: profile within 0.002 %C, ECD within 0.5 %', (diameterMm, hours) => {
-    const timeS = hours * SECONDS_PER_HOUR;
-    const radiusM = diameterMm / 2e3;
-    const reference = (depthM: number) => cylinderConstantSurface(depthM, timeS, CONSTANT_D, radiusM, 0.9, 0.2);
-    const result = runCycle(plainRecipe([soak(hours, 925, 0.9, VERY_LARGE_BETA)], { kind: 'bar', diameterMm }), 1, {
-      diffusivity: constantDiffusivity,
-    });
-    for (const p of result.profile) expect(Math.abs(p.carbonPct - reference(p.depthMm / 1e3))).toBeLessThan(0.002);
-    const exactMm = reference(radiusM) >= 0.4 ? radiusM * 1e3 : crossingDepthM(reference, 0.4, radiusM) * 1e3;
-    expect(relativeError(result.effectiveCaseDepthMm, exactMm)).toBeLessThan(0.005);
-  });
+  ])(
+    'matches the cylinder series solution (Crank eq. 5.22), %s mm bar, %s h, constant D: profile within 0.002 %C, ECD within 0.5 %',
+    (diameterMm, hours) => {
+      const timeS = hours * SECONDS_PER_HOUR;
+      const radiusM = diameterMm / 2e3;
+      const reference = (depthM: number) => cylinderConstantSurface(depthM, timeS, CONSTANT_D, radiusM, 0.9, 0.2);
+      const result = runCycle(plainRecipe([soak(hours, 925, 0.9, VERY_LARGE_BETA)], { kind: 'bar', diameterMm }), 1, {
+        diffusivity: constantDiffusivity,
+      });
+      for (const p of result.profile) expect(Math.abs(p.carbonPct - reference(p.depthMm / 1e3))).toBeLessThan(0.002);
+      const exactMm = reference(radiusM) >= 0.4 ? radiusM * 1e3 : crossingDepthM(reference, 0.4, radiusM) * 1e3;
+      expect(relativeError(result.effectiveCaseDepthMm, exactMm)).toBeLessThan(0.005);
+    },
+  );
 });

@@ -17,7 +17,11 @@ describe('cycle warnings', () => {
     const warnings = runCycle(plainRecipe([soak(1, 900, 1.3), soak(1, 900, 0.8)])).warnings;
     expect(codes(warnings)).toContain('saturation.potentialAboveAcm@0');
     expect(codes(warnings)).not.toContain('saturation.potentialAboveAcm@1');
-    expect(warnings.find((w) => w.code === 'saturation.potentialAboveAcm')?.params).toMatchObject({ carbonPct: 1.3, limitPct: 1.2, tempC: 900 });
+    expect(warnings.find((w) => w.code === 'saturation.potentialAboveAcm')?.params).toMatchObject({
+      carbonPct: 1.3,
+      limitPct: 1.2,
+      tempC: 900,
+    });
   });
 
   it('surface carbon above saturation warns at the step where it happens, not before, with the worst value', () => {
@@ -30,9 +34,13 @@ describe('cycle warnings', () => {
   });
 
   it('a carburizing atmosphere below 760 °C warns (safety); a neutral heat-up from cold does not', () => {
-    const rampWithGas = runCycle(plainRecipe([{ durationH: 1, startTempC: 700, endTempC: 925, carbonPotentialPct: 0.9 }, soak(2, 925, 0.9)]));
+    const rampWithGas = runCycle(
+      plainRecipe([{ durationH: 1, startTempC: 700, endTempC: 925, carbonPotentialPct: 0.9 }, soak(2, 925, 0.9)]),
+    );
     expect(codes(rampWithGas.warnings)).toContain('safety.atmosphereBelowSafeTemperature@0');
-    const neutralRamp = runCycle(plainRecipe([{ durationH: 1, startTempC: 20, endTempC: 925, carbonPotentialPct: null }, soak(2, 925, 0.9)]));
+    const neutralRamp = runCycle(
+      plainRecipe([{ durationH: 1, startTempC: 20, endTempC: 925, carbonPotentialPct: null }, soak(2, 925, 0.9)]),
+    );
     expect(codes(neutralRamp.warnings).filter((c) => c.startsWith('safety'))).toEqual([]);
   });
 
@@ -63,13 +71,18 @@ describe('cycle warnings', () => {
     const { t } = createI18n(language);
     const recipes: Recipe[] = [
       plainRecipe([soak(0.05, 900, 0.8), soak(10, 900, 1.6, 1e-6), soak(3, 900, 0.7)]),
-      plainRecipe([{ durationH: 1, startTempC: 700, endTempC: 1080, carbonPotentialPct: 1.5 }], { kind: 'bar', diameterMm: 2 }),
+      plainRecipe([{ durationH: 1, startTempC: 700, endTempC: 1080, carbonPotentialPct: 1.5 }], {
+        kind: 'bar',
+        diameterMm: 2,
+      }),
     ];
     const seen = new Set<string>();
     for (const recipe of recipes) {
       for (const warning of runCycle(recipe).warnings) {
         seen.add(warning.code);
-        const own = warning.code.split('.').reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].warnings);
+        const own = warning.code
+          .split('.')
+          .reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].warnings);
         expect(typeof own, `${language} warnings.${warning.code}`).toBe('string');
         expect(warningMessage(t, warning)).not.toMatch(/\{\{/);
       }

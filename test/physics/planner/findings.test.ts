@@ -50,7 +50,10 @@ describe('the binding constraint of unreachable targets, one per code', () => {
   it('boost potential above saturation: plan.boostPotentialAboveSaturation; lowering it to the suggested 1.27 % makes it reachable', () => {
     const result = plan(cases.boostSoot);
     expect(result.reachable).toBe(false);
-    expect(result.binding).toEqual({ code: 'plan.boostPotentialAboveSaturation', params: { potentialPct: 1.4, limitPct: 1.27, tempC: 925 } });
+    expect(result.binding).toEqual({
+      code: 'plan.boostPotentialAboveSaturation',
+      params: { potentialPct: 1.4, limitPct: 1.27, tempC: 925 },
+    });
     expect(suggestion(result, 'plan.lowerBoostPotential')).toEqual({ potentialPct: 1.27 });
     expect(result.warnings.map((w) => w.code)).toContain('saturation.potentialAboveAcm');
     expect(plan(pinionWith({ boost: { temperatureC: 925, carbonPotentialPct: 1.27 } })).reachable).toBe(true);
@@ -59,7 +62,10 @@ describe('the binding constraint of unreachable targets, one per code', () => {
   it('diffuse potential above saturation at the hardening temperature: plan.diffusePotentialAboveSaturation', () => {
     const result = plan(cases.diffuseSoot);
     expect(result.reachable).toBe(false);
-    expect(result.binding).toEqual({ code: 'plan.diffusePotentialAboveSaturation', params: { potentialPct: 1.1, limitPct: 1.02, tempC: 830 } });
+    expect(result.binding).toEqual({
+      code: 'plan.diffusePotentialAboveSaturation',
+      params: { potentialPct: 1.1, limitPct: 1.02, tempC: 830 },
+    });
     expect(suggestion(result, 'plan.lowerDiffusePotential')).toEqual({ potentialPct: 1.02 });
   });
 
@@ -75,7 +81,10 @@ describe('the binding constraint of unreachable targets, one per code', () => {
     const { totalH } = suggestion(result, 'plan.allowMoreTime') as { totalH: number };
     expect(plan({ ...cases.tooShallow, maxTotalH: totalH }).reachable).toBe(true);
     const { deltaC } = suggestion(result, 'plan.raiseTemperature') as { deltaC: number };
-    const hotter = { boost: { temperatureC: 925 + deltaC, carbonPotentialPct: 1.1 }, diffuse: { temperatureC: 925 + deltaC, carbonPotentialPct: 0.8 } };
+    const hotter = {
+      boost: { temperatureC: 925 + deltaC, carbonPotentialPct: 1.1 },
+      diffuse: { temperatureC: 925 + deltaC, carbonPotentialPct: 0.8 },
+    };
     expect(plan({ ...cases.tooShallow, ...hotter }).reachable).toBe(true);
   });
 
@@ -107,7 +116,9 @@ describe('the binding constraint of unreachable targets, one per code', () => {
     expect(result.predicted.surfaceCarbonPct).toBeCloseTo(result.surfaceRangePct!.max, 2);
     const { potentialPct } = suggestion(result, 'plan.raiseDiffusePotential') as { potentialPct: number };
     expect(potentialPct).toBeGreaterThan(0.8);
-    expect(plan({ ...cases.surfaceHigh, diffuse: { temperatureC: 925, carbonPotentialPct: potentialPct } }).reachable).toBe(true);
+    expect(
+      plan({ ...cases.surfaceHigh, diffuse: { temperatureC: 925, carbonPotentialPct: potentialPct } }).reachable,
+    ).toBe(true);
   });
 
   it('surface target not reached in the short cycle a shallow case takes: plan.surfaceCarbonTooHighForCycleTime', () => {
@@ -130,7 +141,9 @@ describe('the binding constraint of unreachable targets, one per code', () => {
     expect(result.recipe.steps.map((s) => s.label)).toEqual(['diffuse', 'hardening']);
     const { potentialPct } = suggestion(result, 'plan.lowerDiffusePotential') as { potentialPct: number };
     expect(potentialPct).toBeLessThan(0.8);
-    expect(plan({ ...cases.surfaceLow, diffuse: { temperatureC: 925, carbonPotentialPct: potentialPct } }).reachable).toBe(true);
+    expect(
+      plan({ ...cases.surfaceLow, diffuse: { temperatureC: 925, carbonPotentialPct: potentialPct } }).reachable,
+    ).toBe(true);
   });
 
   it('ECD target narrower than the search tolerance and the rounding of times to 0.001 h resolve: plan.missedInFinalCheck', () => {
@@ -161,7 +174,9 @@ describe('findings are worded in every language', () => {
       return [result.binding!, ...result.suggestions];
     });
     for (const finding of findings) {
-      const own = finding.code.split('.').reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].warnings);
+      const own = finding.code
+        .split('.')
+        .reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].warnings);
       expect(typeof own, `${language} warnings.${finding.code}`).toBe('string');
       const message = warningMessage(t, finding);
       expect(message).not.toMatch(/\{\{/);
@@ -172,7 +187,9 @@ describe('findings are worded in every language', () => {
   it('the plan codes have messages in all three languages with the same placeholders', () => {
     for (const code of planCodes) {
       const placeholders = LANGUAGES.map((language) => {
-        const text = code.split('.').reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].warnings);
+        const text = code
+          .split('.')
+          .reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].warnings);
         expect(typeof text, `${language} warnings.${code}`).toBe('string');
         return [...(text as string).matchAll(/\{\{(\w+)\}\}/g)].map((m) => m[1]).sort();
       });

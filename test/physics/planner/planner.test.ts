@@ -9,7 +9,12 @@ import { readRecipe } from '../../../src/physics/cycle/readRecipe';
 import { simulateCycle } from '../../../src/physics/cycle/simulate';
 import type { Recipe } from '../../../src/physics/cycle/recipe';
 import { findGrade } from '../../../src/physics/grades';
-import { MAX_BOOST_SHARE, planForTargets, planTwoStepCycle, type PlanResult } from '../../../src/physics/planner/planner';
+import {
+  MAX_BOOST_SHARE,
+  planForTargets,
+  planTwoStepCycle,
+  type PlanResult,
+} from '../../../src/physics/planner/planner';
 import { readPlanRequest, type PlanRequest } from '../../../src/physics/planner/readPlanRequest';
 import { saturationCarbonPct } from '../../../src/physics/steel';
 import { forward, pinionRequest, pinionWith, readExample, within } from './fixtures';
@@ -123,12 +128,22 @@ const cycle = fc.record({
   coreCarbonPct: fc.double({ min: 0.1, max: 0.25, noNaN: true }),
   grade: fc.constantFrom(undefined, 'sae-8620', 'sae-4320', '20mncr5', 'sae-1018'),
   model: fc.constantFrom('agren', 'tibbetts', 'wells-batz-mehl'),
-  shape: fc.constantFrom({ kind: 'semi-infinite' }, { kind: 'bar', diameterMm: 30 }, { kind: 'plate', thicknessMm: 12 }),
+  shape: fc.constantFrom(
+    { kind: 'semi-infinite' },
+    { kind: 'bar', diameterMm: 30 },
+    { kind: 'plate', thicknessMm: 12 },
+  ),
   boostC: fc.integer({ min: 880, max: 980 }),
   diffuseC: fc.integer({ min: 860, max: 980 }),
   boostPct: fc.double({ min: 0.95, max: 1.15, noNaN: true }),
   diffusePct: fc.double({ min: 0.6, max: 0.9, noNaN: true }),
-  hardening: fc.option(fc.record({ temperatureC: fc.integer({ min: 820, max: 870 }), timeH: fc.double({ min: 0.2, max: 1, noNaN: true }) }), { nil: undefined }),
+  hardening: fc.option(
+    fc.record({
+      temperatureC: fc.integer({ min: 820, max: 870 }),
+      timeH: fc.double({ min: 0.2, max: 1, noNaN: true }),
+    }),
+    { nil: undefined },
+  ),
   carburizeH: fc.double({ min: 0.5, max: 30, noNaN: true }),
   boostShare: fc.double({ min: 0, max: MAX_BOOST_SHARE, noNaN: true }),
   factor: fc.double({ min: 0.7, max: 1.5, noNaN: true }),

@@ -55,28 +55,108 @@ const errorCases: [string, unknown, string, string | undefined][] = [
   ['unknown shape', { ...minimal, shape: { kind: 'cone' } }, 'shape.unknown', 'shape.kind'],
   ['boost missing', { ...minimal, boost: undefined }, 'field.missing', 'boost'],
   ['boost not an object', { ...minimal, boost: 925 }, 'request.notObject', 'boost'],
-  ['boost temperature missing', { ...minimal, boost: { carbonPotentialPct: 1.1 } }, 'field.missing', 'boost.temperatureC'],
-  ['boost temperature out of range', { ...minimal, boost: { temperatureC: 1300, carbonPotentialPct: 1.1 } }, 'temperature.outOfRange', 'boost.temperatureC'],
-  ['boost potential not a number', { ...minimal, boost: { temperatureC: 925, carbonPotentialPct: 'rich' } }, 'number.invalid', 'boost.carbonPotentialPct'],
-  ['boost potential above 2.11 %C', { ...minimal, boost: { temperatureC: 925, carbonPotentialPct: 3 } }, 'carbon.aboveMax', 'boost.carbonPotentialPct'],
-  ['diffuse β not positive', { ...minimal, diffuse: { temperatureC: 925, carbonPotentialPct: 0.8, betaMPerS: 0 } }, 'beta.notPositive', 'diffuse.betaMPerS'],
-  ['diffuse potential negative', { ...minimal, diffuse: { temperatureC: 925, carbonPotentialPct: -0.8 } }, 'carbon.negative', 'diffuse.carbonPotentialPct'],
-  ['boost not richer than diffuse', { ...minimal, boost: { temperatureC: 925, carbonPotentialPct: 0.8 } }, 'carbon.boostNotAboveDiffuse', 'boost.carbonPotentialPct'],
-  ['hardening temperature out of range', { ...minimal, hardening: { temperatureC: 600, timeH: 0.5 } }, 'temperature.outOfRange', 'hardening.temperatureC'],
-  ['hardening time not positive', { ...minimal, hardening: { temperatureC: 850, timeH: 0 } }, 'time.notPositive', 'hardening.timeH'],
+  [
+    'boost temperature missing',
+    { ...minimal, boost: { carbonPotentialPct: 1.1 } },
+    'field.missing',
+    'boost.temperatureC',
+  ],
+  [
+    'boost temperature out of range',
+    { ...minimal, boost: { temperatureC: 1300, carbonPotentialPct: 1.1 } },
+    'temperature.outOfRange',
+    'boost.temperatureC',
+  ],
+  [
+    'boost potential not a number',
+    { ...minimal, boost: { temperatureC: 925, carbonPotentialPct: 'rich' } },
+    'number.invalid',
+    'boost.carbonPotentialPct',
+  ],
+  [
+    'boost potential above 2.11 %C',
+    { ...minimal, boost: { temperatureC: 925, carbonPotentialPct: 3 } },
+    'carbon.aboveMax',
+    'boost.carbonPotentialPct',
+  ],
+  [
+    'diffuse β not positive',
+    { ...minimal, diffuse: { temperatureC: 925, carbonPotentialPct: 0.8, betaMPerS: 0 } },
+    'beta.notPositive',
+    'diffuse.betaMPerS',
+  ],
+  [
+    'diffuse potential negative',
+    { ...minimal, diffuse: { temperatureC: 925, carbonPotentialPct: -0.8 } },
+    'carbon.negative',
+    'diffuse.carbonPotentialPct',
+  ],
+  [
+    'boost not richer than diffuse',
+    { ...minimal, boost: { temperatureC: 925, carbonPotentialPct: 0.8 } },
+    'carbon.boostNotAboveDiffuse',
+    'boost.carbonPotentialPct',
+  ],
+  [
+    'hardening temperature out of range',
+    { ...minimal, hardening: { temperatureC: 600, timeH: 0.5 } },
+    'temperature.outOfRange',
+    'hardening.temperatureC',
+  ],
+  [
+    'hardening time not positive',
+    { ...minimal, hardening: { temperatureC: 850, timeH: 0 } },
+    'time.notPositive',
+    'hardening.timeH',
+  ],
   ['hardening not an object', { ...minimal, hardening: [850] }, 'request.notObject', 'hardening'],
   ['ECD target missing', { ...minimal, targetEcdMm: undefined }, 'field.missing', 'targetEcdMm'],
   ['ECD target min missing', { ...minimal, targetEcdMm: { max: 1 } }, 'field.missing', 'targetEcdMm.min'],
-  ['ECD target min not positive', { ...minimal, targetEcdMm: { min: 0, max: 1 } }, 'depth.notPositive', 'targetEcdMm.min'],
+  [
+    'ECD target min not positive',
+    { ...minimal, targetEcdMm: { min: 0, max: 1 } },
+    'depth.notPositive',
+    'targetEcdMm.min',
+  ],
   ['ECD target max too deep', { ...minimal, targetEcdMm: { min: 1, max: 40 } }, 'depth.tooDeep', 'targetEcdMm.max'],
   ['ECD target min above max', { ...minimal, targetEcdMm: { min: 1, max: 0.75 } }, 'range.minAboveMax', 'targetEcdMm'],
-  ['ECD target beyond half the plate', { ...minimal, shape: { kind: 'plate', thicknessMm: 1.5 } }, 'depth.tooDeep', 'targetEcdMm.max'],
-  ['surface target min above max', { ...minimal, targetSurfaceCarbonPct: { min: 0.9, max: 0.8 } }, 'range.minAboveMax', 'targetSurfaceCarbonPct'],
-  ['surface target above 2.11 %C', { ...minimal, targetSurfaceCarbonPct: { min: 0.8, max: 2.5 } }, 'carbon.aboveMax', 'targetSurfaceCarbonPct.max'],
-  ['surface target not above the ECD threshold', { ...minimal, targetSurfaceCarbonPct: { min: 0.4, max: 0.8 } }, 'threshold.outsideProfile', 'targetSurfaceCarbonPct.min'],
-  ['calibration factor out of range', { ...minimal, diffusivityFactor: 20 }, 'diffusivityFactor.outOfRange', 'diffusivityFactor'],
+  [
+    'ECD target beyond half the plate',
+    { ...minimal, shape: { kind: 'plate', thicknessMm: 1.5 } },
+    'depth.tooDeep',
+    'targetEcdMm.max',
+  ],
+  [
+    'surface target min above max',
+    { ...minimal, targetSurfaceCarbonPct: { min: 0.9, max: 0.8 } },
+    'range.minAboveMax',
+    'targetSurfaceCarbonPct',
+  ],
+  [
+    'surface target above 2.11 %C',
+    { ...minimal, targetSurfaceCarbonPct: { min: 0.8, max: 2.5 } },
+    'carbon.aboveMax',
+    'targetSurfaceCarbonPct.max',
+  ],
+  [
+    'surface target not above the ECD threshold',
+    { ...minimal, targetSurfaceCarbonPct: { min: 0.4, max: 0.8 } },
+    'threshold.outsideProfile',
+    'targetSurfaceCarbonPct.min',
+  ],
+  [
+    'calibration factor out of range',
+    { ...minimal, diffusivityFactor: 20 },
+    'diffusivityFactor.outOfRange',
+    'diffusivityFactor',
+  ],
   ['time limit over 1000 h', { ...minimal, maxTotalH: 2000 }, 'time.tooLong', 'maxTotalH'],
-  ['time limit no longer than the hardening soak', { ...minimal, hardening: { temperatureC: 850, timeH: 4 }, maxTotalH: 4 }, 'time.limitTooShort', 'maxTotalH'],
+  [
+    'time limit no longer than the hardening soak',
+    { ...minimal, hardening: { temperatureC: 850, timeH: 4 }, maxTotalH: 4 },
+    'time.limitTooShort',
+    'maxTotalH',
+  ],
 ];
 
 describe('readPlanRequest: every error path returns its key and field', () => {
@@ -94,14 +174,19 @@ describe('readPlanRequest: every error path returns its key and field', () => {
     expect(readPlanRequest(pinionWith({ targetEcdMm: { min: 0.9, max: 0.9 } })).ok).toBe(true);
   });
 
-  it.each(LANGUAGES)('every error above has its own message in %s (no fallback, no placeholder left unfilled)', (language) => {
-    const { t } = createI18n(language);
-    for (const [, request] of errorCases) {
-      const result = readPlanRequest(request);
-      if (result.ok) throw new Error('expected an error');
-      const own = result.error.code.split('.').reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].errors);
-      expect(typeof own, `${language} errors.${result.error.code}`).toBe('string');
-      expect(errorMessage(t, result.error)).not.toMatch(/\{\{/);
-    }
-  });
+  it.each(LANGUAGES)(
+    'every error above has its own message in %s (no fallback, no placeholder left unfilled)',
+    (language) => {
+      const { t } = createI18n(language);
+      for (const [, request] of errorCases) {
+        const result = readPlanRequest(request);
+        if (result.ok) throw new Error('expected an error');
+        const own = result.error.code
+          .split('.')
+          .reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].errors);
+        expect(typeof own, `${language} errors.${result.error.code}`).toBe('string');
+        expect(errorMessage(t, result.error)).not.toMatch(/\{\{/);
+      }
+    },
+  );
 });

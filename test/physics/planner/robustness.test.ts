@@ -5,11 +5,25 @@ import { planTwoStepCycle } from '../../../src/physics/planner/planner';
 import { ERROR_CODES, WARNING_CODES } from '../../../src/physics/result';
 import { allFinite } from '../allFinite';
 
-
 const wildNumber = fc.oneof(
   fc.double(),
   fc.double({ min: -10, max: 2000, noNaN: true }),
-  fc.constantFrom(0, -1, 1e308, Number.MIN_VALUE, NaN, Infinity, -Infinity, '0,8', '925', '1e400', '', 'abc', null, true),
+  fc.constantFrom(
+    0,
+    -1,
+    1e308,
+    Number.MIN_VALUE,
+    NaN,
+    Infinity,
+    -Infinity,
+    '0,8',
+    '925',
+    '1e400',
+    '',
+    'abc',
+    null,
+    true,
+  ),
   fc.object(),
 );
 
@@ -22,13 +36,20 @@ const wildRange = fc.oneof(fc.record({ min: wildNumber, max: wildNumber }, { req
 const wildRequest = fc.record(
   {
     name: fc.anything(),
-    steel: fc.oneof(fc.record({ coreCarbonPct: wildNumber, composition: fc.anything(), grade: fc.anything() }, { requiredKeys: [] }), fc.anything()),
+    steel: fc.oneof(
+      fc.record({ coreCarbonPct: wildNumber, composition: fc.anything(), grade: fc.anything() }, { requiredKeys: [] }),
+      fc.anything(),
+    ),
     model: fc.oneof(fc.constantFrom('agren', 'tibbetts', 'wells-batz-mehl'), fc.string(), wildNumber),
     thresholdCarbonPct: wildNumber,
     shape: fc.anything(),
     boost: wildStep,
     diffuse: wildStep,
-    hardening: fc.oneof(fc.constant(undefined), fc.record({ temperatureC: wildNumber, timeH: wildNumber }, { requiredKeys: [] }), fc.anything()),
+    hardening: fc.oneof(
+      fc.constant(undefined),
+      fc.record({ temperatureC: wildNumber, timeH: wildNumber }, { requiredKeys: [] }),
+      fc.anything(),
+    ),
     targetEcdMm: wildRange,
     targetSurfaceCarbonPct: wildRange,
     diffusivityFactor: wildNumber,
@@ -39,11 +60,15 @@ const wildRequest = fc.record(
 
 /** Requests inside every accepted range (edges included), so they reach the search. */
 const inRange = (min: number, max: number) => fc.double({ min, max, noNaN: true });
-const sortedPair = (min: number, max: number) => fc.tuple(inRange(min, max), inRange(min, max)).map(([a, b]) => ({ min: Math.min(a, b), max: Math.max(a, b) }));
+const sortedPair = (min: number, max: number) =>
+  fc.tuple(inRange(min, max), inRange(min, max)).map(([a, b]) => ({ min: Math.min(a, b), max: Math.max(a, b) }));
 const validRequest = fc.record({
   steel: fc.record({
     coreCarbonPct: inRange(0, 0.35),
-    composition: fc.option(fc.record({ Si: inRange(0, 10), Mn: inRange(0, 10), Cr: inRange(0, 10), Ni: inRange(0, 10), Mo: inRange(0, 10) }), { nil: undefined }),
+    composition: fc.option(
+      fc.record({ Si: inRange(0, 10), Mn: inRange(0, 10), Cr: inRange(0, 10), Ni: inRange(0, 10), Mo: inRange(0, 10) }),
+      { nil: undefined },
+    ),
   }),
   model: fc.constantFrom('agren', 'tibbetts', 'wells-batz-mehl'),
   shape: fc.oneof(
@@ -51,8 +76,16 @@ const validRequest = fc.record({
     fc.record({ kind: fc.constant('plate'), thicknessMm: inRange(0.1, 1000) }),
     fc.record({ kind: fc.constant('bar'), diameterMm: inRange(0.1, 1000) }),
   ),
-  boost: fc.record({ temperatureC: inRange(700, 1150), carbonPotentialPct: inRange(1, 2.11), betaMPerS: inRange(1e-12, 1e3) }),
-  diffuse: fc.record({ temperatureC: inRange(700, 1150), carbonPotentialPct: inRange(0, 0.99), betaMPerS: inRange(1e-12, 1e3) }),
+  boost: fc.record({
+    temperatureC: inRange(700, 1150),
+    carbonPotentialPct: inRange(1, 2.11),
+    betaMPerS: inRange(1e-12, 1e3),
+  }),
+  diffuse: fc.record({
+    temperatureC: inRange(700, 1150),
+    carbonPotentialPct: inRange(0, 0.99),
+    betaMPerS: inRange(1e-12, 1e3),
+  }),
   hardening: fc.option(fc.record({ temperatureC: inRange(700, 1150), timeH: inRange(0.01, 5) }), { nil: undefined }),
   targetEcdMm: sortedPair(0.001, 10),
   targetSurfaceCarbonPct: sortedPair(0.41, 2.11),
@@ -78,7 +111,12 @@ describe('planTwoStepCycle on wild input', () => {
         const result = planTwoStepCycle(request);
         if (!result.ok) {
           // Only the cross-checks can still reject these.
-          expect(['threshold.notAboveCore', 'threshold.outsideProfile', 'depth.tooDeep', 'solve.noConvergence']).toContain(result.error.code);
+          expect([
+            'threshold.notAboveCore',
+            'threshold.outsideProfile',
+            'depth.tooDeep',
+            'solve.noConvergence',
+          ]).toContain(result.error.code);
           return;
         }
         const v = result.value;
@@ -86,7 +124,8 @@ describe('planTwoStepCycle on wild input', () => {
         expect(v.boostH).toBeGreaterThanOrEqual(0);
         expect(v.diffuseH).toBeGreaterThan(0);
         expect(v.totalH).toBeLessThanOrEqual(request.maxTotalH + 1e-9);
-        for (const w of [...v.warnings, ...v.suggestions, ...(v.binding ? [v.binding] : [])]) expect(WARNING_CODES).toContain(w.code);
+        for (const w of [...v.warnings, ...v.suggestions, ...(v.binding ? [v.binding] : [])])
+          expect(WARNING_CODES).toContain(w.code);
         expect(v.reachable).toBe(v.binding === undefined);
       }),
       { numRuns: 300 },

@@ -21,7 +21,17 @@ export interface PanelProps<T> {
 
 type Loader<T> = () => Promise<{ default: ComponentType<PanelProps<T>> }>;
 
-function LazyPanel<T>({ value, label, load, id }: { value: T | undefined; label: string; load: Loader<T>; id: string }) {
+function LazyPanel<T>({
+  value,
+  label,
+  load,
+  id,
+}: {
+  value: T | undefined;
+  label: string;
+  load: Loader<T>;
+  id: string;
+}) {
   const t = useT();
   const [Panel, setPanel] = useState<ComponentType<PanelProps<T>> | null>(null);
   const [open, setOpen] = useState(false);
@@ -52,7 +62,13 @@ function LazyPanel<T>({ value, label, load, id }: { value: T | undefined; label:
         </p>
       )}
       {failed && <p class="error-note">{t('app.shell.loadFailed')}</p>}
-      <button ref={button} type="button" class="button button-wide" disabled={value === undefined || (open && !failed)} onClick={start}>
+      <button
+        ref={button}
+        type="button"
+        class="button button-wide"
+        disabled={value === undefined || (open && !failed)}
+        onClick={start}
+      >
         {label}
       </button>
     </div>

@@ -19,7 +19,10 @@ export function appendLine(notes: string, line: string): string {
 export default function NoteForm({ value: note, onDone }: PanelProps<string>) {
   const { t, locale } = useScreenContext();
   const { shiftDate } = currentShift();
-  const open = useLogRead((store) => store.list({ fromDate: addDays(shiftDate, -1), status: OPEN_STATUSES }), [shiftDate]);
+  const open = useLogRead(
+    (store) => store.list({ fromDate: addDays(shiftDate, -1), status: OPEN_STATUSES }),
+    [shiftDate],
+  );
   const [chosen, setChosen] = useState('');
   const [error, setError] = useState<string | undefined>(undefined);
   const [busy, setBusy] = useState(false);
@@ -29,7 +32,9 @@ export default function NoteForm({ value: note, onDone }: PanelProps<string>) {
   const jobs: Job[] = open.state === 'ready' ? open.value.jobs : [];
   const jobId = chosen || jobs[0]?.id || '';
   const label = (job: Job) =>
-    [job.workOrder, job.partNumber, job.furnace, t(`jobs.status.${job.status}`), formatClockTime(job.createdAt, locale)].filter(Boolean).join(' · ');
+    [job.workOrder, job.partNumber, job.furnace, t(`jobs.status.${job.status}`), formatClockTime(job.createdAt, locale)]
+      .filter(Boolean)
+      .join(' · ');
 
   const add = async (event: Event) => {
     event.preventDefault();
@@ -53,9 +58,21 @@ export default function NoteForm({ value: note, onDone }: PanelProps<string>) {
       {open.state === 'failed' && <p class="error-note">{describeJobsError(t, open.error)}</p>}
       {open.state === 'ready' && jobs.length === 0 && <p class="note">{t('app.log.note.noOpenJobs')}</p>}
       {jobs.length > 0 && (
-        <ChoiceField id="log-note-job" label={t('app.log.note.job')} value={jobId} choices={jobs.map((job) => ({ value: job.id, label: label(job) }))} onChange={setChosen} hint={t('app.log.note.jobHint')} />
+        <ChoiceField
+          id="log-note-job"
+          label={t('app.log.note.job')}
+          value={jobId}
+          choices={jobs.map((job) => ({ value: job.id, label: label(job) }))}
+          onChange={setChosen}
+          hint={t('app.log.note.jobHint')}
+        />
       )}
-      <FormActions error={error} submitLabel={t('app.log.note.submit')} disabled={busy || !jobId} onCancel={() => onDone(undefined)} />
+      <FormActions
+        error={error}
+        submitLabel={t('app.log.note.submit')}
+        disabled={busy || !jobId}
+        onCancel={() => onDone(undefined)}
+      />
     </form>
   );
 }

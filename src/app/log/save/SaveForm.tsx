@@ -8,7 +8,15 @@ import { formatCalendarDate } from '../dates';
 import type { LogEntry } from '../entry';
 import { FormActions } from '../FormActions';
 import { JobFields, jobFieldLabel } from '../JobFields';
-import { draftOf, EMPTY_JOB_FORM, missingFields, placeJobsError, placeMissing, type JobForm, type PlacedErrors } from '../jobForm';
+import {
+  draftOf,
+  EMPTY_JOB_FORM,
+  missingFields,
+  placeJobsError,
+  placeMissing,
+  type JobForm,
+  type PlacedErrors,
+} from '../jobForm';
 import { planRows, predictionRows } from '../jobRows';
 import { shiftConfig } from '../shifts';
 import type { PanelProps } from './LogActions';
@@ -50,19 +58,48 @@ export default function SaveForm({ value: entry, onDone }: PanelProps<LogEntry>)
     void askPersistenceOnce();
     draft.value = { ...EMPTY_JOB_FORM, operator: form.operator, furnace: form.furnace };
     const job = result.value;
-    onDone({ jobId: job.id, message: t('app.log.save.saved', { shift: t(`jobs.shift.${job.shift}`), date: formatCalendarDate(job.shiftDate, locale) }) });
+    onDone({
+      jobId: job.id,
+      message: t('app.log.save.saved', {
+        shift: t(`jobs.shift.${job.shift}`),
+        date: formatCalendarDate(job.shiftDate, locale),
+      }),
+    });
   };
 
   return (
     <form class="card log-form" aria-labelledby="log-save-title" onSubmit={(e) => void save(e)} noValidate>
-      <h2 id="log-save-title" ref={title} tabIndex={-1}>{t('app.log.save.title')}</h2>
-      <ResultList rows={predictionRows(entry.prediction, entry.inputs.kind, wording).slice(0, 2)} label={t('app.log.save.recorded')} />
+      <h2 id="log-save-title" ref={title} tabIndex={-1}>
+        {t('app.log.save.title')}
+      </h2>
+      <ResultList
+        rows={predictionRows(entry.prediction, entry.inputs.kind, wording).slice(0, 2)}
+        label={t('app.log.save.recorded')}
+      />
       <details class="disclosure">
         <summary>{t('app.log.save.recorded')}</summary>
-        <ResultList rows={[...planRows(entry.steel, entry.inputs, wording), ...predictionRows(entry.prediction, entry.inputs.kind, wording).slice(2)]} label={t('app.log.save.recorded')} />
+        <ResultList
+          rows={[
+            ...planRows(entry.steel, entry.inputs, wording),
+            ...predictionRows(entry.prediction, entry.inputs.kind, wording).slice(2),
+          ]}
+          label={t('app.log.save.recorded')}
+        />
       </details>
-      <JobFields idPrefix="log-save" form={form} onChange={(changes) => patch(draft, changes)} errors={placed?.fields ?? {}} askGradeName={askGradeName} withStatus />
-      <FormActions error={placed?.general} submitLabel={t('app.log.save.submit')} disabled={busy} onCancel={() => onDone(undefined)} />
+      <JobFields
+        idPrefix="log-save"
+        form={form}
+        onChange={(changes) => patch(draft, changes)}
+        errors={placed?.fields ?? {}}
+        askGradeName={askGradeName}
+        withStatus
+      />
+      <FormActions
+        error={placed?.general}
+        submitLabel={t('app.log.save.submit')}
+        disabled={busy}
+        onCancel={() => onDone(undefined)}
+      />
     </form>
   );
 }

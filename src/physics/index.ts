@@ -7,6 +7,7 @@ export * from './rulesOfThumb';
 export * from './steel';
 export * from './hardness';
 export * from './indicativeHardness';
+export * from './readHardness';
 export * from './traverse/readTraverse';
 export * from './traverse/traverse';
 export * from './cautions';

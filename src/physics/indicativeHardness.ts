@@ -55,6 +55,7 @@ export interface HardnessInputs {
 
 const round = (value: number, digits: number) => Number(value.toFixed(digits));
 
+/** The core hardness in HRC and its source (a given core below the HRC table is refused by the readers). */
 function coreHardness(steel: HardnessInputs['steel']): { hrc: number; source: CoreHardnessSource } {
   const given = steel.coreHardness && hardnessIn(steel.coreHardness, 'HRC');
   if (given !== undefined) return { hrc: given, source: 'steel' };

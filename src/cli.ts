@@ -11,6 +11,7 @@ import { convertRequest } from './physics/conversions';
 import { simulateCycle } from './physics/cycle/simulate';
 import { equivalentTime } from './physics/equivalentTime';
 import { planTwoStepCycle } from './physics/planner/planner';
+import { traverse } from './physics/traverse/traverse';
 import type { InputError, Result, Warning } from './physics/result';
 
 type Command = (request: unknown) => Result<object>;
@@ -24,6 +25,7 @@ export const COMMANDS: Record<string, Command> = {
   'equivalent-time': equivalentTime,
   simulate: simulateCycle,
   plan: planTwoStepCycle,
+  traverse,
 };
 
 const { t } = createI18n('en');

@@ -45,6 +45,46 @@ describe('CLI (runCli)', () => {
       output: { error: { code: 'cli.unknownCommand' } },
     });
   });
+  it('traverse: the demo pinion coupon (README example) to 550 HV, by hand 0.8 + (566 − 550)/(566 − 545)·0.1 = 0.876 mm', () => {
+    const { output, exitCode } = runCli(['traverse', 'public/examples/pinion-kr2231-traverse.json'], (file) =>
+      execFileSync('cat', [file!], { encoding: 'utf8' }),
+    );
+    expect(exitCode).toBe(0);
+    expect(output).toMatchObject({
+      effectiveCaseDepthMm: 0.876,
+      limit: { value: 550, unit: 'HV' },
+      surfaceHardness: { value: 712, unit: 'HV' },
+      coreHardness: { value: 366.7, unit: 'HV' }, // (372 + 366 + 362)/3
+      crossings: 1,
+      warnings: [],
+    });
+  });
+  it('traverse: warnings and errors are whole English sentences naming the point', () => {
+    const never = runCli(
+      ['traverse'],
+      from('{"points":[{"depthMm":0.1,"value":62,"unit":"HRC"},{"depthMm":0.3,"value":600,"unit":"HV"}]}'),
+    );
+    const messages = (never.output as { warnings: { message: string }[] }).warnings.map((w) => w.message);
+    expect(messages).toEqual([
+      'Points in HRC were converted to HV with the ASTM E140 table to compare them with the limit: approximate; use the standard’s tables for acceptance.',
+      'The hardness stays above the limit 550 HV down to the deepest point (0.3 mm): no effective case depth. Measure deeper.',
+      'Fewer than 3 points below the limit at the deep end: no core hardness. Measure deeper.',
+    ]);
+    const bad = runCli(
+      ['traverse'],
+      from('{"points":[{"depthMm":0.1,"value":700,"unit":"HV"},{"depthMm":0.3,"value":35,"unit":"HV"}]}'),
+    );
+    expect(bad).toEqual({
+      exitCode: 1,
+      output: {
+        error: {
+          code: 'hardness.outsideScaleOtherUnit',
+          field: 'points.1.value',
+          message: '35 HV is outside 80–940 HV. Did you mean 35 HRC?',
+        },
+      },
+    });
+  });
   it('runs as a process: `npm run casefront -- time` reads stdin and exits 0', () => {
     const run = spawnSync('npx', ['tsx', 'src/cli.ts', 'time'], {
       input: '{"temperatureC": 925, "targetDepthMm": 0.9, "surfaceCarbonPct": 0.9, "coreCarbonPct": 0.2}',

@@ -5,6 +5,7 @@
  */
 import * as v from 'valibot';
 import { MODEL_IDS } from '../physics/diffusivity';
+import { HARDNESS_UNITS } from '../physics/hardness';
 import type { Recipe } from '../physics/cycle/recipe';
 import { ALLOY_ELEMENT_MAX_PCT, MAX_CARBON_PCT } from '../physics/steel';
 import { DIFFUSIVITY_FACTOR_LIMITS, MAX_TEMPERATURE_TOLERANCE_C, MAX_TOTAL_CASE_MARGIN_PCT } from '../physics/validate';
@@ -81,15 +82,20 @@ const PartShapeSchema = v.variant('kind', [
   v.strictObject({ kind: v.literal('bar'), diameterMm: positiveNumber() }),
 ]);
 
+/** A hardness in a recipe (core hardness, ECD limit); physics checked its range when it ran. */
+const RecipeHardnessSchema = v.strictObject({ value: finiteNumber(), unit: v.picklist(HARDNESS_UNITS) });
+
 export const RecipeSchema = v.strictObject({
   name: v.optional(textUpTo(120)),
   steel: v.strictObject({
     grade: v.optional(textUpTo(60)),
     coreCarbonPct: CarbonPctSchema,
     composition: v.optional(CompositionSchema),
+    coreHardness: v.optional(RecipeHardnessSchema),
   }),
   model: v.optional(ModelIdSchema),
   thresholdCarbonPct: v.optional(CarbonPctSchema),
+  ecdHardnessLimit: v.optional(RecipeHardnessSchema),
   totalCaseMarginPct: v.optional(TotalCaseMarginSchema),
   shape: v.optional(PartShapeSchema),
   steps: v.pipe(v.array(RecipeStepSchema), v.minLength(1), v.maxLength(50)),

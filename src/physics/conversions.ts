@@ -2,7 +2,7 @@
  * The `convert` request: one value between units of a quantity, or into every unit
  * of it. Hardness (HRC ↔ HV) is included and always marked approximate.
  */
-import { hrcToHv, hvToHrc } from './hardness';
+import { CONVERTIBLE_RANGE, HARDNESS_UNITS, hardnessIn, isHardnessUnit, type HardnessUnit } from './hardness';
 import { fail, ok, type Result } from './result';
 import { convert, quantityOf, UNITS } from './units';
 import { asFields, readNumber } from './validate';
@@ -17,12 +17,11 @@ export interface ConversionResult {
   approximate: boolean;
 }
 
-const HARDNESS_UNITS = ['HRC', 'HV'] as const;
-
-function convertHardness(value: number, from: string, to: string): Result<number> {
-  if (from === to) return ok(value);
-  const out = from === 'HRC' ? hrcToHv(value) : hvToHrc(value);
-  return out === undefined ? fail('hardness.outOfTable', 'value', { value, unit: from }) : ok(out);
+function convertHardness(value: number, from: HardnessUnit, to: HardnessUnit): Result<number> {
+  const out = hardnessIn({ value, unit: from }, to);
+  return out === undefined
+    ? fail('hardness.outOfTable', 'value', { value, unit: from, ...CONVERTIBLE_RANGE[from] })
+    : ok(out);
 }
 
 /** `convert`: request `{value, from, to?}`; without `to`, into every unit of the quantity. */
@@ -32,7 +31,7 @@ export function convertRequest(request: unknown): Result<ConversionResult> {
   const value = readNumber(fields.value, 'value');
   if (!value.ok) return value;
   const from = String(fields.value.from ?? '');
-  const isHardness = (HARDNESS_UNITS as readonly string[]).includes(from);
+  const isHardness = isHardnessUnit(from);
   const quantity = isHardness ? 'hardness' : quantityOf(from);
   if (!quantity) return fail('unit.unknown', 'from', { unit: from });
   const allUnits: readonly string[] = isHardness ? HARDNESS_UNITS : UNITS[quantity as keyof typeof UNITS];
@@ -41,7 +40,8 @@ export function convertRequest(request: unknown): Result<ConversionResult> {
   const targets = to === undefined ? allUnits : [String(to)];
   const values: Record<string, number> = {};
   for (const unit of targets) {
-    const out = isHardness ? convertHardness(value.value, from, unit) : convert(value.value, from, unit);
+    const out =
+      isHardness && isHardnessUnit(unit) ? convertHardness(value.value, from, unit) : convert(value.value, from, unit);
     if (!out.ok) return out;
     values[unit] = out.value;
   }

@@ -2,6 +2,8 @@
  * A few common carburizing grades with nominal compositions: the middle of each
  * grade's specified range (SAE J404 / EN 10084 ranges, recalled from memory).
  * Nominal only: the app tells the user to use the mill certificate.
+ * `typicalCoreHardnessHrc` is common practice, from memory: the core after quench depends on
+ * the section and the quench, so the part master's or the lab's figure replaces it.
  */
 import type { Composition } from './steel';
 
@@ -11,6 +13,8 @@ export interface SteelGrade {
   name: string;
   coreCarbonPct: number;
   composition: Composition;
+  /** Typical core hardness of a carburized and quenched part, HRC (common practice, from memory). */
+  typicalCoreHardnessHrc: number;
 }
 
 export const STEEL_GRADES: readonly SteelGrade[] = [
@@ -19,17 +23,41 @@ export const STEEL_GRADES: readonly SteelGrade[] = [
     name: 'SAE 8620',
     coreCarbonPct: 0.2,
     composition: { Si: 0.25, Mn: 0.8, Cr: 0.5, Ni: 0.55, Mo: 0.2 },
+    // Typically 30–40 HRC.
+    typicalCoreHardnessHrc: 35,
   },
   {
     id: 'sae-4320',
     name: 'SAE 4320',
     coreCarbonPct: 0.2,
     composition: { Si: 0.25, Mn: 0.55, Cr: 0.5, Ni: 1.8, Mo: 0.25 },
+    // More hardenable than 8620 (nickel): typically 35–45 HRC.
+    typicalCoreHardnessHrc: 40,
   },
-  { id: '20mncr5', name: '20MnCr5', coreCarbonPct: 0.2, composition: { Si: 0.25, Mn: 1.25, Cr: 1.15, Ni: 0, Mo: 0 } },
-  { id: 'sae-1018', name: 'SAE 1018', coreCarbonPct: 0.18, composition: { Si: 0.2, Mn: 0.75, Cr: 0, Ni: 0, Mo: 0 } },
+  {
+    id: '20mncr5',
+    name: '20MnCr5',
+    coreCarbonPct: 0.2,
+    composition: { Si: 0.25, Mn: 1.25, Cr: 1.15, Ni: 0, Mo: 0 },
+    // Typically 30–42 HRC depending on section.
+    typicalCoreHardnessHrc: 36,
+  },
+  {
+    id: 'sae-1018',
+    name: 'SAE 1018',
+    coreCarbonPct: 0.18,
+    composition: { Si: 0.2, Mn: 0.75, Cr: 0, Ni: 0, Mo: 0 },
+    // Plain carbon, low hardenability: small sections about 20–25 HRC, larger ones softer.
+    typicalCoreHardnessHrc: 22,
+  },
 ];
 
 export function findGrade(id: string): SteelGrade | undefined {
   return STEEL_GRADES.find((g) => g.id === id);
+}
+
+/** A grade by its id or by its name as written (`"SAE 1018"`, any case or spacing). */
+export function findGradeByIdOrName(text: string): SteelGrade | undefined {
+  const key = text.replace(/\s+/g, '').toLowerCase();
+  return findGrade(text) ?? STEEL_GRADES.find((g) => g.name.replace(/\s+/g, '').toLowerCase() === key);
 }

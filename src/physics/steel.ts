@@ -48,7 +48,7 @@ export function alloyFactor(c: Composition): number {
   return 10 ** (0.055 * c.Si - 0.013 * c.Mn - 0.04 * c.Cr + 0.014 * c.Ni - 0.013 * c.Mo);
 }
 
-/** ECD threshold standing in for 50 HRC / 550 HV after quench and temper (common practice), wt%. */
+/** ECD threshold carbon: a stand-in for where the hardness falls to the case criterion after quench and temper (common practice; it depends on the steel and the quench), wt%. */
 export const DEFAULT_ECD_THRESHOLD_PCT = 0.4;
 /** Total case ends where carbon is core + 0.05 %C (common practice), wt%. */
 export const TOTAL_CASE_MARGIN_PCT = 0.05;

@@ -6,6 +6,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { LANGUAGES, RESOURCES } from '../../src/i18n/i18n';
 import { ERROR_CODES, WARNING_CODES } from '../../src/physics/result';
+import { CASE_CRITERION_IDS } from '../../src/physics/hardness';
 import { UNIT_WARNINGS } from '../../src/app/ui/warningText';
 import { sourceFiles } from '../sourceFiles';
 
@@ -80,6 +81,8 @@ describe('locales', () => {
       ['app.depth.solveFor.', ['depth', 'time', 'temperature']],
       ['app.depth.carbonSource.', ['potential', 'surface']],
       ['app.settings.system.', ['metric', 'us']],
+      ['app.settings.caseCriteria.', CASE_CRITERION_IDS],
+      ['app.cycle.coreSource.', ['steel', 'grade', 'default']],
       ['app.settings.quantity.', ['temperature', 'depth', 'time']],
       ['app.settings.themes.', ['dark', 'light', 'contrast']],
       ['app.pwa.status.', ['preparing', 'ready', 'offline']],

@@ -15,9 +15,18 @@ describe('convert request', () => {
     const r = convertRequest({ value: '0,040', from: 'in', to: 'mm' });
     expect(r.ok && r.value.values.mm).toBeCloseTo(1.016, 12);
   });
-  it('hardness is marked approximate (ASTM E140 values from memory)', () => {
+  it('hardness is marked approximate: 58 HRC → 653 HV (ASTM E140 Table 1 row, from memory per DOMAIN §3.5)', () => {
     const r = convertRequest({ value: 58, from: 'HRC', to: 'HV' });
     expect(r.ok && r.value.approximate).toBe(true);
-    expect(r.ok && r.value.values.HV).toBeCloseTo(595 + (3 / 5) * (697 - 595), 10);
+    expect(r.ok && r.value.values.HV).toBe(653);
+  });
+  it('refuses a hardness beyond the table and names its range: 230 HV is softer than 20 HRC', () => {
+    const r = convertRequest({ value: 230, from: 'HV', to: 'HRC' });
+    expect(r.ok).toBe(false);
+    expect(!r.ok && r.error).toEqual({
+      code: 'hardness.outOfTable',
+      field: 'value',
+      params: { value: 230, unit: 'HV', min: 238, max: 940 },
+    });
   });
 });

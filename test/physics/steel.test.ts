@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import { asQuenchedHardnessHrc, hrcToHv, hvToHrc, HRC_HV_TABLE } from '../../src/physics/hardness';
 import { alloyFactor, saturationCarbonPct } from '../../src/physics/steel';
 import { STEEL_GRADES } from '../../src/physics/grades';
 
@@ -36,32 +35,5 @@ describe('alloy factor (Gunnarson 1963, from memory)', () => {
     const factor = (id: string) => alloyFactor(STEEL_GRADES.find((g) => g.id === id)!.composition);
     expect(factor('20mncr5')).toBeCloseTo(0.8943, 4);
     expect(factor('20mncr5')).toBeLessThan(factor('sae-8620'));
-  });
-});
-
-describe('hardness (indicative)', () => {
-  it('as-quenched HRC ≈ 20 + 60·√C (Just 1969, from memory): 0.25 %C → 50 HRC', () => {
-    expect(asQuenchedHardnessHrc(0.25)).toBeCloseTo(50, 10);
-  });
-  it('levels off at 65 HRC at high carbon', () => {
-    expect(asQuenchedHardnessHrc(0.8)).toBe(65);
-    expect(asQuenchedHardnessHrc(1.2)).toBe(65);
-  });
-  it.each(HRC_HV_TABLE.map(([hrc, hv]) => [hrc, hv]))('%s HRC ↔ %s HV (ASTM E140 Table 1, from memory)', (hrc, hv) => {
-    expect(hrcToHv(hrc)).toBe(hv);
-    expect(hvToHrc(hv)).toBe(hrc);
-  });
-  it('interpolation is monotone and invertible between rows', () => {
-    let previous = 0;
-    for (let hrc = 20; hrc <= 65; hrc += 0.5) {
-      const hv = hrcToHv(hrc)!;
-      expect(hv).toBeGreaterThan(previous);
-      expect(hvToHrc(hv)).toBeCloseTo(hrc, 10);
-      previous = hv;
-    }
-  });
-  it('refuses values outside the table', () => {
-    expect(hrcToHv(19)).toBeUndefined();
-    expect(hvToHrc(900)).toBeUndefined();
   });
 });

@@ -106,6 +106,7 @@ export default function CycleScreen() {
           ctx={ctx}
         />
         {view && <ProfileChart data={view.chart} label={t('app.cycle.chartLabel')} theme={theme.value} />}
+        {view && <p class="note">{view.hardnessMethod}</p>}
         {result && <ProfileTable profile={result.simulation.profile} ctx={ctx} />}
       </ResultsCard>
       <LogSaveButton entry={logEntry} />

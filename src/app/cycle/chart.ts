@@ -10,6 +10,8 @@ export interface ProfileChartData {
   carbonPct: number[];
   hardnessHrc: number[];
   thresholdPct: number;
+  /** The case criterion in HRC, drawn across the hardness scale: the hardness curve meets it at the ECD. */
+  limitHrc: number;
   ecd: number;
   /** Legend names in full; axes carry only the unit symbols so they fit a phone. */
   labels: {
@@ -17,6 +19,7 @@ export interface ProfileChartData {
     carbon: string;
     hardness: string;
     threshold: string;
+    limit: string;
     ecd: string;
     carbonAxis: string;
     hardnessAxis: string;
@@ -57,6 +60,7 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
       { label: data.labels.carbon, scale: 'c', stroke: carbon, width: 3 },
       { label: data.labels.hardness, scale: 'hrc', stroke: hardness, width: 2, dash: [8, 5] },
       { label: data.labels.threshold, scale: 'c', stroke: mark, width: 1.5, dash: [3, 4], points: { show: false } },
+      { label: data.labels.limit, scale: 'hrc', stroke: hardness, width: 1.5, dash: [2, 3], points: { show: false } },
     ],
     hooks: {
       draw: [
@@ -83,7 +87,13 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
 }
 
 function series(data: ProfileChartData): uPlot.AlignedData {
-  return [data.depth, data.carbonPct, data.hardnessHrc, data.depth.map(() => data.thresholdPct)];
+  return [
+    data.depth,
+    data.carbonPct,
+    data.hardnessHrc,
+    data.depth.map(() => data.thresholdPct),
+    data.depth.map(() => data.limitHrc),
+  ];
 }
 
 /** Draws the chart into `el`; returns a function that redraws with new data or removes it. */

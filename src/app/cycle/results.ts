@@ -1,6 +1,6 @@
 /** Reads the cycle form into a Recipe (°C, h, mm, m/s) and runs it through the simulate adapter. */
 import { computed } from '@preact/signals';
-import { ALLOY_ELEMENTS, isModelId, type DiffusivityModelId } from '../../physics';
+import { ALLOY_ELEMENTS, isModelId, type DiffusivityModelId, type Hardness } from '../../physics';
 import type { Recipe, RecipeStep, SimulationResult } from '../../physics/cycle/recipe';
 import {
   calibrations,
@@ -21,6 +21,8 @@ import { cycleForm, type CycleForm } from './state';
 export interface CycleDefaults {
   model: DiffusivityModelId;
   ecdThresholdPct: number;
+  /** The case criterion the threshold stands for (absent: the physics default, 550 HV). */
+  ecdHardnessLimit?: Hardness;
   totalCaseMarginPct: number;
   betaMPerS: number;
   /** The chosen furnace's calibration for a model (none: uncalibrated). */
@@ -57,7 +59,7 @@ export function formFields(form: CycleForm): ReadonlySet<string> {
 /** The form fields a cycle and a plan share: steel, model, ECD threshold, shape. */
 export type BaseForm = Pick<CycleForm, 'steel' | 'model' | 'threshold' | 'shape' | 'size'>;
 
-/** Steel, model, threshold and shape of a cycle or plan request (errors into `read`); undefined when a field cannot be read. */
+/** Steel, model, threshold, case criterion and shape of a cycle or plan request (errors into `read`); undefined when a field cannot be read. */
 export function readBaseFields(
   form: BaseForm,
   settings: CycleDefaults,
@@ -72,6 +74,7 @@ export function readBaseFields(
     steel: { grade: form.steel.grade, coreCarbonPct, ...(composition ? { composition } : {}) },
     model: isModelId(form.model) ? form.model : settings.model,
     thresholdCarbonPct: threshold ?? settings.ecdThresholdPct,
+    ...(settings.ecdHardnessLimit ? { ecdHardnessLimit: settings.ecdHardnessLimit } : {}),
     totalCaseMarginPct: settings.totalCaseMarginPct,
     shape,
   };
@@ -127,6 +130,7 @@ export const cycleDefaults = computed<CycleDefaults>(() => {
   return {
     model: model.value,
     ecdThresholdPct: defaults.value.ecdThresholdPct,
+    ecdHardnessLimit: defaults.value.ecdHardnessLimit,
     totalCaseMarginPct: defaults.value.totalCaseMarginPct,
     betaMPerS: defaults.value.betaMPerS,
     calibrationFor: (m) => calibrationState(list, furnace, m),

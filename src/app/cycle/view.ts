@@ -1,7 +1,8 @@
 /** The cycle screen's worded results and chart data (kept out of the JSX). */
 import type { TFunction } from 'i18next';
-import { convert } from '../../physics';
+import { convert, findGradeByIdOrName, type IndicativeHardnessBasis } from '../../physics';
 import { calibrationWords } from '../ui/calibration';
+import { ecdLabel } from '../ui/ecdLabel';
 import { UNIT_SYMBOLS } from '../ui/format';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
@@ -17,12 +18,37 @@ export interface CycleView {
   rows: ResultRow[];
   cautions: string[];
   chart: ProfileChartData;
+  /** How the indicative hardness curve is drawn, with its anchors. */
+  hardnessMethod: string;
 }
 
 const toUnit = (mm: number, unit: string) => {
   const r = convert(mm, 'mm', unit);
   return r.ok ? r.value : Number.NaN;
 };
+
+function coreSourceWords(basis: IndicativeHardnessBasis, grade: string | undefined, t: TFunction): string {
+  const listed = grade === undefined ? undefined : findGradeByIdOrName(grade);
+  return basis.coreSource === 'grade' && listed
+    ? t('app.cycle.coreSource.grade', { grade: listed.name })
+    : t(basis.coreSource === 'steel' ? 'app.cycle.coreSource.steel' : 'app.cycle.coreSource.default');
+}
+
+/** The method of the indicative hardness in words, with the figures it was drawn through. */
+export function hardnessMethodText(
+  basis: IndicativeHardnessBasis,
+  grade: string | undefined,
+  t: TFunction,
+  show: Show,
+): string {
+  return t('app.cycle.hardnessMethod', {
+    core: show.hardness({ value: basis.coreHardnessHrc, unit: 'HRC' }),
+    coreSource: coreSourceWords(basis, grade, t),
+    limit: show.hardness(basis.limit),
+    limitHrc: show.hardness({ value: basis.limitHrc, unit: 'HRC' }, 1),
+    threshold: show.carbon(basis.thresholdCarbonPct),
+  });
+}
 
 export function cycleView(
   { recipe, simulation, calibration }: CycleResult,
@@ -33,6 +59,7 @@ export function cycleView(
   const totalH = recipe.steps.reduce((sum, s) => sum + s.durationH, 0);
   const threshold = recipe.thresholdCarbonPct ?? 0;
   const calibrated = calibrationWords(calibration, t, show);
+  const basis = simulation.hardnessBasis;
   return {
     answer: show.depth(simulation.effectiveCaseDepthMm),
     ...(calibrated?.short ? { answerNote: calibrated.short } : {}),
@@ -42,7 +69,7 @@ export function cycleView(
         : []),
       {
         key: 'ecd',
-        label: t('app.depth.ecd', { threshold: show.carbon(threshold) }),
+        label: ecdLabel(t, show, threshold, basis.limit),
         value: show.depth(simulation.effectiveCaseDepthMm),
         main: true,
       },
@@ -56,16 +83,19 @@ export function cycleView(
       carbonPct: simulation.profile.map((p) => p.carbonPct),
       hardnessHrc: simulation.profile.map((p) => p.hardnessHrc),
       thresholdPct: threshold,
+      limitHrc: basis.limitHrc,
       ecd: toUnit(simulation.effectiveCaseDepthMm, units.depth),
       labels: {
         depth: t('app.cycle.chartDepth', { unit: units.depth }),
         carbon: t('app.cycle.chartCarbon'),
         hardness: t('app.cycle.chartHardness'),
         threshold: t('app.cycle.chartThreshold', { threshold: show.carbon(threshold) }),
+        limit: t('app.cycle.chartLimit', { limit: show.hardness(basis.limit) }),
         ecd: t('app.cycle.chartEcd'),
         carbonAxis: UNIT_SYMBOLS.pctC!,
         hardnessAxis: UNIT_SYMBOLS.HRC!,
       },
     },
+    hardnessMethod: hardnessMethodText(basis, recipe.steel.grade, t, show),
   };
 }

@@ -11,6 +11,7 @@ import {
   type CaseDepthResult,
   type Composition,
   type DiffusivityModelId,
+  type Hardness,
   type TemperatureResult,
   type TimeResult,
 } from '../../physics';
@@ -48,6 +49,8 @@ export interface DepthRequest {
 interface Solved {
   request: DepthRequest;
   calibration: CalibrationState;
+  /** The case criterion the threshold stands for (from the settings; not part of the request). */
+  ecdHardnessLimit?: Hardness;
 }
 
 export type DepthResult =
@@ -60,6 +63,8 @@ export interface DepthDefaults {
   ecdThresholdPct: number;
   totalCaseMarginPct: number;
   temperatureToleranceC: number;
+  /** The case criterion the threshold stands for. */
+  ecdHardnessLimit?: Hardness;
   /** The chosen furnace's calibration (none: uncalibrated). */
   calibration?: CalibrationState;
 }
@@ -135,7 +140,11 @@ export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<
         ? temperatureForCaseDepth(request)
         : caseDepth(request);
   if (!calculated.ok) return placeError(calculated.error, FIELD_MAP, FORM_FIELDS);
-  return { errors: {}, result: { solveFor: mode, figures: calculated.value, request, calibration } as DepthResult };
+  const limit = settings.ecdHardnessLimit ? { ecdHardnessLimit: settings.ecdHardnessLimit } : {};
+  return {
+    errors: {},
+    result: { solveFor: mode, figures: calculated.value, request, calibration, ...limit } as DepthResult,
+  };
 }
 
 export const depthOutcome = computed(() =>
@@ -144,6 +153,7 @@ export const depthOutcome = computed(() =>
     ecdThresholdPct: defaults.value.ecdThresholdPct,
     totalCaseMarginPct: defaults.value.totalCaseMarginPct,
     temperatureToleranceC: defaults.value.temperatureToleranceC,
+    ecdHardnessLimit: defaults.value.ecdHardnessLimit,
     calibration: calibrationState(calibrations.value, chosenFurnace.value, model.value),
   }),
 );

@@ -3,6 +3,7 @@ import type { TFunction } from 'i18next';
 import { DIFFUSIVITY_MODELS, MODEL_IDS } from '../../physics';
 import { bandRow } from '../ui/band';
 import { calibrationWords } from '../ui/calibration';
+import { ecdLabel } from '../ui/ecdLabel';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
 import { wordWarning } from '../ui/warningText';
@@ -31,7 +32,7 @@ export function depthView(result: DepthResult, t: TFunction, show: Show, marginP
   );
   const ecdRow: ResultRow = {
     key: 'ecd',
-    label: t('app.depth.ecd', { threshold: show.carbon(f.thresholdCarbonPct) }),
+    label: ecdLabel(t, show, f.thresholdCarbonPct, result.ecdHardnessLimit),
     value: show.depth(f.effectiveCaseDepthMm),
   };
   const common: ResultRow[] = [

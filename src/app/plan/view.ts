@@ -1,6 +1,8 @@
 /** The planner's worded results: times, predictions, what binds and what would help (kept out of the JSX). */
 import type { TFunction } from 'i18next';
+import type { Hardness } from '../../physics';
 import { calibrationWords } from '../ui/calibration';
+import { ecdLabel } from '../ui/ecdLabel';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
 import { stepCautions, wordWarning } from '../ui/warningText';
@@ -48,7 +50,7 @@ export function planView({ plan, request, calibration }: PlanOutcome, t: TFuncti
     timeRow('total', t('app.plan.totalTime'), plan.totalH, show, true),
     {
       key: 'ecd',
-      label: t('app.depth.ecd', { threshold: show.carbon(threshold) }),
+      label: ecdLabel(t, show, threshold, request.ecdHardnessLimit as Hardness | undefined),
       value: show.depth(plan.predicted.effectiveCaseDepthMm),
     },
     { key: 'surface', label: t('app.depth.surfaceCarbon'), value: show.carbon(plan.predicted.surfaceCarbonPct) },

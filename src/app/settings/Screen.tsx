@@ -2,7 +2,7 @@
 import { LANGUAGES, type Language } from '../../i18n/i18n';
 import { parseShiftConfig, SHIFT_IDS } from '../../jobs/shift';
 import { language } from '../../i18n/useT';
-import { MODEL_IDS } from '../../physics';
+import { CASE_CRITERION_IDS, MODEL_IDS } from '../../physics';
 import { ChoiceField } from '../ui/ChoiceField';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
@@ -15,6 +15,7 @@ import { UNIT_CHOICES, UNIT_SYSTEMS, type DisplayQuantity, type UnitSystem } fro
 import { hrefFor } from '../shell/route';
 import { calibrations } from './calibration';
 import {
+  caseCriterion,
   readBeta,
   readBetaRange,
   readMargin,
@@ -93,6 +94,14 @@ export default function SettingsScreen() {
           onChange={(v) => patch(settings, { model: v })}
           hint={t('app.settings.modelHint')}
         />
+        <Segmented
+          name="settings-case-criterion"
+          legend={t('app.settings.caseCriterion')}
+          value={caseCriterion.value}
+          choices={CASE_CRITERION_IDS.map((c) => ({ value: c, label: t(`app.settings.caseCriteria.${c}`) }))}
+          onChange={(v) => patch(settings, { caseCriterion: v })}
+        />
+        <p class="note">{t('app.settings.caseCriterionHint')}</p>
         <div class="field-grid">
           <NumberField
             id="settings-threshold"

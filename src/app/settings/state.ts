@@ -1,14 +1,18 @@
 /**
- * App-wide settings: units, language, diffusivity model, defaults for β and the
+ * App-wide settings: units, language, diffusivity model, case criterion, defaults for β and the
  * depth thresholds, theme, shift start times. Persisted; the language and theme are applied to the page here.
  */
 import { computed, effect } from '@preact/signals';
 import type { Language } from '../../i18n/i18n';
 import { initialLanguage, language, startLanguage, switchLanguage } from '../../i18n/useT';
 import {
+  CASE_CRITERIA,
+  DEFAULT_CASE_CRITERION,
   DEFAULT_ECD_THRESHOLD_PCT,
   DEFAULT_MODEL,
+  isCaseCriterionId,
   isModelId,
+  type CaseCriterionId,
   TOTAL_CASE_MARGIN_PCT,
   type DiffusivityModelId,
   type Result,
@@ -34,6 +38,8 @@ export interface Settings {
   language: string;
   model: string;
   beta: FieldText;
+  /** The hardness the effective case depth stands for (an id of CASE_CRITERIA). */
+  caseCriterion: string;
   ecdThreshold: FieldText;
   totalCaseMargin: FieldText;
   /** Furnace temperature tolerance for the likely range, typed in °C or °F (a difference). */
@@ -52,6 +58,7 @@ export const DEFAULT_SETTINGS: Settings = {
   language: '',
   model: DEFAULT_MODEL,
   beta: field(String(DEFAULT_BETA_M_PER_S / BETA_INPUT_SCALE)),
+  caseCriterion: DEFAULT_CASE_CRITERION,
   ecdThreshold: field(String(DEFAULT_ECD_THRESHOLD_PCT)),
   totalCaseMargin: field(String(TOTAL_CASE_MARGIN_PCT)),
   temperatureTolerance: field(String(DEFAULT_TEMPERATURE_TOLERANCE_C), 'C'),
@@ -77,6 +84,10 @@ export const units = computed(() => displayUnits(settings.value.unitSystem, sett
 
 export const model = computed<DiffusivityModelId>(() =>
   isModelId(settings.value.model) ? settings.value.model : DEFAULT_MODEL,
+);
+
+export const caseCriterion = computed<CaseCriterionId>(() =>
+  isCaseCriterionId(settings.value.caseCriterion) ? settings.value.caseCriterion : DEFAULT_CASE_CRITERION,
 );
 
 export const theme = computed<Theme>(() =>
@@ -133,6 +144,7 @@ export const defaults = computed(() => {
   return {
     betaMPerS: beta.ok ? beta.value : DEFAULT_BETA_M_PER_S,
     ecdThresholdPct: threshold.ok ? threshold.value : DEFAULT_ECD_THRESHOLD_PCT,
+    ecdHardnessLimit: CASE_CRITERIA[caseCriterion.value],
     totalCaseMarginPct: margin !== 'notPositive' && margin.ok ? margin.value : TOTAL_CASE_MARGIN_PCT,
     temperatureToleranceC: tolerance.ok ? tolerance.value : DEFAULT_TEMPERATURE_TOLERANCE_C,
     betaRangeMPerS: betaRange.ok ? betaRange.value : { ...DEFAULT_BETA_RANGE_M_PER_S },

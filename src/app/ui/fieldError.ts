@@ -18,6 +18,9 @@ const UNIT_PARAMS: Partial<
   'solve.temperatureAboveRange': { quantity: 'temperature', physicsUnit: 'C', params: ['minC', 'maxC'] },
   'depth.tooDeep': { quantity: 'depth', physicsUnit: 'mm', params: ['value', 'max'] },
   'time.tooLong': { quantity: 'time', physicsUnit: 'h', params: ['value', 'max'] },
+  'traverse.depthNegative': { quantity: 'depth', physicsUnit: 'mm', params: ['value'] },
+  'traverse.depthRepeated': { quantity: 'depth', physicsUnit: 'mm', params: ['value'] },
+  'traverse.depthNotIncreasing': { quantity: 'depth', physicsUnit: 'mm', params: ['value', 'previous'] },
 };
 
 /** The sentence for an error, with unit-bearing figures in the chosen units. */

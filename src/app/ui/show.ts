@@ -2,7 +2,7 @@
  * Physics values (°C, mm, h, %C, m²/s) shown in the user's units and locale.
  * Every figure on a screen goes through here, so every figure has its unit.
  */
-import { convert, convertTemperatureDifference, hrcToHv } from '../../physics';
+import { convert, convertTemperatureDifference, hrcToHv, type Hardness } from '../../physics';
 import { formatHoursMinutes, formatNumber, formatQuantity, formatRange, formatScientific, NO_VALUE } from './format';
 import type { DisplayUnits } from './units';
 
@@ -23,6 +23,8 @@ export interface Show {
   hardnessHrc(hrc: number): string;
   /** Approximate HV for an HRC value, or NO_VALUE outside the table. */
   hardnessHv(hrc: number): string;
+  /** A hardness in its own scale (whole numbers unless `digits` says otherwise). */
+  hardness(h: Hardness, digits?: number): string;
   number(value: number, digits: number): string;
 }
 
@@ -54,6 +56,7 @@ export function makeShow(units: DisplayUnits, locale: string): Show {
     diffusivity: (d) => formatScientific(d, 'm2/s', locale),
     hardnessHrc: (hrc) => formatQuantity(hrc, 'HRC', locale),
     hardnessHv: (hrc) => formatQuantity(hrcToHv(hrc) ?? Number.NaN, 'HV', locale),
+    hardness: (h, digits) => formatQuantity(h.value, h.unit, locale, digits),
     number: (value, digits) => formatNumber(value, locale, { digits }),
   };
 }

@@ -31,6 +31,10 @@ export const UNIT_WARNINGS: Partial<Record<WarningCode, Readonly<Record<string, 
   'plan.lowerTemperature': { deltaC: 'temperatureChange' },
   'plan.allowMoreTime': { totalH: 'time' },
   'plan.shortenHardening': { timeH: 'time' },
+  'hardness.coreAboveCeiling': { carbonPct: 'carbon' },
+  'hardness.limitAboveCeilingAtThreshold': { thresholdPct: 'carbon' },
+  'traverse.crossedInHv': { depthMm: 'depth' },
+  'traverse.neverReachesLimit': { depthMm: 'depth' },
 };
 
 const FORMAT: Record<Kind, (show: Show, value: number) => string> = {

@@ -3,7 +3,6 @@
  * through the surface carbon at depth 0 and the cell centres, flat beyond the last centre
  * (the inner boundary is closed).
  */
-import { asQuenchedHardnessHrc } from '../hardness';
 import type { ProfilePoint } from './recipe';
 import type { SolverRun } from './solver';
 
@@ -57,8 +56,12 @@ function interpolate(run: SolverRun, depthM: number, fromNode: number, out: { ca
   return node;
 }
 
-/** `PROFILE_POINTS` evenly spaced points from the surface to `maxDepthM`, with indicative hardness. */
-export function sampleProfile(run: SolverRun, maxDepthM: number): ProfilePoint[] {
+/** `PROFILE_POINTS` evenly spaced points from the surface to `maxDepthM`, with hardness from carbon. */
+export function sampleProfile(
+  run: SolverRun,
+  maxDepthM: number,
+  hardnessHrc: (carbonPct: number) => number,
+): ProfilePoint[] {
   const points: ProfilePoint[] = [];
   const value = { carbonPct: 0 };
   let node = 0;
@@ -68,7 +71,7 @@ export function sampleProfile(run: SolverRun, maxDepthM: number): ProfilePoint[]
     points.push({
       depthMm: depthM * 1e3,
       carbonPct: value.carbonPct,
-      hardnessHrc: asQuenchedHardnessHrc(value.carbonPct),
+      hardnessHrc: hardnessHrc(value.carbonPct),
     });
   }
   return points;

@@ -3,6 +3,9 @@
  * every default filled in, or a typed error naming the field (`steps.2.durationH`).
  * Nothing here throws.
  */
+import { CONVERTIBLE_RANGE } from '../hardness';
+import { checkCoreBelowLimit } from '../indicativeHardness';
+import { readOptionalHardness } from '../readHardness';
 import { fail, ok, type InputError, type Result } from '../result';
 import { DEFAULT_ECD_THRESHOLD_PCT } from '../steel';
 import {
@@ -110,6 +113,13 @@ function readSteel(raw: unknown): Result<SteelSpec> {
   if (!composition.ok) return composition;
   const steel: SteelSpec = { coreCarbonPct: core.value };
   if (composition.value !== undefined) steel.composition = composition.value;
+  // The indicative hardness curve is drawn in HRC: the core must convert.
+  const coreHardness = under(
+    'coreHardness',
+    readOptionalHardness(fields.value.coreHardness, undefined, CONVERTIBLE_RANGE),
+  );
+  if (!coreHardness.ok) return coreHardness;
+  if (coreHardness.value !== undefined) steel.coreHardness = coreHardness.value;
   const grade = text(fields.value.grade);
   if (grade !== undefined) steel.grade = grade;
   return ok(steel);
@@ -145,7 +155,7 @@ function readShape(raw: unknown): Result<PartShape> {
 export type CycleBase = Omit<Recipe, 'steps' | 'model' | 'thresholdCarbonPct' | 'shape'> &
   Required<Pick<Recipe, 'model' | 'thresholdCarbonPct' | 'shape'>>;
 
-/** Steel, model, ECD threshold (above core) and shape of a request, defaults filled in, and its name. */
+/** Steel, model, ECD threshold (above core), hardness limit and shape of a request, defaults filled in, and its name. */
 export function readCycleBase(f: Fields): Result<CycleBase> {
   const steel = under('steel', readSteel(f.steel));
   if (!steel.ok) return steel;
@@ -160,11 +170,17 @@ export function readCycleBase(f: Fields): Result<CycleBase> {
   if (!(thresholdCarbonPct > core)) {
     return fail('threshold.notAboveCore', 'thresholdCarbonPct', { thresholdPct: thresholdCarbonPct, corePct: core });
   }
+  const limit = under('ecdHardnessLimit', readOptionalHardness(f.ecdHardnessLimit, undefined, CONVERTIBLE_RANGE));
+  if (!limit.ok) return limit;
+  const ecdHardnessLimit = limit.value;
+  const hardness = checkCoreBelowLimit({ steel: steel.value, thresholdCarbonPct, ecdHardnessLimit });
+  if (!hardness.ok) return hardness;
   const shape = under('shape', readShape(f.shape));
   if (!shape.ok) return shape;
   const margin = readOptionalNumber(f, 'totalCaseMarginPct');
   if (!margin.ok) return margin;
   const base: CycleBase = { steel: steel.value, model: model.value, thresholdCarbonPct, shape: shape.value };
+  if (ecdHardnessLimit !== undefined) base.ecdHardnessLimit = ecdHardnessLimit;
   if (margin.value !== undefined) {
     const checked = checkTotalCaseMargin(margin.value, 'totalCaseMarginPct');
     if (!checked.ok) return checked;

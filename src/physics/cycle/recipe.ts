@@ -4,6 +4,8 @@
  * Units in names; carbon in wt%, β in m/s.
  */
 import type { DiffusivityModelId } from '../diffusivity';
+import type { Hardness } from '../hardness';
+import type { IndicativeHardnessBasis } from '../indicativeHardness';
 import type { Warning } from '../result';
 import type { Composition } from '../steel';
 
@@ -35,6 +37,8 @@ export interface SteelSpec {
   grade?: string;
   coreCarbonPct: number;
   composition?: Composition;
+  /** Core hardness after quench (the part master's or the lab's); the grade's typical value when absent. */
+  coreHardness?: Hardness;
 }
 
 export interface Recipe {
@@ -42,6 +46,8 @@ export interface Recipe {
   steel: SteelSpec;
   model?: DiffusivityModelId;
   thresholdCarbonPct?: number;
+  /** The hardness the effective case depth stands for: 550 HV (ISO 18203) when absent, or 50 HRC (SAE J423). */
+  ecdHardnessLimit?: Hardness;
   /** Total case ends this far above core carbon, %C (default TOTAL_CASE_MARGIN_PCT). */
   totalCaseMarginPct?: number;
   shape?: PartShape;
@@ -51,7 +57,7 @@ export interface Recipe {
 export interface ProfilePoint {
   depthMm: number;
   carbonPct: number;
-  /** Indicative maximum as-quenched hardness. */
+  /** Indicative hardness (indicativeHardness.ts): the criterion's hardness at the threshold carbon, the core's in the core. */
   hardnessHrc: number;
 }
 
@@ -66,5 +72,7 @@ export interface SimulationResult {
   surfaceCarbonPct: number;
   profile: ProfilePoint[];
   surfaceHistory: SurfaceHistoryPoint[];
+  /** The anchors of the profile's indicative hardness. */
+  hardnessBasis: IndicativeHardnessBasis;
   warnings: Warning[];
 }

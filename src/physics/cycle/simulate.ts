@@ -3,6 +3,7 @@
  * depths, carbon profile, surface history and cautions out.
  */
 import { DIFFUSIVITY_MODELS, DEFAULT_MODEL } from '../diffusivity';
+import { indicativeHardnessBasis, indicativeHardnessHrc } from '../indicativeHardness';
 import { fail, ok, type Result } from '../result';
 import { DEFAULT_ECD_THRESHOLD_PCT, totalCaseThresholdPct } from '../steel';
 import { SECONDS_PER_HOUR } from '../units';
@@ -64,16 +65,19 @@ export function runCycle(
   options: Omit<CycleOptions, 'resolution'> = {},
 ): SimulationResult {
   const run = solveRecipe(recipe, { ...options, resolution });
-  const effectiveM = depthToCarbonM(run, recipe.thresholdCarbonPct ?? DEFAULT_ECD_THRESHOLD_PCT);
+  const thresholdCarbonPct = recipe.thresholdCarbonPct ?? DEFAULT_ECD_THRESHOLD_PCT;
+  const effectiveM = depthToCarbonM(run, thresholdCarbonPct);
   const totalM = depthToCarbonM(run, totalCaseThresholdPct(recipe.steel.coreCarbonPct, recipe.totalCaseMarginPct));
   const totalCaseDepthMm = totalM * 1e3;
+  const hardness = indicativeHardnessBasis({ ...recipe, thresholdCarbonPct });
   return {
     effectiveCaseDepthMm: effectiveM * 1e3,
     totalCaseDepthMm,
     surfaceCarbonPct: run.surfaceCarbonPct,
-    profile: sampleProfile(run, profileDepthM(run, totalM)),
+    profile: sampleProfile(run, profileDepthM(run, totalM), (c) => indicativeHardnessHrc(c, hardness.basis)),
     surfaceHistory: surfaceHistory(run),
-    warnings: cycleWarnings(recipe, run, totalCaseDepthMm),
+    hardnessBasis: hardness.basis,
+    warnings: [...cycleWarnings(recipe, run, totalCaseDepthMm), ...hardness.warnings],
   };
 }
 

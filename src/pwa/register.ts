@@ -4,11 +4,11 @@
  * version waits until the user accepts; only then is the page reloaded. Form state
  * is saved on every keystroke (app/ui/persist.ts), so the reload loses nothing.
  */
-import { applyUpdate, offline, offlineReady, updateWaiting } from './state';
+import { watchReachability } from './reachability';
+import { applyUpdate, offlineReady, updateWaiting } from './state';
 
 export function registerServiceWorker(): void {
-  window.addEventListener('online', () => (offline.value = false));
-  window.addEventListener('offline', () => (offline.value = true));
+  watchReachability();
   if (!import.meta.env.PROD || !('serviceWorker' in navigator)) return;
   if (navigator.serviceWorker.controller) offlineReady.value = true; // a worker already serves this page from its cache
   void start();

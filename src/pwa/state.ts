@@ -5,7 +5,7 @@ import { signal } from '@preact/signals';
 export const offlineReady = signal(false);
 /** A new version is installed and waiting for the user's go-ahead. */
 export const updateWaiting = signal(false);
-/** The browser reports no network. */
+/** The browser reports no network, or the app's own server does not answer (reachability.ts). */
 export const offline = signal(typeof navigator !== 'undefined' && navigator.onLine === false);
 
 /** Set by the registration: activates the waiting version (the page reloads once it controls). */

@@ -54,6 +54,40 @@ function wordWarnings(value: unknown): unknown {
   return Object.fromEntries(entries);
 }
 
+/**
+ * Decimals kept in the JSON output by the unit a key names (depthMm, carbonPct, tempC, timeH,
+ * hardnessHrc): finer than any figure the trade reads, without floating noise (900.0000000000001).
+ * Keys without a unit keep 6 significant digits; very small quantities (D, β) 4 significant.
+ */
+const DECIMALS_BY_UNIT: readonly [RegExp, number][] = [
+  [/Mm$/u, 4],
+  [/Pct$/u, 4],
+  [/(?:^|[a-z])C$/u, 2],
+  [/(?:^|[a-z])H$/u, 4],
+  [/Hrc$/u, 1],
+  [/Hv$/u, 0],
+];
+const SIGNIFICANT_SMALL = /(?:M2PerS|MPerS)$/u;
+
+function roundFor(key: string | undefined, value: number): number {
+  if (Number.isInteger(value) || value === 0) return value;
+  if (key !== undefined && SIGNIFICANT_SMALL.test(key)) return Number(value.toPrecision(4));
+  const decimals = key === undefined ? undefined : DECIMALS_BY_UNIT.find(([pattern]) => pattern.test(key))?.[1];
+  return decimals === undefined ? Number(value.toPrecision(6)) : Number(value.toFixed(decimals));
+}
+
+/** Every number of a result rounded by the unit of its own key, or of the nearest enclosing key that names one. */
+export function roundOutput(value: unknown, key?: string): unknown {
+  if (typeof value === 'number') return roundFor(key, value);
+  if (Array.isArray(value)) return value.map((item) => roundOutput(item, key));
+  if (typeof value !== 'object' || value === null) return value;
+  return Object.fromEntries(
+    Object.entries(value).map(([k, v]) => [k, roundOutput(v, hasUnit(k) || key === undefined ? k : key)]),
+  );
+}
+
+const hasUnit = (key: string) => SIGNIFICANT_SMALL.test(key) || DECIMALS_BY_UNIT.some(([pattern]) => pattern.test(key));
+
 const inputError = (error: InputError): CliError => ({
   code: error.code,
   message: errorMessage(t, error),
@@ -91,7 +125,7 @@ export function runCli(
   }
   const result = command(request);
   return result.ok
-    ? { output: wordWarnings(result.value) as object, exitCode: 0 }
+    ? { output: roundOutput(wordWarnings(result.value)) as object, exitCode: 0 }
     : { output: { error: inputError(result.error) }, exitCode: 1 };
 }
 

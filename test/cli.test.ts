@@ -1,6 +1,6 @@
 import { execFileSync, spawnSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../src/cli';
+import { roundOutput, runCli } from '../src/cli';
 
 const from = (text: string) => () => text;
 
@@ -92,5 +92,43 @@ describe('CLI (runCli)', () => {
     });
     expect(run.status).toBe(0);
     expect(JSON.parse(run.stdout).timeH).toBeGreaterThan(6);
+  });
+});
+
+describe('CLI numbers: rounded by the unit their key names, still numbers', () => {
+  it('drops floating noise and keeps the digits the trade reads', () => {
+    expect(
+      roundOutput({
+        temperatureC: 900.0000000000001,
+        effectiveCaseDepthMm: 0.8637132313104543,
+        surfaceCarbonPct: 0.8763801039992863,
+        timeH: 5.816666666666666,
+        diffusivityM2PerS: 1.515173095455378e-11,
+        alloyFactor: 1.1180929847,
+        hardnessHrc: 58.2637,
+      }),
+    ).toEqual({
+      temperatureC: 900,
+      effectiveCaseDepthMm: 0.8637,
+      surfaceCarbonPct: 0.8764,
+      timeH: 5.8167,
+      diffusivityM2PerS: 1.515e-11,
+      alloyFactor: 1.11809,
+      hardnessHrc: 58.3,
+    });
+  });
+  it('a nested min/max takes the unit of the key that holds it', () => {
+    expect(roundOutput({ modelRangeC: { min: 912.123456, max: 930.98765 }, bandMm: [0.812345, 0.9] })).toEqual({
+      modelRangeC: { min: 912.12, max: 930.99 },
+      bandMm: [0.8123, 0.9],
+    });
+  });
+  it('every number of a real cycle run is short (no 16-digit floats)', () => {
+    const { output } = runCli(['simulate', 'public/examples/pinion-kr2231-cycle.json'], (file) =>
+      execFileSync('cat', [file!], { encoding: 'utf8' }),
+    );
+    const numbers = JSON.stringify(output).match(/-?\d+\.\d+(?:e-?\d+)?/g) ?? [];
+    expect(numbers.length).toBeGreaterThan(50);
+    for (const n of numbers) expect(n.replace(/e.*$/, '').replace(/^-?\d+\./, '').length).toBeLessThanOrEqual(6);
   });
 });

@@ -1,6 +1,7 @@
 /** The physics engine's public surface, shared by the CLI, the app, the tests and the benchmarks. */
 export * from './result';
 export * from './units';
+export * from './duration';
 export * from './diffusivity';
 export * from './closedForm';
 export * from './rulesOfThumb';

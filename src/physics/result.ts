@@ -10,6 +10,7 @@
 export const ERROR_CODES = [
   'number.empty',
   'number.invalid',
+  'duration.invalid',
   'field.missing',
   'field.notNumber',
   'request.notObject',

@@ -1,6 +1,6 @@
 /** A labelled numeric input: accepts a decimal comma, shows its unit and its error in words beside it. */
 import { language } from '../../i18n/useT';
-import { displayText, type FieldText } from './fieldText';
+import { displayText, takesDuration, type FieldText } from './fieldText';
 import { describedBy, FieldNotes } from './FieldNotes';
 import { UNIT_SYMBOLS } from './format';
 
@@ -45,7 +45,8 @@ export function NumberField({
         <input
           id={id}
           type="text"
-          inputMode="decimal"
+          // A time may be typed as 1:20 or 80 min, which the digits-only keyboard cannot.
+          inputMode={takesDuration(unit) ? 'text' : 'decimal'}
           autoComplete="off"
           spellcheck={false}
           value={shown}

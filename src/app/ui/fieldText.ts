@@ -3,7 +3,16 @@
  * in. Values are converted to physics units only when read, so changing the unit
  * setting never rewrites what was typed, and a decimal comma is always accepted.
  */
-import { convert, convertTemperatureDifference, fail, parseNumber, type Result } from '../../physics';
+import {
+  convert,
+  convertTemperatureDifference,
+  fail,
+  parseDuration,
+  parseNumber,
+  quantityOf,
+  type Result,
+  type TimeUnit,
+} from '../../physics';
 import { formatInput } from './format';
 
 export interface FieldText {
@@ -14,9 +23,16 @@ export interface FieldText {
 
 export const field = (text: string, unit = ''): FieldText => ({ text, unit });
 
+/** Whether a field in `unit` takes a duration ("1:20", "80 min", "1 h 20") besides a plain number. */
+export const takesDuration = (unit: string): boolean => quantityOf(unit) === 'time';
+
+function parseTyped(value: FieldText): Result<number> {
+  return takesDuration(value.unit) ? parseDuration(value.text, value.unit as TimeUnit) : parseNumber(value.text);
+}
+
 /** The typed value in `toUnit` (or as typed when unit-less), with the field name on any error. */
 export function readField(value: FieldText, name: string, toUnit = value.unit): Result<number> {
-  const parsed = parseNumber(value.text);
+  const parsed = parseTyped(value);
   if (!parsed.ok) return fail(parsed.error.code, name, parsed.error.params);
   if (value.unit === '' || value.unit === toUnit) return parsed;
   const converted = convert(parsed.value, value.unit, toUnit);
@@ -31,7 +47,7 @@ export function readOptionalField(value: FieldText, name: string, toUnit = value
 /** The text to show in an input displayed in `displayUnit`: as typed, or converted when typed in another unit. */
 export function displayText(value: FieldText, displayUnit: string, locale: string): string {
   if (value.unit === '' || value.unit === displayUnit) return value.text;
-  const parsed = parseNumber(value.text);
+  const parsed = parseTyped(value);
   if (!parsed.ok) return value.text;
   const converted = convert(parsed.value, value.unit, displayUnit);
   return converted.ok ? formatInput(converted.value, displayUnit, locale) : value.text;

@@ -8,10 +8,9 @@
  */
 import { fitDiffusivityFactor, type CalibrationFit, type CalibrationSample } from '../physics/calibration';
 import { depthFigures, readCaseSpec } from '../physics/caseDepth';
-import { scaledDiffusivity } from '../physics/cycle/plan';
 import { readRecipe } from '../physics/cycle/readRecipe';
 import { runCycle } from '../physics/cycle/simulate';
-import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, type DiffusivityModelId } from '../physics/diffusivity';
+import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, scaledDiffusivity, type DiffusivityModelId } from '../physics/diffusivity';
 import type { Result } from '../physics/result';
 import { physicsRequestOf } from './inputs';
 import { compareNewestFirst } from './query';

@@ -8,6 +8,14 @@ import { carbonWtPctToMoleFraction } from './units';
 
 export type DiffusivityModelId = 'agren' | 'tibbetts' | 'wells-batz-mehl';
 
+/** D(T, C) in m²/s for T in K and carbon in wt%: a published model, or a stand-in in tests. */
+export type DiffusivityFunction = (tempK: number, carbonPct: number) => number;
+
+/** A model's D times a furnace calibration factor (the model itself when the factor is 1). */
+export function scaledDiffusivity(diffusivity: DiffusivityFunction, factor: number): DiffusivityFunction {
+  return factor === 1 ? diffusivity : (tempK, carbonPct) => factor * diffusivity(tempK, carbonPct);
+}
+
 export const DEFAULT_MODEL: DiffusivityModelId = 'agren';
 
 /** Gas constant in cal/(mol·K), as used by the models published in calories. */
@@ -44,7 +52,7 @@ export function wellsBatzMehlDiffusivity(tempK: number, carbonPct: number): numb
 export interface DiffusivityModel {
   id: DiffusivityModelId;
   /** D in m²/s for T in K and carbon in wt%. */
-  diffusivity: (tempK: number, carbonPct: number) => number;
+  diffusivity: DiffusivityFunction;
   /** Short citation shown in the app and the CLI output. */
   source: string;
 }

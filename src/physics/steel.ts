@@ -1,13 +1,41 @@
 /**
- * Limits and alloy effects of carburizing steels: saturation (Acm), the alloy
- * factor on surface carbon, and the depth thresholds.
+ * Limits and alloy effects of carburizing steels: where austenite exists (A1, the core's Ac3),
+ * saturation (Acm), the alloy factor on surface carbon, and the depth thresholds.
  */
 import { interpolateTable } from './interpolate';
+
+/** A1, the eutectoid temperature of the Fe–Fe₃C diagram, °C: austenite exists only above it. */
+export const EUTECTOID_TEMP_C = 727;
+
+/** There is austenite to carburize at this temperature (above A1; at A1 itself, none yet). */
+export const hasAustenite = (tempC: number): boolean => tempC > EUTECTOID_TEMP_C;
+
+/** Share of a linear ramp's duration, from its start (0) to its end (1). */
+export interface RampSpan {
+  from: number;
+  until: number;
+}
+
+/**
+ * The part of a linear ramp from `startC` to `endC` spent above A1, as shares of its duration;
+ * undefined when it never rises above A1. A soak is all or nothing. Equivalent time and the
+ * cycle solver both cut ramps here, so nothing happens before a heat-up crosses A1.
+ */
+export function austeniteSpan(startC: number, endC: number): RampSpan | undefined {
+  const startHot = hasAustenite(startC);
+  const endHot = hasAustenite(endC);
+  if (!startHot && !endHot) return undefined;
+  if (startHot && endHot) return { from: 0, until: 1 };
+  const crossing = (EUTECTOID_TEMP_C - startC) / (endC - startC);
+  return endHot ? { from: crossing, until: 1 } : { from: 0, until: crossing };
+}
 
 /**
  * Carbon solubility limit of austenite (the Acm line), wt% against °C.
  * 727 °C → 0.77 and 1148 °C → 2.11 are the eutectoid and eutectic points of the
- * Fe–Fe₃C diagram (widely tabulated); the points between are approximate, from memory.
+ * Fe–Fe₃C diagram (widely tabulated); the points between are approximate, from memory
+ * (±0.05 %C). Above the eutectic austenite holds at most about 2.11 %C (the solidus falls
+ * from there); the last row carries it to 1150 °C, the hottest temperature accepted.
  */
 export const ACM_TABLE: readonly (readonly [number, number])[] = [
   [727, 0.77],
@@ -19,9 +47,10 @@ export const ACM_TABLE: readonly (readonly [number, number])[] = [
   [1050, 1.64],
   [1100, 1.83],
   [1148, 2.11],
+  [1150, 2.11],
 ];
 
-/** Saturation carbon of austenite at a temperature, wt%; undefined outside 727–1148 °C. */
+/** Saturation carbon of austenite at a temperature, wt%; undefined outside 727–1150 °C. */
 export function saturationCarbonPct(tempC: number): number | undefined {
   return interpolateTable(ACM_TABLE, tempC);
 }
@@ -41,11 +70,24 @@ export const ALLOY_ELEMENTS = ['Si', 'Mn', 'Cr', 'Ni', 'Mo'] as const;
 export const ALLOY_ELEMENT_MAX_PCT = 10;
 
 /**
- * Gunnarson (1963), alloy factor (from memory): the surface carbon of an alloy steel equals
- * the plain-carbon value for the same atmosphere × 10^(0.055·Si − 0.013·Mn − 0.040·Cr + 0.014·Ni − 0.013·Mo).
+ * Gunnarson (1963), alloy factor (from memory): log10(%C_plain / %C_alloy) = 0.055·Si − 0.013·Mn
+ * − 0.040·Cr + 0.014·Ni − 0.013·Mo, so the surface carbon of an alloy steel is the plain-carbon
+ * value for the same atmosphere × 10^−(0.055·Si − 0.013·Mn − 0.040·Cr + 0.014·Ni − 0.013·Mo).
+ * Si and Ni raise the activity of carbon in austenite (less carbon at the same potential);
+ * Cr, Mn and Mo lower it (more carbon).
  */
 export function alloyFactor(c: Composition): number {
-  return 10 ** (0.055 * c.Si - 0.013 * c.Mn - 0.04 * c.Cr + 0.014 * c.Ni - 0.013 * c.Mo);
+  return 10 ** -(0.055 * c.Si - 0.013 * c.Mn - 0.04 * c.Cr + 0.014 * c.Ni - 0.013 * c.Mo);
+}
+
+/**
+ * Andrews (1965), J. Iron Steel Inst. 203, 721 (from memory): the Ac3 of a steel, °C, above which
+ * it is all austenite: 910 − 203·√C − 15.2·Ni + 44.7·Si + 31.5·Mo (+ 104·V + 13.1·W, elements
+ * not recorded here), wt%. Between A1 and Ac3 ferrite and austenite coexist.
+ */
+export function ac3TempC(carbonPct: number, c?: Composition): number {
+  const alloy = c ? -15.2 * c.Ni + 44.7 * c.Si + 31.5 * c.Mo : 0;
+  return 910 - 203 * Math.sqrt(Math.max(carbonPct, 0)) + alloy;
 }
 
 /** ECD threshold standing in for 50 HRC / 550 HV after quench and temper (common practice), wt%. */

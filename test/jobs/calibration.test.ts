@@ -9,7 +9,7 @@ import { calibrateFurnace, calibrationSamples, furnacesWithLabDepth } from '../.
 import type { JobInputs } from '../../src/jobs/inputs';
 import type { Job } from '../../src/jobs/schema';
 import { caseDepth, timeForCaseDepth } from '../../src/physics/caseDepth';
-import { scaledDiffusivity } from '../../src/physics/cycle/plan';
+import { scaledDiffusivity } from '../../src/physics/diffusivity';
 import type { Recipe } from '../../src/physics/cycle/recipe';
 import { runCycle } from '../../src/physics/cycle/simulate';
 import { DIFFUSIVITY_MODELS, type DiffusivityModelId } from '../../src/physics/diffusivity';

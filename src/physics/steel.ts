@@ -71,23 +71,37 @@ export const ALLOY_ELEMENT_MAX_PCT = 10;
 
 /**
  * Gunnarson (1963), alloy factor (from memory): log10(%C_plain / %C_alloy) = 0.055·Si − 0.013·Mn
- * − 0.040·Cr + 0.014·Ni − 0.013·Mo, so the surface carbon of an alloy steel is the plain-carbon
- * value for the same atmosphere × 10^−(0.055·Si − 0.013·Mn − 0.040·Cr + 0.014·Ni − 0.013·Mo).
- * Si and Ni raise the activity of carbon in austenite (less carbon at the same potential);
- * Cr, Mn and Mo lower it (more carbon).
+ * − 0.040·Cr + 0.014·Ni − 0.013·Mo (wt%). Si and Ni raise the activity of carbon in austenite
+ * (less carbon at the same potential); Cr, Mn and Mo lower it (more carbon).
  */
+export const GUNNARSON_COEFFICIENTS: Readonly<Composition> = {
+  Si: 0.055,
+  Mn: -0.013,
+  Cr: -0.04,
+  Ni: 0.014,
+  Mo: -0.013,
+};
+
+/** Σ coefficient × wt% over the alloying elements. */
+const linearIn = (c: Composition, coefficients: Readonly<Partial<Composition>>) =>
+  ALLOY_ELEMENTS.reduce((sum, e) => sum + (coefficients[e] ?? 0) * c[e], 0);
+
+/** Surface carbon of an alloy steel over the plain-carbon value for the same atmosphere (Gunnarson): 10^−Σ. */
 export function alloyFactor(c: Composition): number {
-  return 10 ** -(0.055 * c.Si - 0.013 * c.Mn - 0.04 * c.Cr + 0.014 * c.Ni - 0.013 * c.Mo);
+  return 10 ** -linearIn(c, GUNNARSON_COEFFICIENTS);
 }
 
 /**
- * Andrews (1965), J. Iron Steel Inst. 203, 721 (from memory): the Ac3 of a steel, °C, above which
- * it is all austenite: 910 − 203·√C − 15.2·Ni + 44.7·Si + 31.5·Mo (+ 104·V + 13.1·W, elements
- * not recorded here), wt%. Between A1 and Ac3 ferrite and austenite coexist.
+ * Andrews (1965), J. Iron Steel Inst. 203, 721 (from memory): Ac3 (°C) = 910 − 203·√C − 15.2·Ni
+ * + 44.7·Si + 31.5·Mo (+ 104·V + 13.1·W, elements not recorded here), wt%. Above it a steel is
+ * all austenite; between A1 and Ac3 ferrite and austenite coexist.
  */
+export const ANDREWS_AC3 = { baseC: 910, sqrtCarbon: -203, elements: { Ni: -15.2, Si: 44.7, Mo: 31.5 } } as const;
+
+/** Ac3 of a steel of this carbon and composition, °C (Andrews 1965). */
 export function ac3TempC(carbonPct: number, c?: Composition): number {
-  const alloy = c ? -15.2 * c.Ni + 44.7 * c.Si + 31.5 * c.Mo : 0;
-  return 910 - 203 * Math.sqrt(Math.max(carbonPct, 0)) + alloy;
+  const alloy = c ? linearIn(c, ANDREWS_AC3.elements) : 0;
+  return ANDREWS_AC3.baseC + ANDREWS_AC3.sqrtCarbon * Math.sqrt(Math.max(carbonPct, 0)) + alloy;
 }
 
 /** ECD threshold standing in for 50 HRC / 550 HV after quench and temper (common practice), wt%. */

@@ -97,6 +97,15 @@ describe('register of approximate constants', () => {
     expect(nominal.effectiveCaseDepthMm).toBeCloseTo(1.0827, 4);
   });
 
+  it('the README’s table shows the recorded figures', () => {
+    const readme = readFileSync('README.md', 'utf8');
+    const pct = (x: number) => `${x > 0 ? '+' : '−'}${Math.abs(x).toFixed(2)} %`;
+    for (const a of moving) {
+      if (a.effect.kind !== 'result') continue;
+      expect(readme, a.id).toContain(`${pct(a.effect.minusPct)} / ${pct(a.effect.plusPct)}`);
+    }
+  });
+
   it('every physics module that marks a value "from memory" or "common practice" has an entry', () => {
     // Methods and rules with no value of their own, or values listed under the module that holds them.
     const noValue: Record<string, string> = {

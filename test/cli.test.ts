@@ -22,7 +22,22 @@ describe('CLI (runCli)', () => {
       error: {
         code: 'temperature.outOfRange',
         field: 'temperatureC',
-        message: 'Temperature 1200 °C is outside 700–1150 °C.',
+        message: 'Temperature 1200 °C is outside 727–1150 °C.',
+      },
+    });
+  });
+  it('a depth request at 700 °C: exit 1 and the plain "no austenite" message', () => {
+    const { output, exitCode } = runCli(
+      ['depth'],
+      from('{"temperatureC": 700, "timeH": 6, "carbonPotentialPct": 0.85, "coreCarbonPct": 0.2}'),
+    );
+    expect(exitCode).toBe(1);
+    expect(output).toEqual({
+      error: {
+        code: 'temperature.noAustenite',
+        field: 'temperatureC',
+        message:
+          'At 700 °C there is no austenite (none at or below 727 °C): carbon does not go in. Raise the temperature.',
       },
     });
   });

@@ -8,10 +8,10 @@
  */
 import { fitDiffusivityFactor, type CalibrationFit, type CalibrationSample } from '../physics/calibration';
 import { depthFigures, readCaseSpec } from '../physics/caseDepth';
-import { scaledDiffusivity } from '../physics/cycle/plan';
+import { checkTemperatureC, checkTimeH } from '../physics/validate';
 import { readRecipe } from '../physics/cycle/readRecipe';
 import { runCycle } from '../physics/cycle/simulate';
-import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, type DiffusivityModelId } from '../physics/diffusivity';
+import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, scaledDiffusivity, type DiffusivityModelId } from '../physics/diffusivity';
 import type { Result } from '../physics/result';
 import { physicsRequestOf } from './inputs';
 import { compareNewestFirst } from './query';
@@ -27,8 +27,12 @@ export interface CalibrationOptions {
   maxJobs?: number;
 }
 
-/** Why a measured job of the furnace could not be used. */
-export type SkipReason = 'noInputs' | 'noRunConditions' | 'invalidInputs';
+/**
+ * Why a measured job of the furnace is left out of the fit: no recorded calculation, no time or
+ * temperature it ran at, inputs today's checks refuse (2000 °C, 5000 h), or a calculation that
+ * gives no case to compare.
+ */
+export type SkipReason = 'noInputs' | 'noRunConditions' | 'invalidInputs' | 'noCase';
 
 export interface SkippedJob {
   id: string;
@@ -60,6 +64,7 @@ function closedFormPredictor(job: Job, model: DiffusivityModelId | undefined): P
   const temperatureC = inputs.kind === 'temperature' ? job.prediction?.temperatureC : inputs.temperatureC;
   const timeH = inputs.kind === 'time' ? job.prediction?.timeH : inputs.timeH;
   if (temperatureC === undefined || timeH === undefined) return 'noRunConditions';
+  if (!checkTemperatureC(temperatureC, 'temperatureC').ok || !checkTimeH(timeH, 'timeH').ok) return 'invalidInputs';
   const spec = readCaseSpec({ ...physicsRequestOf(inputs), ...(model ? { model } : {}), diffusivityFactor: 1 });
   if (!spec.ok) return 'invalidInputs';
   return (factor) =>
@@ -77,6 +82,16 @@ function cyclePredictor(job: Job, model: DiffusivityModelId | undefined): Predic
     runCycle(recipe.value, 1, { diffusivity: scaledDiffusivity(diffusivity, factor) }).effectiveCaseDepthMm;
 }
 
+/**
+ * The predictor, if it gives a case at k = 1 (else the fit on ln ECD has nothing to compare);
+ * its value at 1 is kept, since the fit starts there.
+ */
+function withCase(predictor: Predictor): Predictor | SkipReason {
+  const atOne = predictor(1);
+  if (!(atOne > 0)) return 'noCase';
+  return (factor) => (factor === 1 ? atOne : predictor(factor));
+}
+
 /** The calibration samples of one furnace (newest first), and the measured jobs that could not be used. */
 export function calibrationSamples(jobs: readonly Job[], furnace: string, options: CalibrationOptions = {}): SampleSet {
   const maxJobs = options.maxJobs ?? DEFAULT_CALIBRATION_JOBS;
@@ -92,8 +107,9 @@ export function calibrationSamples(jobs: readonly Job[], furnace: string, option
       : job.inputs.kind === 'cycle'
         ? cyclePredictor(job, options.model)
         : closedFormPredictor(job, options.model);
-    if (typeof predictor === 'string') skipped.push({ id: job.id, reason: predictor });
-    else samples.push({ id: job.id, measuredEcdMm: measuredEcdMm(job)!, predictEcdMm: predictor });
+    const usable = typeof predictor === 'string' ? predictor : withCase(predictor);
+    if (typeof usable === 'string') skipped.push({ id: job.id, reason: usable });
+    else samples.push({ id: job.id, measuredEcdMm: measuredEcdMm(job)!, predictEcdMm: usable });
   }
   return { samples, skipped };
 }

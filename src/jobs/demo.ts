@@ -42,7 +42,8 @@ const PARTS: readonly DemoPart[] = [
     partNumber: 'KR-4410',
     gradeId: '20mncr5',
     targetEcdMm: 1.35,
-    carbonPotentialPct: 0.9,
+    // 0.8 × the alloy factor of 20MnCr5 (1.118): about 0.89 %C at the surface.
+    carbonPotentialPct: 0.8,
     temperaturesC: [930, 940],
     furnaces: ['F2', 'F2', 'F1'],
   },

@@ -8,6 +8,7 @@ import {
   modelRangeWarning,
   retainedAusteniteWarning,
   saturationWarnings,
+  twoPhaseCoreWarning,
 } from './cautions';
 import { constantSurfaceDepth, constantSurfaceTime, diffusionLength } from './closedForm';
 import { effectiveDiffusivity, MODEL_IDS, type DiffusivityModelId } from './diffusivity';
@@ -18,6 +19,7 @@ import { harrisTotalCaseDepthMm } from './rulesOfThumb';
 import {
   alloyFactor,
   DEFAULT_ECD_THRESHOLD_PCT,
+  hasAustenite,
   TOTAL_CASE_MARGIN_PCT,
   totalCaseThresholdPct,
   type Composition,
@@ -40,7 +42,7 @@ import {
   type Fields,
 } from './validate';
 
-/** Temperatures searched when solving for temperature, °C. */
+/** Temperatures searched when solving for temperature, °C: all above A1 (727 °C), so the answer always has austenite. */
 export const TEMPERATURE_SEARCH_C = { min: 800, max: 1100 } as const;
 /** Step for the "±10 °C changes the depth by …" figure, °C. */
 export const SENSITIVITY_STEP_C = 10;
@@ -173,8 +175,10 @@ export function readCaseSpec(fields: Fields): Result<CaseSpec> {
   });
 }
 
-/** Effective constant D for a spec (model at mean carbon, times the furnace factor), m²/s. */
+/** Effective constant D for a spec (model at mean carbon, times the furnace factor), m²/s; 0 without austenite. */
 function specDiffusivity(spec: CaseSpec, temperatureC: number, model: DiffusivityModelId): number {
+  // The request was checked above A1; a band or sensitivity case that falls to A1 or below gets no case.
+  if (!hasAustenite(temperatureC)) return 0;
   const D = effectiveDiffusivity(model, celsiusToKelvin(temperatureC), spec.surfaceCarbonPct, spec.coreCarbonPct);
   return spec.diffusivityFactor * D;
 }
@@ -234,6 +238,7 @@ export function evaluateCaseDepth(spec: CaseSpec, temperatureC: number, timeH: n
       ...atmosphereTemperatureWarning(temperatureC),
       ...retainedAusteniteWarning(spec.surfaceCarbonPct),
       ...modelRangeWarning(temperatureC, meanCarbonPct),
+      ...twoPhaseCoreWarning(temperatureC, spec.coreCarbonPct, spec.composition),
     ],
   };
 }

@@ -5,7 +5,7 @@
 import { MODEL_CALIBRATED_RANGE } from './diffusivity';
 import { RETAINED_AUSTENITE_CARBON_PCT } from './hardness';
 import type { Warning } from './result';
-import { saturationCarbonPct } from './steel';
+import { ac3TempC, hasAustenite, saturationCarbonPct, type Composition } from './steel';
 
 /**
  * Below about 760 °C (1400 °F) a combustible atmosphere must not enter the chamber
@@ -33,6 +33,38 @@ export function saturationWarnings(tempC: number, surfaceCarbonPct: number, carb
     });
   }
   return warnings;
+}
+
+/**
+ * A potential that, through the alloy factor, draws the surface of this steel above saturation
+ * (Cp × factor > Acm) while the potential itself is not: the surface heads for carbides.
+ */
+export function equilibriumSaturationWarning(tempC: number, potentialPct: number, alloyFactor: number): Warning[] {
+  const limitPct = saturationCarbonPct(tempC);
+  const equilibriumPct = potentialPct * alloyFactor;
+  if (limitPct === undefined || potentialPct > limitPct || !(equilibriumPct > limitPct)) return [];
+  return [
+    {
+      code: 'saturation.equilibriumAboveAcm',
+      params: {
+        potentialPct: round(potentialPct, 3),
+        carbonPct: round(equilibriumPct, 3),
+        limitPct: round(limitPct, 2),
+        tempC: round(tempC, 1),
+      },
+    },
+  ];
+}
+
+/**
+ * Carburizing above A1 but below the core's Ac3 (Andrews 1965): the core is ferrite and
+ * austenite, while the diffusivity models are for austenite alone.
+ */
+export function twoPhaseCoreWarning(tempC: number, coreCarbonPct: number, composition?: Composition): Warning[] {
+  const ac3C = ac3TempC(coreCarbonPct, composition);
+  return hasAustenite(tempC) && tempC < ac3C
+    ? [{ code: 'austenite.twoPhaseCore', params: { tempC: round(tempC, 1), ac3C: round(ac3C, 0) } }]
+    : [];
 }
 
 /** A carburizing atmosphere at a temperature below the safe-introduction limit. */

@@ -2,10 +2,11 @@
  * Equivalent time at the set temperature for a furnace's real temperature history.
  * With D following Arrhenius, time at a varying T(t) is worth
  * t_eq = ∫ D(T(t)) / D(T_set) dt at T_set (common practice for ramps and upsets).
- * Below 727 °C (Fe–C eutectoid) there is no austenite, so that time counts as zero.
+ * At or below A1 (727 °C) there is no austenite, so that time counts as zero.
  */
 import { DIFFUSIVITY_MODELS, type DiffusivityModelId } from './diffusivity';
 import { fail, ok, type Result } from './result';
+import { austeniteSpan } from './steel';
 import { celsiusToKelvin } from './units';
 import {
   asFields,
@@ -18,8 +19,6 @@ import {
   readOptionalNumber,
 } from './validate';
 
-/** Fe–C eutectoid temperature, °C: austenite exists only above it (Fe–Fe₃C diagram). */
-export const EUTECTOID_TEMP_C = 727;
 /** Carbon at which D is evaluated when the request gives none: mid-case (common practice), wt%. */
 export const DEFAULT_HISTORY_CARBON_PCT = 0.5;
 /** Hottest reading accepted in a history, °C. */
@@ -48,7 +47,7 @@ export interface EquivalentTimeResult {
   extraTimeH?: number;
 }
 
-/** ∫ D(T)/D(T_set) dt over one linear piece from (t0, T0) to (t1, T1), in the unit of t. */
+/** ∫ D(T)/D(T_set) dt over one linear piece from (t0, T0) to (t1, T1), in the unit of t; only its part above A1 counts. */
 function pieceEquivalent(
   ratio: (tempC: number) => number,
   t0: number,
@@ -56,20 +55,18 @@ function pieceEquivalent(
   t1: number,
   temp1: number,
 ): number {
-  if (t1 <= t0) return 0;
-  const cut = EUTECTOID_TEMP_C;
-  if ((temp0 - cut) * (temp1 - cut) < 0) {
-    // Split where the piece crosses the eutectoid so Simpson never straddles the jump to zero.
-    const tc = t0 + ((cut - temp0) / (temp1 - temp0)) * (t1 - t0);
-    return pieceEquivalent(ratio, t0, temp0, tc, cut) + pieceEquivalent(ratio, tc, cut, t1, temp1);
-  }
-  if (Math.max(temp0, temp1) <= cut) return 0;
+  const span = austeniteSpan(temp0, temp1);
+  if (!(t1 > t0) || !span) return 0;
+  // Simpson runs over the part with austenite only, so it never straddles the jump to zero at A1.
+  const at = (share: number) => ({ t: t0 + share * (t1 - t0), temp: temp0 + share * (temp1 - temp0) });
+  const from = at(span.from);
+  const until = at(span.until);
   const n = SIMPSON_INTERVALS;
-  const h = (t1 - t0) / n;
+  const h = (until.t - from.t) / n;
   let sum = 0;
   for (let i = 0; i <= n; i++) {
     const weight = i === 0 || i === n ? 1 : i % 2 === 1 ? 4 : 2;
-    sum += weight * ratio(temp0 + ((temp1 - temp0) * i) / n);
+    sum += weight * ratio(from.temp + ((until.temp - from.temp) * i) / n);
   }
   return (sum * h) / 3;
 }
@@ -83,8 +80,7 @@ export function equivalentTimeH(
 ): number {
   const diffusivity = DIFFUSIVITY_MODELS[model].diffusivity;
   const reference = diffusivity(celsiusToKelvin(setTemperatureC), carbonPct);
-  const ratio = (tempC: number) =>
-    tempC < EUTECTOID_TEMP_C ? 0 : diffusivity(celsiusToKelvin(tempC), carbonPct) / reference;
+  const ratio = (tempC: number) => diffusivity(celsiusToKelvin(tempC), carbonPct) / reference;
   let total = 0;
   for (let i = 1; i < history.length; i++) {
     const a = history[i - 1]!;

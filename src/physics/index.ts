@@ -18,6 +18,7 @@ export * from './conversions';
 export * from './grades';
 export * from './uncertainty';
 export * from './calibration';
+export * from './approximations';
 export * from './planner/readPlanRequest';
 export * from './planner/planner';
 export * from './cycle/recipe';

@@ -17,6 +17,7 @@ export const ERROR_CODES = [
   'time.notPositive',
   'time.tooLong',
   'temperature.outOfRange',
+  'temperature.noAustenite',
   'temperature.belowAbsoluteZero',
   'carbon.negative',
   'carbon.aboveMax',
@@ -94,6 +95,10 @@ export const fail = <T = never>(code: ErrorCode, field?: string, params?: Params
 export const WARNING_CODES = [
   'saturation.potentialAboveAcm',
   'saturation.surfaceAboveAcm',
+  'saturation.equilibriumAboveAcm',
+  'austenite.twoPhaseCore',
+  'austenite.noneInStep',
+  'hardening.noAustenite',
   'safety.atmosphereBelowSafeTemperature',
   'shape.throughCarburizing',
   'hardness.retainedAustenite',
@@ -111,6 +116,8 @@ export const WARNING_CODES = [
   // What binds when the planner cannot meet its targets…
   'plan.boostPotentialAboveSaturation',
   'plan.diffusePotentialAboveSaturation',
+  'plan.boostSurfaceAboveSaturation',
+  'plan.diffuseSurfaceAboveSaturation',
   'plan.caseDepthNeedsMoreTime',
   'plan.caseDepthTooDeepForShortestCycle',
   'plan.surfaceCarbonTooHighForDiffusePotential',
@@ -126,6 +133,8 @@ export const WARNING_CODES = [
   'plan.lowerTemperature',
   'plan.allowMoreTime',
   'plan.shortenHardening',
+  // …or that nothing within the models' range and the accepted inputs does.
+  'plan.outOfReach',
 ] as const;
 
 export type WarningCode = (typeof WARNING_CODES)[number];

@@ -4,11 +4,22 @@
  */
 import { DEFAULT_MODEL, isModelId, type DiffusivityModelId } from './diffusivity';
 import { fail, ok, type ErrorCode, type Result } from './result';
-import { ALLOY_ELEMENT_MAX_PCT, ALLOY_ELEMENTS, MAX_CARBON_PCT, type Composition } from './steel';
+import {
+  ALLOY_ELEMENT_MAX_PCT,
+  ALLOY_ELEMENTS,
+  EUTECTOID_TEMP_C,
+  hasAustenite,
+  MAX_CARBON_PCT,
+  type Composition,
+} from './steel';
 import { parseNumber } from './units';
 
-/** Furnace temperatures accepted as input, °C (below: no austenite worth carburizing; above: beyond the models). */
-export const TEMPERATURE_LIMITS_C = { min: 700, max: 1150 } as const;
+/**
+ * Carburizing temperatures accepted as input, °C: above A1 (`min` itself excluded: at or below
+ * it there is no austenite, and the answer is the plain `temperature.noAustenite`, not a range
+ * error) and up to `max` (beyond the models).
+ */
+export const TEMPERATURE_LIMITS_C = { min: EUTECTOID_TEMP_C, max: 1150 } as const;
 /** Longest cycle accepted, h (a very long pit-furnace cycle is well under this). */
 export const MAX_TIME_H = 1000;
 /** Deepest case accepted, mm. */
@@ -44,8 +55,11 @@ function inRange(value: number, field: string, min: number, max: number, code: E
   return value >= min && value <= max ? ok(value) : fail(code, field, { value, min, max });
 }
 
+/** A temperature to carburize at: above A1, at most TEMPERATURE_LIMITS_C.max. */
 export function checkTemperatureC(value: number, field: string): Result<number> {
-  return inRange(value, field, TEMPERATURE_LIMITS_C.min, TEMPERATURE_LIMITS_C.max, 'temperature.outOfRange');
+  const { min, max } = TEMPERATURE_LIMITS_C;
+  if (value > max) return fail('temperature.outOfRange', field, { value, min, max });
+  return hasAustenite(value) ? ok(value) : fail('temperature.noAustenite', field, { value, limitC: EUTECTOID_TEMP_C });
 }
 
 export function checkTimeH(value: number, field: string): Result<number> {

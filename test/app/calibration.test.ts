@@ -20,7 +20,7 @@ import {
 import { makeShow } from '../../src/app/ui/show';
 import { createI18n } from '../../src/i18n/i18n';
 import { caseDepth, runCycle } from '../../src/physics';
-import { scaledDiffusivity } from '../../src/physics/cycle/plan';
+import { scaledDiffusivity } from '../../src/physics/diffusivity';
 import { DIFFUSIVITY_MODELS } from '../../src/physics/diffusivity';
 import type { Job } from '../../src/jobs/schema';
 import { pinionDraft } from '../jobs/helpers';

@@ -58,7 +58,7 @@ describe('recipe from the form', () => {
   });
   it('places errors on the step field that caused them', () => {
     const bad = updateStep(DEFAULT_CYCLE_FORM, 1, { duration: field('zwei', 'h') });
-    expect(computeCycle(bad, settings).errors['steps.1.durationH']?.code).toBe('number.invalid');
+    expect(computeCycle(bad, settings).errors['steps.1.durationH']?.code).toBe('duration.invalid');
     const hot = updateStep(DEFAULT_CYCLE_FORM, 2, { endTemp: field('1400', 'C') });
     expect(computeCycle(hot, settings).errors['steps.2.endTempC']?.code).toBe('temperature.outOfRange');
   });

@@ -78,6 +78,7 @@ describe('locales', () => {
       ['app.log.fields.', ['workOrder', 'partNumber', 'furnace', 'operator', 'status', 'notes', 'gradeName']],
       ['app.log.lab.', ['ecd', 'surfaceHardness', 'coreHardness', 'surfaceCarbon', 'by', 'at']],
       ['app.models.', ['agren', 'tibbetts', 'wells-batz-mehl']],
+      ['app.calibration.leftOutReason.', ['noInputs', 'noRunConditions', 'invalidInputs', 'noCase']],
       ['app.depth.solveFor.', ['depth', 'time', 'temperature']],
       ['app.depth.carbonSource.', ['potential', 'surface']],
       ['app.settings.system.', ['metric', 'us']],

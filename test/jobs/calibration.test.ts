@@ -9,7 +9,7 @@ import { calibrateFurnace, calibrationSamples, furnacesWithLabDepth } from '../.
 import type { JobInputs } from '../../src/jobs/inputs';
 import type { Job } from '../../src/jobs/schema';
 import { caseDepth, timeForCaseDepth } from '../../src/physics/caseDepth';
-import { scaledDiffusivity } from '../../src/physics/cycle/plan';
+import { scaledDiffusivity } from '../../src/physics/diffusivity';
 import type { Recipe } from '../../src/physics/cycle/recipe';
 import { runCycle } from '../../src/physics/cycle/simulate';
 import { DIFFUSIVITY_MODELS, type DiffusivityModelId } from '../../src/physics/diffusivity';
@@ -206,6 +206,35 @@ describe('fitting a furnace', () => {
     const { fit } = calibrateFurnace([...old, ...recent], 'F1', { maxJobs: 4 });
     if (!fit.ok) throw new Error(fit.error.code);
     expect(fit.value.factor).toBeCloseTo(1.2, 8);
+  });
+
+  it('a job whose inputs today’s checks refuse (2000 °C, 5000 h, 700 °C) is left out and listed, and the furnace still fits', () => {
+    const good = depthLog('F1', 1.1, 5, 0, 12);
+    const hot = job('F1', depthInputs(2000, 6), {}, 0.9);
+    const long = job('F1', depthInputs(925, 5000), {}, 0.9);
+    const noAustenite = job('F1', depthInputs(700, 6), {}, 0.2);
+    const runaway = job('F1', { kind: 'cycle', recipe: { ...recipeOf('pin-kr0907-cycle.json'), steps: [] } }, {}, 0.5);
+    const { fit, skipped } = calibrateFurnace([...good, hot, long, noAustenite, runaway], 'F1');
+    if (!fit.ok) throw new Error(fit.error.code);
+    expect(fit.value.factor).toBeCloseTo(1.1, 8);
+    expect(fit.value.jobCount).toBe(5);
+    expect(skipped).toEqual([
+      { id: runaway.id, reason: 'invalidInputs' },
+      { id: noAustenite.id, reason: 'invalidInputs' },
+      { id: long.id, reason: 'invalidInputs' },
+      { id: hot.id, reason: 'invalidInputs' },
+    ]);
+  });
+
+  it('a cycle job that never reaches austenite gives no case: left out as such, not a broken fit', () => {
+    const cold: Recipe = {
+      ...recipeOf('pin-kr0907-cycle.json'),
+      steps: [{ durationH: 4, startTempC: 20, endTempC: 700, carbonPotentialPct: null }],
+    };
+    const coldJob = job('F1', { kind: 'cycle', recipe: cold }, {}, 0.3);
+    const { fit, skipped } = calibrateFurnace([...depthLog('F1', 0.9, 4, 0, 13), coldJob], 'F1');
+    expect(fit.ok).toBe(true);
+    expect(skipped).toEqual([{ id: coldJob.id, reason: 'noCase' }]);
   });
 
   it('too few lab results on the furnace give the typed error with the count', () => {

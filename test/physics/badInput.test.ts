@@ -20,11 +20,26 @@ const cases: [string, () => Result<unknown>, string, string?][] = [
   ['time as an object', () => caseDepth({ ...base, timeH: { h: 6 } }), 'field.notNumber', 'timeH'],
   ['time ≤ 0', () => caseDepth({ ...base, timeH: 0 }), 'time.notPositive', 'timeH'],
   ['time over 1000 h', () => caseDepth({ ...base, timeH: 5000 }), 'time.tooLong', 'timeH'],
+  // No austenite at or below A1 = 727 °C (Fe–Fe₃C eutectoid): every calculator refuses in words.
+  ['depth at 700 °C', () => caseDepth({ ...base, temperatureC: 700 }), 'temperature.noAustenite', 'temperatureC'],
   [
-    'temperature below 700 °C',
-    () => caseDepth({ ...base, temperatureC: 650 }),
-    'temperature.outOfRange',
+    'depth at exactly 727 °C',
+    () => caseDepth({ ...base, temperatureC: 727 }),
+    'temperature.noAustenite',
     'temperatureC',
+  ],
+  ['depth at 20 °C', () => caseDepth({ ...base, temperatureC: 20 }), 'temperature.noAustenite', 'temperatureC'],
+  [
+    'time at 700 °C',
+    () => timeForCaseDepth({ ...base, temperatureC: 700, targetDepthMm: 0.5 }),
+    'temperature.noAustenite',
+    'temperatureC',
+  ],
+  [
+    'equivalent time with a set temperature of 720 °C',
+    () => equivalentTime({ history, setTemperatureC: 720 }),
+    'temperature.noAustenite',
+    'setTemperatureC',
   ],
   [
     'temperature above 1150 °C',

@@ -1,6 +1,13 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { caseDepth, temperatureForCaseDepth, timeForCaseDepth } from '../../src/physics/caseDepth';
+import { createI18n, warningMessage } from '../../src/i18n/i18n';
+import {
+  caseDepth,
+  TEMPERATURE_SEARCH_C,
+  temperatureForCaseDepth,
+  timeForCaseDepth,
+} from '../../src/physics/caseDepth';
+import { EUTECTOID_TEMP_C } from '../../src/physics/steel';
 import type { Result } from '../../src/physics/result';
 import pinion from '../../public/examples/pinion-kr2231-depth.json';
 
@@ -38,11 +45,36 @@ describe('depth: the demo pinion KR-2231 (SAE 8620, 925 °C, 6 h, 0.90/0.20 %C)'
 });
 
 describe('carbon potential and the alloy factor', () => {
-  it('a potential gives the surface carbon Cp × alloy factor', () => {
+  // The factor once ran the wrong way (0.894 for 20MnCr5); 1.1181 is the Gunnarson formula's own check value.
+  it('a potential gives the surface carbon Cp × alloy factor: 20MnCr5 at Cp 0.85 takes 0.950 %C (factor 1.1181)', () => {
     const composition = { Cr: 1.15, Mn: 1.25, Si: 0.25 };
-    const r = value(caseDepth({ ...base, surfaceCarbonPct: undefined, carbonPotentialPct: 0.9, composition }));
-    expect(r.alloyFactor).toBeCloseTo(0.8943, 4);
-    expect(r.surfaceCarbonPct).toBeCloseTo(0.9 * r.alloyFactor, 12);
+    const request = { temperatureC: 930, timeH: 8, carbonPotentialPct: 0.85, coreCarbonPct: 0.2, composition };
+    const r = value(caseDepth(request));
+    expect(r.alloyFactor).toBeCloseTo(1.1181, 4);
+    expect(r.surfaceCarbonPct).toBeCloseTo(0.85 * r.alloyFactor, 12);
+    expect(r.surfaceCarbonPct).toBeCloseTo(0.95, 2);
+    // The same potential on plain carbon steel holds the surface at 0.85 %C: the chromium steel's case is deeper.
+    const plain = value(caseDepth({ ...request, composition: undefined }));
+    expect(r.effectiveCaseDepthMm).toBeGreaterThan(plain.effectiveCaseDepthMm);
+  });
+  it('a surface carbon given with a composition implies the potential surface / factor (it feeds the soot caution)', () => {
+    const composition = { Cr: 1.15, Mn: 1.25, Si: 0.25 };
+    const r = value(caseDepth({ ...base, surfaceCarbonPct: 0.95, composition }));
+    expect(r.carbonPotentialPct).toBeCloseTo(0.95 / 1.1181, 4);
+  });
+  it('a chromium steel whose factor lifts Cp × factor above saturation gets the saturation caution, saying the line is for plain carbon steel', () => {
+    // 20MnCr5 at 930 °C, Cp 1.2: surface 1.2 × 1.1181 = 1.342 %C against Acm 1.284 %C; the potential itself is below it.
+    const composition = { Cr: 1.15, Mn: 1.25, Si: 0.25 };
+    const request = { temperatureC: 930, timeH: 4, carbonPotentialPct: 1.2, coreCarbonPct: 0.2, composition };
+    const codes = value(caseDepth(request)).warnings.map((w) => w.code);
+    expect(codes).toContain('saturation.surfaceAboveAcm');
+    expect(codes).not.toContain('saturation.potentialAboveAcm');
+    expect(value(caseDepth({ ...request, composition: undefined })).warnings.map((w) => w.code)).not.toContain(
+      'saturation.surfaceAboveAcm',
+    );
+    const { t } = createI18n('en');
+    const caution = value(caseDepth(request)).warnings.find((w) => w.code === 'saturation.surfaceAboveAcm')!;
+    expect(warningMessage(t, caution)).toMatch(/plain carbon steel; chromium steels form carbides at lower carbon/);
   });
   it('warns when the potential or the surface is above saturation (soot, carbides)', () => {
     const r = value(caseDepth({ ...base, temperatureC: 850, surfaceCarbonPct: 1.2 }));
@@ -130,6 +162,42 @@ describe('furnace calibration factor on D', () => {
     const plain = ecd(base);
     expect(ecd({ ...base, diffusivityFactor: 1.21 }) / plain).toBeCloseTo(1.1, 12);
     expect(value(caseDepth({ ...base, diffusivityFactor: 1.21 })).diffusivityFactor).toBe(1.21);
+  });
+});
+
+describe('no austenite, no answer (A1 = 727 °C, Fe–Fe₃C eutectoid)', () => {
+  it.each([700, 727, 500])('depth at %s °C is refused in words, not answered', (temperatureC) => {
+    expect(caseDepth({ ...base, temperatureC })).toMatchObject({
+      ok: false,
+      error: { code: 'temperature.noAustenite', field: 'temperatureC', params: { value: temperatureC, limitC: 727 } },
+    });
+  });
+  it('the temperature solve searches above A1 only, so its answer always has austenite', () => {
+    expect(TEMPERATURE_SEARCH_C.min).toBeGreaterThan(EUTECTOID_TEMP_C);
+    fc.assert(
+      fc.property(arbitraryCase, (c) => {
+        const { temperatureC: _, ...rest } = c;
+        const solved = temperatureForCaseDepth({ ...rest, targetDepthMm: ecd(c) * 0.2 });
+        if (solved.ok) expect(solved.value.temperatureC).toBeGreaterThan(EUTECTOID_TEMP_C);
+        else expect(solved.error.code).toBe('solve.temperatureBelowRange');
+      }),
+      { numRuns: 50 },
+    );
+  });
+  it('just above A1 the cooler band and ±10 °C cases fall to no austenite: depth 0, not a depth from the models', () => {
+    const r = value(caseDepth({ ...base, temperatureC: 732 }));
+    expect(r.temperatureSensitivity.minusMm).toBe(0);
+    expect(r.uncertaintyMm.minMm).toBe(0);
+    expect(r.effectiveCaseDepthMm).toBeGreaterThan(0);
+  });
+  it('between A1 and the core’s Ac3 (Andrews 1965: 819 °C for plain 0.20 %C) carburizing gets the two-phase caution', () => {
+    const codes = (temperatureC: number) => value(caseDepth({ ...base, temperatureC })).warnings.map((w) => w.code);
+    expect(codes(800)).toContain('austenite.twoPhaseCore');
+    expect(codes(825)).not.toContain('austenite.twoPhaseCore');
+    const caution = value(caseDepth({ ...base, temperatureC: 800 })).warnings.find(
+      (w) => w.code === 'austenite.twoPhaseCore',
+    );
+    expect(caution?.params).toEqual({ tempC: 800, ac3C: 819 });
   });
 });
 

@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import {
   agrenDiffusivity,
+  carbonDependence,
   DIFFUSIVITY_MODELS,
+  modelSpread,
   effectiveDiffusivity,
   MODEL_IDS,
   tibbettsDiffusivity,
@@ -60,6 +62,37 @@ describe('diffusivity of carbon in austenite: the three published models check e
       for (let t = 850; t < 1050; t += 25) expect(d(K(t + 25), 0.5)).toBeGreaterThan(d(K(t), 0.5));
       for (let c = 0.1; c < 1.2; c += 0.1) expect(d(K(925), c + 0.1)).toBeGreaterThan(d(K(925), c));
     }
+  });
+  it('the spread the app states (modelSpread, on a 5 °C × 0.05 %C grid) is the spread on a 1 °C × 0.01 %C grid, to 0.1 %', () => {
+    const spread = modelSpread();
+    const fine = (model: (tK: number, c: number) => number) => {
+      let min = Infinity;
+      let max = -Infinity;
+      for (let t = 850; t <= 1050; t += 1)
+        for (let c = 0.1; c <= 1.2 + 1e-9; c += 0.01) {
+          const relative = model(K(t), c) / agrenDiffusivity(K(t), c) - 1;
+          min = Math.min(min, relative);
+          max = Math.max(max, relative);
+        }
+      return { min, max };
+    };
+    for (const [id, model] of [
+      ['tibbetts', tibbettsDiffusivity],
+      ['wells-batz-mehl', wellsBatzMehlDiffusivity],
+    ] as const) {
+      expect(spread.relativeToAgren[id].min).toBeCloseTo(fine(model).min, 3);
+      expect(spread.relativeToAgren[id].max).toBeCloseTo(fine(model).max, 3);
+    }
+    // Measured: Tibbetts −4.4 … +26.3 %, Wells–Batz–Mehl −29.7 … +26.9 %, at most 1.80× between models.
+    expect(spread.relativeToAgren['wells-batz-mehl'].min).toBeCloseTo(-0.297, 3);
+    expect(spread.maxRatio).toBeCloseTo(1.796, 3);
+  });
+  it('Wells–Batz–Mehl depends on carbon much less: D(1.0 %C)/D(0.1 %C) at 1000 °C is 1.71, against 2.36 (Ågren) and 2.48 (Tibbetts)', () => {
+    // By hand: 0.13 / 0.076 = 1.711 (the quoted form), e^(−1.44 + 6600·0.9/(1.987·1273.15)) = 2.48 (Tibbetts);
+    // Ågren's 2.357 is a regression pin of the code's own evaluation.
+    expect(carbonDependence('wells-batz-mehl')).toBeCloseTo(0.13 / 0.076, 12);
+    expect(carbonDependence('agren')).toBeCloseTo(2.357, 3);
+    expect(carbonDependence('tibbetts')).toBeCloseTo(2.48, 2);
   });
   it('effective D is the model at the mean of surface and core carbon', () => {
     expect(effectiveDiffusivity('agren', K(925), 0.9, 0.2)).toBe(agrenDiffusivity(K(925), 0.55));

@@ -1,6 +1,5 @@
 /** The cycle screen's one link to the cycle solver (kept apart so tests and screens share it), with a furnace's factor on D. */
-import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, isModelId, type Result } from '../../physics';
-import { scaledDiffusivity } from '../../physics/cycle/plan';
+import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, isModelId, scaledDiffusivity, type Result } from '../../physics';
 import type { SimulationResult } from '../../physics/cycle/recipe';
 import { simulateCycle } from '../../physics/cycle/simulate';
 

@@ -4,7 +4,7 @@
  * default). The figures are kept with the settings, so the calculators never open the log.
  */
 import { useMemo } from 'preact/hooks';
-import { DEFAULT_CALIBRATION_JOBS, describeJobsError, type Job } from '../../jobs';
+import { DEFAULT_CALIBRATION_JOBS, describeJobsError, type Job, type SkippedJob } from '../../jobs';
 import { errorMessage } from '../../i18n/i18n';
 import type { CalibrationFit } from '../../physics';
 import { calibrations, setApplied, storeCalibration } from '../settings/calibration';
@@ -82,9 +82,7 @@ function FurnaceCalibrationCard({
       <h2 id={`${id}-title`}>{t('app.calibration.furnaceHeading', { furnace })}</h2>
       {!fit.ok && <ErrorNote message={errorMessage(t, fit.error)} />}
       {fit.ok && <ResultList rows={rows} label={t('app.calibration.furnaceHeading', { furnace })} />}
-      {calibration.skipped.length > 0 && (
-        <p class="note">{t('app.calibration.skipped', { count: calibration.skipped.length })}</p>
-      )}
+      {calibration.skipped.length > 0 && <LeftOutJobs skipped={calibration.skipped} byId={byId} ctx={ctx} />}
       {(fresh || stored) && (
         <CheckField
           id={`${id}-apply`}
@@ -112,6 +110,36 @@ function FurnaceCalibrationCard({
       )}
       {fit.ok && <ResidualsTable fit={fit.value} byId={byId} ctx={ctx} />}
     </section>
+  );
+}
+
+/** The measured jobs left out of the fit, each with why, so one bad record never hides the furnace's fit. */
+function LeftOutJobs({
+  skipped,
+  byId,
+  ctx,
+}: {
+  skipped: readonly SkippedJob[];
+  byId: ReadonlyMap<string, Job>;
+  ctx: ScreenContext;
+}) {
+  const { t } = ctx;
+  return (
+    <div class="calibration-left-out">
+      <p class="note">{t('app.calibration.leftOut', { count: skipped.length })}</p>
+      <ul>
+        {skipped.map(({ id, reason }) => {
+          const job = byId.get(id);
+          return (
+            <li key={id}>
+              <a href={hrefFor('log', 'job', id)}>{job?.partNumber ?? id.slice(0, 8)}</a>
+              {job?.workOrder && <span class="pair-furnace">{job.workOrder}</span>}:{' '}
+              {t(`app.calibration.leftOutReason.${reason}`)}
+            </li>
+          );
+        })}
+      </ul>
+    </div>
   );
 }
 

@@ -1,4 +1,5 @@
 /** Upset recovery: what the furnace did, converted to time at the set temperature, and the time still needed. */
+import { EUTECTOID_TEMP_C } from '../../physics';
 import { Icon } from '../ui/Icon';
 import { NO_VALUE, UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
@@ -136,7 +137,7 @@ export default function RecoveryScreen() {
         <h2 id="recovery-results">{t('app.common.results')}</h2>
         {r && <ResultList rows={rows} label={t('app.common.results')} />}
         {!r && !generalReadingsError && <p class="note">{t('app.common.fixInputs')}</p>}
-        <p class="note">{t('app.recovery.method')}</p>
+        <p class="note">{t('app.recovery.method', { limit: show.temperature(EUTECTOID_TEMP_C) })}</p>
       </section>
       <LogNoteButton note={note} />
     </div>

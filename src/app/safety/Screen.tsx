@@ -1,10 +1,12 @@
 /** Safety notes, one tap away from every screen. Each defers to the plant's procedures, codes and qualified people. */
-import { useT } from '../../i18n/useT';
+import { useScreenContext } from '../ui/screenContext';
+import { ApproximationsNote } from './ApproximationsNote';
 import { SAFETY_NOTES } from './notes';
 import './screen.css';
 
 export default function SafetyScreen() {
-  const t = useT();
+  const ctx = useScreenContext();
+  const { t } = ctx;
   return (
     <div class="screen safety">
       <h1 tabIndex={-1}>{t('app.safety.title')}</h1>
@@ -16,6 +18,7 @@ export default function SafetyScreen() {
           <p class="safety-defer">{t('app.safety.defer')}</p>
         </section>
       ))}
+      <ApproximationsNote ctx={ctx} />
     </div>
   );
 }

@@ -4,6 +4,7 @@ import { parseShiftConfig, SHIFT_IDS } from '../../jobs/shift';
 import { language } from '../../i18n/useT';
 import { CASE_CRITERION_IDS, MODEL_IDS } from '../../physics';
 import { ChoiceField } from '../ui/ChoiceField';
+import { modelSpreadHint, wellsBatzMehlNote } from '../ui/modelNotes';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
@@ -92,8 +93,9 @@ export default function SettingsScreen() {
           value={s.model}
           choices={MODEL_IDS.map((m) => ({ value: m, label: t(`app.models.${m}`) }))}
           onChange={(v) => patch(settings, { model: v })}
-          hint={t('app.settings.modelHint')}
+          hint={modelSpreadHint(t, show)}
         />
+        {s.model === 'wells-batz-mehl' && <p class="note">{wellsBatzMehlNote(t, show)}</p>}
         <Segmented
           name="settings-case-criterion"
           legend={t('app.settings.caseCriterion')}

@@ -2,6 +2,7 @@
 import { MODEL_IDS } from '../../physics';
 import { model } from '../settings/state';
 import { ChoiceField } from './ChoiceField';
+import { wellsBatzMehlNote } from './modelNotes';
 import type { ScreenContext } from './screenContext';
 
 export function ModelField({
@@ -15,10 +16,20 @@ export function ModelField({
   onChange: (value: string) => void;
   ctx: ScreenContext;
 }) {
-  const { t } = ctx;
+  const { t, show } = ctx;
+  const inUse = value === '' ? model.value : value;
   const choices = [
     { value: '', label: t('app.cycle.modelFromSettings', { model: t(`app.models.${model.value}`) }) },
     ...MODEL_IDS.map((m) => ({ value: m, label: t(`app.models.${m}`) })),
   ];
-  return <ChoiceField id={id} label={t('app.settings.model')} value={value} choices={choices} onChange={onChange} />;
+  return (
+    <ChoiceField
+      id={id}
+      label={t('app.settings.model')}
+      value={value}
+      choices={choices}
+      onChange={onChange}
+      hint={inUse === 'wells-batz-mehl' ? wellsBatzMehlNote(t, show) : undefined}
+    />
+  );
 }

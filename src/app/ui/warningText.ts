@@ -12,21 +12,29 @@ type Kind = 'depth' | 'time' | 'temperature' | 'temperatureChange' | 'carbon';
 
 const saturation = { carbonPct: 'carbon', limitPct: 'carbon', tempC: 'temperature' } as const;
 const potentialSaturation = { potentialPct: 'carbon', limitPct: 'carbon', tempC: 'temperature' } as const;
+const surfaceSaturation = { ...potentialSaturation, surfacePct: 'carbon' } as const;
+const austeniteLimit = { tempC: 'temperature', limitC: 'temperature' } as const;
 
 /** Warning codes with unit-bearing figures, and the kind of each of their params. */
 export const UNIT_WARNINGS: Partial<Record<WarningCode, Readonly<Record<string, Kind>>>> = {
   'saturation.potentialAboveAcm': saturation,
   'saturation.surfaceAboveAcm': saturation,
+  'saturation.equilibriumAboveAcm': { ...saturation, potentialPct: 'carbon' },
+  'austenite.twoPhaseCore': { tempC: 'temperature', ac3C: 'temperature' },
+  'austenite.noneInStep': austeniteLimit,
+  'hardening.noAustenite': austeniteLimit,
   'safety.atmosphereBelowSafeTemperature': { tempC: 'temperature', minC: 'temperature' },
   'shape.throughCarburizing': { depthMm: 'depth', limitMm: 'depth' },
   'model.outsideCalibratedRange': { minC: 'temperature', maxC: 'temperature', minPct: 'carbon', maxPct: 'carbon' },
   'plan.boostPotentialAboveSaturation': potentialSaturation,
   'plan.diffusePotentialAboveSaturation': potentialSaturation,
+  'plan.boostSurfaceAboveSaturation': surfaceSaturation,
+  'plan.diffuseSurfaceAboveSaturation': surfaceSaturation,
   'plan.caseDepthNeedsMoreTime': { targetMm: 'depth', reachedMm: 'depth', maxTotalH: 'time' },
   'plan.caseDepthTooDeepForShortestCycle': { targetMm: 'depth', reachedMm: 'depth', totalH: 'time' },
   'plan.surfaceCarbonTooHighForCycleTime': { targetPct: 'carbon', reachedPct: 'carbon', totalH: 'time' },
   'plan.missedInFinalCheck': { ecdMm: 'depth', surfacePct: 'carbon' },
-  'plan.raiseBoostPotential': { limitPct: 'carbon', tempC: 'temperature' },
+  'plan.raiseBoostPotential': { maxPotentialPct: 'carbon', limitPct: 'carbon', tempC: 'temperature' },
   'plan.raiseTemperature': { deltaC: 'temperatureChange' },
   'plan.lowerTemperature': { deltaC: 'temperatureChange' },
   'plan.allowMoreTime': { totalH: 'time' },
@@ -35,6 +43,7 @@ export const UNIT_WARNINGS: Partial<Record<WarningCode, Readonly<Record<string, 
   'hardness.limitAboveCeilingAtThreshold': { thresholdPct: 'carbon' },
   'traverse.crossedInHv': { depthMm: 'depth' },
   'traverse.neverReachesLimit': { depthMm: 'depth' },
+  'plan.outOfReach': { minC: 'temperature', maxC: 'temperature', maxTotalH: 'time' },
 };
 
 const FORMAT: Record<Kind, (show: Show, value: number) => string> = {

@@ -4,10 +4,9 @@
  * the furnace tolerance, and (at the β corners) every carburizing step's β set to one end of
  * the β range. Identical cases are simulated once (23 runs with a β range, 9 without).
  */
-import { DIFFUSIVITY_MODELS, DEFAULT_MODEL } from '../diffusivity';
+import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, scaledDiffusivity } from '../diffusivity';
 import { DEFAULT_ECD_THRESHOLD_PCT } from '../steel';
 import { depthBand, type BandCase, type DepthBand, type Range } from '../uncertainty';
-import { scaledDiffusivity } from './plan';
 import { depthToCarbonM } from './profile';
 import type { Recipe } from './recipe';
 import { solveRecipe } from './simulate';

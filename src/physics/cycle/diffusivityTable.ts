@@ -5,7 +5,7 @@
  * model (an exponential each) thousands of times. Carbon outside the range (a tiny
  * overshoot of the scheme) reads the end value.
  */
-import type { DiffusivityFunction } from './plan';
+import type { DiffusivityFunction } from '../diffusivity';
 
 /** Table intervals at resolution 1; relative error of D about (ΔC)²·|D''|/8D, below 1e-4 here. */
 export const TABLE_INTERVALS = 64;

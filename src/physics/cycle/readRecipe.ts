@@ -47,7 +47,8 @@ export function under<T>(prefix: string, result: Result<T>): Result<T> {
 const text = (raw: unknown): string | undefined =>
   typeof raw === 'string' && raw.trim() !== '' ? raw.trim().slice(0, MAX_TEXT_LENGTH) : undefined;
 
-function checkStepTemperatureC(value: number, field: string): Result<number> {
+/** A recipe step's temperature: anything a load can be at, from cold to the hottest accepted; no austenite is a caution here, not an error. */
+export function checkStepTemperatureC(value: number, field: string): Result<number> {
   const { min, max } = STEP_TEMPERATURE_LIMITS_C;
   return value >= min && value <= max ? ok(value) : fail('temperature.outOfRange', field, { value, min, max });
 }

@@ -2,18 +2,18 @@
  * The `simulate` command: a multi-step carburizing cycle in, final surface carbon, case
  * depths, carbon profile, surface history and cautions out.
  */
-import { DIFFUSIVITY_MODELS, DEFAULT_MODEL } from '../diffusivity';
+import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, type DiffusivityFunction } from '../diffusivity';
 import { indicativeHardnessBasis, indicativeHardnessHrc } from '../indicativeHardness';
 import { fail, ok, type Result } from '../result';
 import { DEFAULT_ECD_THRESHOLD_PCT, totalCaseThresholdPct } from '../steel';
 import { SECONDS_PER_HOUR } from '../units';
 import { DiffusivityTable } from './diffusivityTable';
 import { buildGrid } from './grid';
-import { planCycle, type DiffusivityFunction } from './plan';
 import { depthToCarbonM, profileDepthM, sampleProfile } from './profile';
 import type { PartShape, Recipe, SimulationResult, SurfaceHistoryPoint } from './recipe';
 import { readRecipe } from './readRecipe';
 import { solveCycle, type SolverRun } from './solver';
+import { scheduleTimeSteps } from './timeSchedule';
 import { cycleWarnings } from './warnings';
 
 /** Resolution factors accepted by runCycle: coarser than 1/4 is meaningless, finer than 64× is slow. */
@@ -43,11 +43,11 @@ export function solveRecipe(recipe: Recipe, options: CycleOptions = {}): SolverR
     ? Math.min(Math.max(requested, RESOLUTION_LIMITS.min), RESOLUTION_LIMITS.max)
     : 1;
   const diffusivity = options.diffusivity ?? DIFFUSIVITY_MODELS[recipe.model ?? DEFAULT_MODEL].diffusivity;
-  const plan = planCycle(recipe, diffusivity, resolution);
-  const { extentM, radiusM } = domain(recipe.shape ?? { kind: 'semi-infinite' }, plan.semiInfiniteDepthM);
+  const schedule = scheduleTimeSteps(recipe, diffusivity, resolution);
+  const { extentM, radiusM } = domain(recipe.shape ?? { kind: 'semi-infinite' }, schedule.semiInfiniteDepthM);
   const grid = buildGrid(extentM, resolution, radiusM);
-  const table = new DiffusivityTable(diffusivity, plan.minCarbonPct, plan.maxCarbonPct, resolution);
-  return solveCycle(plan.steps, grid, table, recipe.steel.coreCarbonPct);
+  const table = new DiffusivityTable(diffusivity, schedule.minCarbonPct, schedule.maxCarbonPct, resolution);
+  return solveCycle(schedule.steps, grid, table, recipe.steel.coreCarbonPct);
 }
 
 function surfaceHistory(run: SolverRun): SurfaceHistoryPoint[] {

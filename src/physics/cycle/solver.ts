@@ -14,7 +14,7 @@
  */
 import type { DiffusivityTable } from './diffusivityTable';
 import type { Grid } from './grid';
-import { EUTECTOID_TEMP_K, type PlannedStep } from './plan';
+import type { ScheduledStep } from './timeSchedule';
 
 /** Picard corrections after the predictor, per time step. */
 export const PICARD_CORRECTIONS = 1;
@@ -56,7 +56,7 @@ class Workspace {
   /** Flux uptake at the latest level and the one before it, wt%·m. */
   uptake = 0;
   uptakeBefore = 0;
-  /** The last step did nothing (below the eutectoid): transfer and diffusion switch on now, a jump. */
+  /** The last step did nothing (no austenite): transfer and diffusion switch on now, a jump. */
   frozen = false;
 
   constructor(
@@ -119,16 +119,17 @@ function solveLevel(ws: Workspace, dtS: number, a0: number, a1: number, a2: numb
 
 /**
  * One time step of length dtS; `ratio` is dtS over the previous step, or 0 to take a
- * backward-Euler step (a restart). Leaves the new level in ws.carbon.
+ * backward-Euler step (a restart); `frozen` when the time step has no austenite. Leaves the
+ * new level in ws.carbon.
  */
-function advance(ws: Workspace, dtS: number, ratio: number, tempK: number, step: PlannedStep): void {
+function advance(ws: Workspace, dtS: number, ratio: number, tempK: number, step: ScheduledStep, frozen: boolean): void {
   const { carbon, level1, level0, evalCarbon } = ws;
   level0.set(level1);
   level1.set(carbon);
   const uptakeN = ws.uptake;
   const uptakeNMinus1 = ws.uptakeBefore;
   ws.uptakeBefore = uptakeN;
-  if (tempK <= EUTECTOID_TEMP_K) {
+  if (frozen) {
     ws.frozen = true;
     return;
   }
@@ -157,9 +158,9 @@ function advance(ws: Workspace, dtS: number, ratio: number, tempK: number, step:
   ws.uptake = (dtS * fluxPctMPerS - a1 * uptakeN - a2 * uptakeNMinus1) / a0;
 }
 
-/** Runs the planned steps (time steps placed by timeSteps.ts) on `grid` from uniform core carbon. */
+/** Runs the scheduled steps (timeSchedule.ts) on `grid` from uniform core carbon. */
 export function solveCycle(
-  steps: readonly PlannedStep[],
+  steps: readonly ScheduledStep[],
   grid: Grid,
   table: DiffusivityTable,
   corePct: number,
@@ -186,7 +187,10 @@ export function solveCycle(
       // Restart with backward Euler at each recipe step, and wherever the step ratio leaves BDF2's stable range.
       const ratio = j === 0 || dtS > MAX_BDF2_RATIO * previousDtS ? 0 : dtS / previousDtS;
       const tempK = step.startTempK + rampKPerS * endS;
-      advance(ws, dtS, ratio, tempK, step);
+      // The schedule puts a time step boundary on each edge of the austenite window.
+      const hot = step.austenite;
+      const frozen = !hot || endS <= hot.fromS || localS >= hot.untilS;
+      advance(ws, dtS, ratio, tempK, step, frozen);
       localS = endS;
       previousDtS = dtS;
       historyTimeS[length] = stepStartS + endS;

@@ -4,14 +4,15 @@
  */
 import {
   atmosphereTemperatureWarning,
+  equilibriumSaturationWarning,
   modelRangeWarning,
   retainedAusteniteWarning,
   saturationWarnings,
   SAFE_ATMOSPHERE_MIN_TEMP_C,
+  twoPhaseCoreWarning,
 } from '../cautions';
-import { EUTECTOID_TEMP_C } from '../equivalentTime';
 import type { Warning } from '../result';
-import { saturationCarbonPct } from '../steel';
+import { alloyFactor, EUTECTOID_TEMP_C, hasAustenite, saturationCarbonPct } from '../steel';
 import { kelvinToCelsius } from '../units';
 import type { PartShape, Recipe } from './recipe';
 import type { SolverRun } from './solver';
@@ -47,18 +48,38 @@ function highestSurfacePct(run: SolverRun, stepIndex: number): number {
 
 function stepWarnings(recipe: Recipe, run: SolverRun, stepIndex: number): Warning[] {
   const step = recipe.steps[stepIndex]!;
+  const { steel } = recipe;
   const lowC = Math.min(step.startTempC, step.endTempC);
   const highC = Math.max(step.startTempC, step.endTempC);
   const warnings: Warning[] = [];
   const potentialPct = step.carbonPotentialPct;
   if (potentialPct !== null && lowC < SAFE_ATMOSPHERE_MIN_TEMP_C) warnings.push(...atmosphereTemperatureWarning(lowC));
-  if (highC <= EUTECTOID_TEMP_C) return tag(warnings, stepIndex);
+  if (!hasAustenite(highC)) {
+    if (potentialPct !== null) {
+      warnings.push({ code: 'austenite.noneInStep', params: { tempC: highC, limitC: EUTECTOID_TEMP_C } });
+    }
+    return tag(warnings, stepIndex);
+  }
+  const surface = surfaceSaturation(run, stepIndex);
   if (potentialPct !== null) {
     // The atmosphere is richest relative to saturation at the coolest austenite temperature of the step.
-    warnings.push(...saturationWarnings(Math.max(lowC, EUTECTOID_TEMP_C), 0, potentialPct));
+    const coolestC = Math.max(lowC, EUTECTOID_TEMP_C);
+    warnings.push(...saturationWarnings(coolestC, 0, potentialPct));
+    const factor = steel.composition ? alloyFactor(steel.composition) : 1;
+    if (surface.length === 0) warnings.push(...equilibriumSaturationWarning(coolestC, potentialPct, factor));
+    // Only a step that stays below Ac3 carburizes a two-phase core; a heat-up passes through it.
+    warnings.push(...twoPhaseCoreWarning(highC, steel.coreCarbonPct, steel.composition));
   }
-  warnings.push(...surfaceSaturation(run, stepIndex), ...modelRangeWarning(highC, highestSurfacePct(run, stepIndex)));
+  warnings.push(...surface, ...modelRangeWarning(highC, highestSurfacePct(run, stepIndex)));
   return tag(warnings, stepIndex);
+}
+
+/** The last step is the one quenched from: at or below A1 there is no austenite to harden. */
+function hardeningWarning(recipe: Recipe): Warning[] {
+  const lastIndex = recipe.steps.length - 1;
+  const endC = recipe.steps[lastIndex]?.endTempC;
+  if (endC === undefined || hasAustenite(endC)) return [];
+  return [{ code: 'hardening.noAustenite', params: { tempC: endC, limitC: EUTECTOID_TEMP_C }, stepIndex: lastIndex }];
 }
 
 /** A case deeper than a third of the plate thickness or the bar radius. */
@@ -71,6 +92,7 @@ export function throughCarburizingWarning(shape: PartShape, totalCaseDepthMm: nu
 export function cycleWarnings(recipe: Recipe, run: SolverRun, totalCaseDepthMm: number): Warning[] {
   return [
     ...recipe.steps.flatMap((_, i) => stepWarnings(recipe, run, i)),
+    ...hardeningWarning(recipe),
     ...retainedAusteniteWarning(run.surfaceCarbonPct),
     ...throughCarburizingWarning(recipe.shape ?? { kind: 'semi-infinite' }, totalCaseDepthMm),
   ];

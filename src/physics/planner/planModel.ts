@@ -3,11 +3,10 @@
  * simulated by the cycle solver with the furnace's calibration factor on D. Counts every
  * simulation so the benchmark can report what a plan costs.
  */
-import { DIFFUSIVITY_MODELS } from '../diffusivity';
+import { DIFFUSIVITY_MODELS, scaledDiffusivity, type DiffusivityFunction } from '../diffusivity';
 import { depthToCarbonM } from '../cycle/profile';
 import type { Recipe, RecipeStep, SimulationResult } from '../cycle/recipe';
 import { runCycle, solveRecipe } from '../cycle/simulate';
-import { scaledDiffusivity, type DiffusivityFunction } from '../cycle/plan';
 import type { PlanRequest, PotentialStep } from './readPlanRequest';
 
 /** Effective case depth and final surface carbon of one simulated plan. */
@@ -38,13 +37,14 @@ export class PlanModel {
     return this.request.hardening?.timeH ?? 0;
   }
 
-  /** The recipe for these times; a step of zero length is left out. */
-  recipe(boostH: number, diffuseH: number): Recipe {
+  /** The recipe for these times, boost and diffuse `tempOffsetC` hotter; a step of zero length is left out. */
+  recipe(boostH: number, diffuseH: number, tempOffsetC = 0): Recipe {
     const { boost, diffuse, hardening, name, steel, model, thresholdCarbonPct, totalCaseMarginPct, shape } =
       this.request;
+    const shifted = (step: PotentialStep) => ({ ...step, temperatureC: step.temperatureC + tempOffsetC });
     const steps: RecipeStep[] = [];
-    if (boostH > 0) steps.push(soak(PLAN_STEP_LABELS.boost, boostH, boost));
-    if (diffuseH > 0) steps.push(soak(PLAN_STEP_LABELS.diffuse, diffuseH, diffuse));
+    if (boostH > 0) steps.push(soak(PLAN_STEP_LABELS.boost, boostH, shifted(boost)));
+    if (diffuseH > 0) steps.push(soak(PLAN_STEP_LABELS.diffuse, diffuseH, shifted(diffuse)));
     if (hardening)
       steps.push(
         soak(PLAN_STEP_LABELS.hardening, hardening.timeH, { ...diffuse, temperatureC: hardening.temperatureC }),
@@ -60,10 +60,13 @@ export class PlanModel {
     };
   }
 
-  /** ECD and surface carbon after `carburizeH` hours of boost and diffuse with `boostShare` of it boost. */
-  probe(boostShare: number, carburizeH: number, resolution: number): Probe {
+  /**
+   * ECD and surface carbon after `carburizeH` hours of boost and diffuse with `boostShare` of it
+   * boost (both steps `tempOffsetC` hotter, to check a suggested change of temperature).
+   */
+  probe(boostShare: number, carburizeH: number, resolution: number, tempOffsetC = 0): Probe {
     this.simulations++;
-    const run = solveRecipe(this.recipe(boostShare * carburizeH, (1 - boostShare) * carburizeH), {
+    const run = solveRecipe(this.recipe(boostShare * carburizeH, (1 - boostShare) * carburizeH, tempOffsetC), {
       resolution,
       diffusivity: this.diffusivity,
     });

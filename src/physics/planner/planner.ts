@@ -127,6 +127,8 @@ export function planForTargets(request: PlanRequest, options: PlanOptions = {}):
       : (searchFinding(request, outcome, {
           hardeningH,
           hardeningOnlyEcdMm: () => model.probe(0, 0, searchResolution).ecdMm,
+          shiftedEcdMm: (point, tempOffsetC) =>
+            model.probe(point.boostShare, point.carburizeH, searchResolution, tempOffsetC).ecdMm,
         }) ?? missFinding(effectiveCaseDepthMm, surfaceCarbonPct)));
   return {
     reachable: finding === undefined,

@@ -3,7 +3,7 @@
  * every default filled in, or a typed error naming the field (`boost.temperatureC`,
  * `targetEcdMm.min`). Nothing here throws.
  */
-import { readCycleBase, under, type CycleBase } from '../cycle/readRecipe';
+import { checkStepTemperatureC, readCycleBase, under, type CycleBase } from '../cycle/readRecipe';
 import { DEFAULT_BETA_M_PER_S, type PartShape } from '../cycle/recipe';
 import { fail, ok, type Result } from '../result';
 import {
@@ -84,8 +84,9 @@ function readPotentialStep(f: Fields): Result<PotentialStep> {
   return ok({ temperatureC: temperatureC.value, carbonPotentialPct: potential.value, betaMPerS: beta.value });
 }
 
+/** The hardening soak becomes a recipe step: a temperature without austenite is a caution there, not an error. */
 function readHardening(f: Fields): Result<HardeningStep> {
-  const temperatureC = readChecked(f, 'temperatureC', checkTemperatureC);
+  const temperatureC = readChecked(f, 'temperatureC', checkStepTemperatureC);
   if (!temperatureC.ok) return temperatureC;
   const timeH = readChecked(f, 'timeH', checkTimeH);
   return timeH.ok ? ok({ temperatureC: temperatureC.value, timeH: timeH.value }) : timeH;

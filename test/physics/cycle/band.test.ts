@@ -1,7 +1,7 @@
 /** The likely-range band of a cycle's ECD: depthBand over the simulator, each distinct case run once. */
 import { describe, expect, it } from 'vitest';
 import { bandRecipe, cycleDepthBand } from '../../../src/physics/cycle/band';
-import { scaledDiffusivity } from '../../../src/physics/cycle/plan';
+import { scaledDiffusivity } from '../../../src/physics/diffusivity';
 import { runCycle } from '../../../src/physics/cycle/simulate';
 import { DIFFUSIVITY_MODELS } from '../../../src/physics/diffusivity';
 import { demoCycle } from './fixtures';

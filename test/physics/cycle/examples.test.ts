@@ -29,13 +29,15 @@ describe('demo cycle recipes', () => {
     },
   );
 
-  it('the CLI runs `simulate` on an example file and prints the same result', () => {
+  it('the CLI runs `simulate` on an example file and prints the same result, rounded to 0.1 µm', () => {
     const file = 'pinion-kr2231-cycle.json';
     const { output, exitCode } = runCli(['simulate', file], () => read(file));
     expect(exitCode).toBe(0);
     const direct = simulateCycle(JSON.parse(read(file)));
     if (!direct.ok) throw new Error(direct.error.code);
-    expect((output as { effectiveCaseDepthMm: number }).effectiveCaseDepthMm).toBe(direct.value.effectiveCaseDepthMm);
+    expect((output as { effectiveCaseDepthMm: number }).effectiveCaseDepthMm).toBe(
+      Number(direct.value.effectiveCaseDepthMm.toFixed(4)),
+    );
   });
 
   it('the CLI words a bad recipe as an error with its field and exits 1', () => {

@@ -2,9 +2,10 @@
 import { describe, expect, it } from 'vitest';
 import { DiffusivityTable } from '../../../src/physics/cycle/diffusivityTable';
 import { buildGrid, WIDTH_STRETCH } from '../../../src/physics/cycle/grid';
-import { EUTECTOID_TEMP_K } from '../../../src/physics/cycle/plan';
-import { rampProgress, stepEndTimes } from '../../../src/physics/cycle/timeSteps';
+import { scheduleTimeSteps } from '../../../src/physics/cycle/timeSchedule';
+import { stepEndTimes } from '../../../src/physics/cycle/timeSteps';
 import { DIFFUSIVITY_MODELS, MODEL_IDS } from '../../../src/physics/diffusivity';
+import { EUTECTOID_TEMP_C } from '../../../src/physics/steel';
 import { celsiusToKelvin } from '../../../src/physics/units';
 
 describe('grid', () => {
@@ -71,14 +72,45 @@ describe('time steps', () => {
     for (let j = 1; j < dt.length; j++) expect(dt[j]! / dt[j - 1]!).toBeCloseTo(1.2, 9);
   });
 
-  it('a heat-up ramp from cold: no step is wasted below the eutectoid, the steps crowd at the hot end', () => {
-    const startK = celsiusToKelvin(20);
-    const endK = celsiusToKelvin(930);
-    const progress = rampProgress(3600, startK, endK, DIFFUSIVITY_MODELS.agren.diffusivity, 1);
-    const ends = stepEndTimes(3600, 12, 1.2, progress);
-    const eutectoidS = ((EUTECTOID_TEMP_K - startK) / (endK - startK)) * 3600;
-    expect(ends[0]!).toBeGreaterThan(eutectoidS);
+  it('a heat-up ramp from cold: one idle step up to the A1 crossing, then the steps of the austenite part', () => {
+    const ramp = { durationH: 1, startTempC: 20, endTempC: 930, carbonPotentialPct: 1 };
+    const [step] = scheduleTimeSteps(
+      { steel: { coreCarbonPct: 0.2 }, steps: [ramp] },
+      DIFFUSIVITY_MODELS.agren.diffusivity,
+      1,
+    ).steps;
+    const crossingS = ((EUTECTOID_TEMP_C - 20) / (930 - 20)) * 3600;
+    const ends = step!.endTimesS;
+    expect(step!.austenite).toEqual({ fromS: ends[0], untilS: 3600 });
+    expect(ends[0]).toBeCloseTo(crossingS, 9);
     expect(ends.at(-1)).toBe(3600);
-    for (let j = 1; j < ends.length; j++) expect(ends[j]!).toBeGreaterThan(ends[j - 1]!);
+    // After the crossing the steps grow from a small start, the first one the shortest.
+    const dt = Array.from(ends, (t, j) => t - (j === 0 ? 0 : ends[j - 1]!));
+    for (const step of dt) expect(step).toBeGreaterThan(0);
+    expect(Math.min(...dt.slice(1))).toBe(dt[1]);
+    expect(dt.at(-1)!).toBeGreaterThan(dt[1]!);
+  });
+  it('a cool-down through A1: the last active step ends on the crossing, one idle step after it', () => {
+    const ramp = { durationH: 1, startTempC: 900, endTempC: 500, carbonPotentialPct: null };
+    const [step] = scheduleTimeSteps(
+      { steel: { coreCarbonPct: 0.2 }, steps: [ramp] },
+      DIFFUSIVITY_MODELS.agren.diffusivity,
+      1,
+    ).steps;
+    const crossingS = ((900 - EUTECTOID_TEMP_C) / 400) * 3600;
+    const ends = step!.endTimesS;
+    expect(step!.austenite!.untilS).toBeCloseTo(crossingS, 9);
+    expect(ends.at(-2)).toBe(step!.austenite!.untilS);
+    expect(ends.at(-1)).toBe(3600);
+  });
+  it('a soak at A1 or below has no austenite and one time step', () => {
+    const soak = { durationH: 2, startTempC: EUTECTOID_TEMP_C, endTempC: EUTECTOID_TEMP_C, carbonPotentialPct: 1 };
+    const [step] = scheduleTimeSteps(
+      { steel: { coreCarbonPct: 0.2 }, steps: [soak] },
+      DIFFUSIVITY_MODELS.agren.diffusivity,
+      1,
+    ).steps;
+    expect(step!.austenite).toBeUndefined();
+    expect(Array.from(step!.endTimesS)).toEqual([7200]);
   });
 });

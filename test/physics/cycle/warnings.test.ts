@@ -44,11 +44,53 @@ describe('cycle warnings', () => {
     expect(codes(neutralRamp.warnings).filter((c) => c.startsWith('safety'))).toEqual([]);
   });
 
-  it('a carburizing atmosphere below the eutectoid warns, and no carbon goes in', () => {
+  it('a carburizing atmosphere below the eutectoid warns, says no carbon goes in, and none does', () => {
     const result = runCycle(plainRecipe([soak(3, 650, 0.9)]));
-    expect(codes(result.warnings)).toEqual(['safety.atmosphereBelowSafeTemperature@0']);
+    expect(codes(result.warnings)).toEqual([
+      'safety.atmosphereBelowSafeTemperature@0',
+      'austenite.noneInStep@0',
+      'hardening.noAustenite@0',
+    ]);
     expect(result.surfaceCarbonPct).toBe(0.2);
     expect(result.effectiveCaseDepthMm).toBe(0);
+  });
+
+  it('a last (hardening) step ending at or below 727 °C: the part will not harden from there', () => {
+    const result = runCycle(plainRecipe([soak(4, 925, 0.9), soak(0.5, 720, null)]));
+    expect(result.warnings.filter((w) => w.code === 'hardening.noAustenite')).toEqual([
+      { code: 'hardening.noAustenite', params: { tempC: 720, limitC: 727 }, stepIndex: 1 },
+    ]);
+    expect(codes(runCycle(plainRecipe([soak(4, 925, 0.9), soak(0.5, 850, 0.8)])).warnings)).toEqual([]);
+  });
+
+  it('carburizing in a step that stays between A1 and the core’s Ac3 (Andrews 1965) cautions a two-phase core; a heat-up through it does not', () => {
+    // Plain 0.20 %C core: Ac3 = 910 − 203·√0.2 = 819 °C.
+    const low = runCycle(plainRecipe([soak(4, 800, 0.9)]));
+    expect(low.warnings.find((w) => w.code === 'austenite.twoPhaseCore')).toEqual({
+      code: 'austenite.twoPhaseCore',
+      params: { tempC: 800, ac3C: 819 },
+      stepIndex: 0,
+    });
+    const heatUp = runCycle(
+      plainRecipe([{ durationH: 1, startTempC: 760, endTempC: 925, carbonPotentialPct: 0.9 }, soak(3, 925, 0.9)]),
+    );
+    expect(codes(heatUp.warnings).filter((c) => c.startsWith('austenite'))).toEqual([]);
+  });
+
+  it('a potential the alloy factor lifts above saturation cautions before the surface gets there', () => {
+    // 20MnCr5 (factor 1.1181) at 930 °C, Cp 1.2: it draws the surface to 1.342 %C against Acm 1.284 %C.
+    const composition = { Si: 0.25, Mn: 1.25, Cr: 1.15, Ni: 0, Mo: 0 };
+    const short: Recipe = { ...plainRecipe([soak(0.5, 930, 1.2)]), steel: { coreCarbonPct: 0.2, composition } };
+    const result = runCycle(short);
+    expect(result.surfaceCarbonPct).toBeLessThan(1.284);
+    expect(result.warnings.find((w) => w.code === 'saturation.equilibriumAboveAcm')?.params).toEqual({
+      potentialPct: 1.2,
+      carbonPct: 1.342,
+      limitPct: 1.28,
+      tempC: 930,
+    });
+    const plain = runCycle(plainRecipe([soak(0.5, 930, 1.2)]));
+    expect(codes(plain.warnings).filter((c) => c.startsWith('saturation'))).toEqual([]);
   });
 
   it('a case deeper than a third of the plate thickness or bar radius warns of through-carburizing', () => {

@@ -99,9 +99,15 @@ const errorCases: [string, unknown, string, string | undefined][] = [
   ],
   [
     'hardening temperature out of range',
-    { ...minimal, hardening: { temperatureC: 600, timeH: 0.5 } },
+    { ...minimal, hardening: { temperatureC: 1200, timeH: 0.5 } },
     'temperature.outOfRange',
     'hardening.temperatureC',
+  ],
+  [
+    'boost at 720 °C: no austenite',
+    { ...minimal, boost: { temperatureC: 720, carbonPotentialPct: 1.1 } },
+    'temperature.noAustenite',
+    'boost.temperatureC',
   ],
   [
     'hardening time not positive',
@@ -168,6 +174,10 @@ describe('readPlanRequest: every error path returns its key and field', () => {
       expect(result.error.field).toBe(field);
       expect(ERROR_CODES).toContain(result.error.code);
     }
+  });
+
+  it('accepts a hardening soak without austenite (600 °C): the forward run cautions it, it is not an input error', () => {
+    expect(readPlanRequest({ ...minimal, hardening: { temperatureC: 600, timeH: 0.5 } }).ok).toBe(true);
   });
 
   it('accepts a target range of a single value (min = max)', () => {

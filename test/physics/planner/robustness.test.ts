@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { planTwoStepCycle } from '../../../src/physics/planner/planner';
 import { ERROR_CODES, WARNING_CODES } from '../../../src/physics/result';
 import { allFinite } from '../allFinite';
+import { expectPossible } from './fixtures';
 
 const wildNumber = fc.oneof(
   fc.double(),
@@ -60,6 +61,8 @@ const wildRequest = fc.record(
 
 /** Requests inside every accepted range (edges included), so they reach the search. */
 const inRange = (min: number, max: number) => fc.double({ min, max, noNaN: true });
+/** Carburizing temperatures accepted: above A1 (727 °C) up to 1150 °C. */
+const aboveA1 = fc.double({ min: 727, max: 1150, minExcluded: true, noNaN: true });
 const sortedPair = (min: number, max: number) =>
   fc.tuple(inRange(min, max), inRange(min, max)).map(([a, b]) => ({ min: Math.min(a, b), max: Math.max(a, b) }));
 const validRequest = fc.record({
@@ -77,16 +80,16 @@ const validRequest = fc.record({
     fc.record({ kind: fc.constant('bar'), diameterMm: inRange(0.1, 1000) }),
   ),
   boost: fc.record({
-    temperatureC: inRange(700, 1150),
+    temperatureC: aboveA1,
     carbonPotentialPct: inRange(1, 2.11),
     betaMPerS: inRange(1e-12, 1e3),
   }),
   diffuse: fc.record({
-    temperatureC: inRange(700, 1150),
+    temperatureC: aboveA1,
     carbonPotentialPct: inRange(0, 0.99),
     betaMPerS: inRange(1e-12, 1e3),
   }),
-  hardening: fc.option(fc.record({ temperatureC: inRange(700, 1150), timeH: inRange(0.01, 5) }), { nil: undefined }),
+  hardening: fc.option(fc.record({ temperatureC: inRange(0, 1150), timeH: inRange(0.01, 5) }), { nil: undefined }),
   targetEcdMm: sortedPair(0.001, 10),
   targetSurfaceCarbonPct: sortedPair(0.41, 2.11),
   diffusivityFactor: inRange(0.1, 10),
@@ -105,7 +108,8 @@ describe('planTwoStepCycle on wild input', () => {
     );
   });
 
-  it('requests at the edges of every accepted range give a finite plan with known codes, within the time limit, or a typed error', () => {
+  it('requests at the edges of every accepted range give a finite plan with known codes, within the time limit, or a typed error; every suggestion stays possible', () => {
+    const checked = new Map<string, number>();
     fc.assert(
       fc.property(validRequest, (request) => {
         const result = planTwoStepCycle(request);
@@ -127,8 +131,16 @@ describe('planTwoStepCycle on wild input', () => {
         for (const w of [...v.warnings, ...v.suggestions, ...(v.binding ? [v.binding] : [])])
           expect(WARNING_CODES).toContain(w.code);
         expect(v.reachable).toBe(v.binding === undefined);
+        // Out of reach, something is always said: a possible change, or that none is (a final-check miss says to widen the targets).
+        if (!v.reachable && v.binding?.code !== 'plan.missedInFinalCheck')
+          expect(v.suggestions.length).toBeGreaterThan(0);
+        for (const suggestion of v.suggestions)
+          if (expectPossible(request, suggestion))
+            checked.set(suggestion.code, (checked.get(suggestion.code) ?? 0) + 1);
       }),
       { numRuns: 300 },
     );
+    // The property met suggestions of several kinds, so it had something to check.
+    expect(checked.size).toBeGreaterThanOrEqual(3);
   });
 });

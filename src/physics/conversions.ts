@@ -5,7 +5,7 @@
 import { hrcToHv, hvToHrc } from './hardness';
 import { fail, ok, type Result } from './result';
 import { convert, quantityOf, UNITS } from './units';
-import { asFields, readNumber } from './validate';
+import { asFields, readNumber, shownValue } from './validate';
 
 export interface ConversionResult {
   quantity: string;
@@ -31,14 +31,15 @@ export function convertRequest(request: unknown): Result<ConversionResult> {
   if (!fields.ok) return fields;
   const value = readNumber(fields.value, 'value');
   if (!value.ok) return value;
-  const from = String(fields.value.from ?? '');
+  const from = shownValue(fields.value.from ?? '');
   const isHardness = (HARDNESS_UNITS as readonly string[]).includes(from);
   const quantity = isHardness ? 'hardness' : quantityOf(from);
   if (!quantity) return fail('unit.unknown', 'from', { unit: from });
   const allUnits: readonly string[] = isHardness ? HARDNESS_UNITS : UNITS[quantity as keyof typeof UNITS];
   const to = fields.value.to;
-  if (to !== undefined && !allUnits.includes(String(to))) return fail('unit.unknown', 'to', { unit: String(to) });
-  const targets = to === undefined ? allUnits : [String(to)];
+  if (to !== undefined && !allUnits.includes(shownValue(to)))
+    return fail('unit.unknown', 'to', { unit: shownValue(to) });
+  const targets = to === undefined ? allUnits : [shownValue(to)];
   const values: Record<string, number> = {};
   for (const unit of targets) {
     const out = isHardness ? convertHardness(value.value, from, unit) : convert(value.value, from, unit);

@@ -183,7 +183,7 @@ describe('the calibration view', () => {
       shift: 'A',
       shiftDate: '2025-01-01',
       lab: { ecdMm: ecd.value.effectiveCaseDepthMm },
-    } as Job;
+    };
   };
   const now = new Date('2025-03-06T08:00:00.000Z');
   const jobs = [job('F1', 4, 1.21), job('F1', 6, 1.21), job('F1', 8, 1.21), job('F2', 6, 0.9)];

@@ -13,7 +13,6 @@ import {
   updateStep,
 } from '../../src/app/cycle/state';
 import { field } from '../../src/app/ui/fieldText';
-import { caseDepth } from '../../src/physics';
 
 const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: 0.05, betaMPerS: 1.5e-7 };
 

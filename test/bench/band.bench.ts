@@ -41,7 +41,7 @@ function cycleJobs(): Job[] {
       status: 'done',
       lab: { ecdMm: 0.95 + i * 0.01 },
       notes: '',
-    } as Job;
+    };
   });
 }
 

@@ -68,8 +68,13 @@ function watchPage(page: Page, recorder: Recorder): void {
   page.on('pageerror', (error) => recorder.problems.push(`page error: ${error.message}`));
 }
 
+/** Closes the shared browser; `undefined` when launching it failed, so the failure itself is what is reported. */
+export async function closeBrowser(browser: Browser | undefined): Promise<void> {
+  await browser?.close();
+}
+
 export async function cspViolations(page: Page): Promise<string[]> {
-  return page.evaluate(() => (window as unknown as { __cspViolations: string[] }).__cspViolations ?? []);
+  return page.evaluate(() => (window as unknown as { __cspViolations?: string[] }).__cspViolations ?? []);
 }
 
 /** Opens a screen by its route and waits for its heading. */

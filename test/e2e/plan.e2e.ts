@@ -12,16 +12,23 @@ import type { Job } from '../../src/jobs/schema';
 import { DEFAULT_SHIFT_CONFIG, shiftOf } from '../../src/jobs/shift';
 import { caseDepth } from '../../src/physics';
 import { runAxe } from './axe';
-import { BASE_URL, cspViolations, foreignRequests, launch, openScreen, phoneContext, smallTargets } from './browser';
+import {
+  BASE_URL,
+  closeBrowser,
+  cspViolations,
+  foreignRequests,
+  launch,
+  openScreen,
+  phoneContext,
+  smallTargets,
+} from './browser';
 import { backupText, importFile } from './logData';
 
 let browser: Browser;
 before(async () => {
   browser = await launch();
 });
-after(async () => {
-  await browser?.close();
-});
+after(() => closeBrowser(browser));
 
 const median = (values: number[]) => {
   const sorted = [...values].sort((a, b) => a - b);

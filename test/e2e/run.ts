@@ -64,7 +64,7 @@ const server: ChildProcess = spawn(
     stdio: ['ignore', 'ignore', 'inherit'],
   },
 );
-let exitCode = 1;
+let exitCode: number;
 const started = Date.now();
 try {
   await waitForServer(url, 20_000);

@@ -40,7 +40,7 @@ function job(
     status: 'done',
     prediction: { ...draft.prediction!, ...predictionExtra },
     ...(labEcdMm === undefined ? {} : { lab: { ecdMm: labEcdMm } }),
-  } as Job;
+  };
 }
 
 const depthInputs = (temperatureC: number, timeH: number, extra: Partial<JobInputs> = {}): JobInputs =>

@@ -31,10 +31,10 @@ export default function CycleScreen() {
   const outcome = cycleOutcome.value;
   const errors = outcome.errors;
   const result = outcome.result;
-  const view = useMemo(() => (result ? cycleView(result, t, show, units) : undefined), [result, t, units]);
+  const view = useMemo(() => (result ? cycleView(result, t, show, units) : undefined), [result, t, show, units]);
   const logEntry = useMemo(() => (result ? cycleLogEntry(result) : undefined), [result]);
   const canAdd = form.steps.length < MAX_STEPS;
-  const set = (next: typeof form) => (cycleForm.value = next);
+  const set = (next: typeof form) => patch(cycleForm, next);
   return (
     <div class="screen cycle">
       <CycleTabs current="cycle" />

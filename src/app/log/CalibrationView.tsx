@@ -16,13 +16,13 @@ import { useScreenContext, type ScreenContext } from '../ui/screenContext';
 import { CheckField } from '../ui/TextField';
 import { calibrationCards, type FurnaceCard } from './calibration';
 import { formatMoment } from './dates';
-import { useLogRead } from './useLog';
+import { useJobList } from './useLog';
 
 export function CalibrationView() {
   const ctx = useScreenContext();
   const { t } = ctx;
-  const list = useLogRead((store) => store.list({}), []);
-  const jobs: Job[] = list.state === 'ready' ? list.value.jobs : [];
+  const list = useJobList({});
+  const jobs = useMemo((): Job[] => (list.state === 'ready' ? list.value.jobs : []), [list]);
   const stored = calibrations.value;
   const current = model.value;
   const cards = useMemo(() => calibrationCards(jobs, stored, current, new Date()), [jobs, stored, current]);
@@ -85,7 +85,7 @@ function FurnaceCalibrationCard({
       {calibration.skipped.length > 0 && (
         <p class="note">{t('app.calibration.skipped', { count: calibration.skipped.length })}</p>
       )}
-      {(fresh || stored) && (
+      {(fresh !== undefined || stored !== undefined) && (
         <CheckField
           id={`${id}-apply`}
           label={t('app.calibration.apply', { furnace })}

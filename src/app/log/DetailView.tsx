@@ -22,13 +22,13 @@ import {
 } from './jobForm';
 import { comparisonRows, labRows, planRows, predictionRows } from './jobRows';
 import { LabEditor } from './LabEditor';
-import { useLogRead } from './useLog';
+import { useJob } from './useLog';
 
 type Mode = 'view' | 'edit' | 'lab';
 
 export function DetailView({ id }: { id: string }) {
   const { t, locale } = useScreenContext();
-  const loaded = useLogRead((store) => store.get(id), [id]);
+  const loaded = useJob(id);
   const back = (
     <a class="back-link" href={hrefFor('log')}>
       {t('app.log.detail.back')}

@@ -9,7 +9,7 @@ import { DamagedRecords } from './DamagedRecords';
 import { filterForm, toJobFilter } from './filter';
 import { FilterPanel } from './FilterPanel';
 import { JobCard } from './JobCard';
-import { useLogRead } from './useLog';
+import { useJobList } from './useLog';
 
 /** Jobs drawn at once; more on request, so a year of log stays quick on a phone. */
 const PAGE = 50;
@@ -37,7 +37,7 @@ export function ListView() {
   const { t, show, locale } = ctx;
   const filter = toJobFilter(filterForm.value);
   const filterKey = JSON.stringify(filter);
-  const list = useLogRead((store) => store.list(filter), [filterKey]);
+  const list = useJobList(filter);
   const [shown, setShown] = useState(PAGE);
   useEffect(() => setShown(PAGE), [filterKey]);
   useEffect(() => {

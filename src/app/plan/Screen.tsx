@@ -39,7 +39,7 @@ export default function PlanScreen() {
   const outcome = planOutcome.value;
   const errors = outcome.errors;
   const result = outcome.result;
-  const view = useMemo(() => (result ? planView(result, t, show) : undefined), [result, t, units]);
+  const view = useMemo(() => (result ? planView(result, t, show) : undefined), [result, t, show]);
   const logEntry = useMemo(
     () =>
       result?.plan.reachable

@@ -40,8 +40,8 @@ function isCalibration(raw: unknown): raw is StoredCalibration {
     c.furnace.trim() !== '' &&
     c.furnace.length <= FURNACE_MAX_LENGTH &&
     finiteIn(c.low, min, max) &&
-    finiteIn(c.factor, c.low as number, max) &&
-    finiteIn(c.high, c.factor as number, max) &&
+    finiteIn(c.factor, c.low, max) &&
+    finiteIn(c.high, c.factor, max) &&
     Number.isInteger(c.jobCount) &&
     (c.jobCount as number) > 0 &&
     finiteIn(c.rmsMm, 0, Number.MAX_VALUE) &&

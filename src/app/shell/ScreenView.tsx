@@ -26,15 +26,15 @@ function load(id: Exclude<ScreenId, 'depth'>): void {
 export function ScreenView({ id }: { id: ScreenId }) {
   const t = useT();
   const Screen = id === 'depth' || fullLocale.value ? loaded.value[id] : undefined;
-  const shown = useRef<ScreenId | null>(null);
+  const shownRef = useRef<ScreenId | null>(null);
   useEffect(() => {
     if (!Screen) {
       if (id !== 'depth') load(id);
       return;
     }
     // After a navigation (not the first paint), once the screen is on the page, move focus to its heading.
-    if (shown.current !== null && shown.current !== id) document.querySelector<HTMLElement>('main h1')?.focus();
-    shown.current = id;
+    if (shownRef.current !== null && shownRef.current !== id) document.querySelector<HTMLElement>('main h1')?.focus();
+    shownRef.current = id;
   }, [id, Screen]);
   if (Screen) return <Screen />;
   return <p class="screen-loading">{failed.value[id] ? t('app.shell.loadFailed') : t('app.shell.loading')}</p>;

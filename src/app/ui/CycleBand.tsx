@@ -30,7 +30,7 @@ export function CycleBand({ id, recipe, diffusivityFactor, ctx }: CycleBandProps
       open && recipe
         ? timed('band', () => cycleDepthBand(recipe, { diffusivityFactor, temperatureToleranceC, betaRangeMPerS }))
         : undefined,
-    [open, recipe, diffusivityFactor, temperatureToleranceC, betaRangeMPerS.min, betaRangeMPerS.max],
+    [open, recipe, diffusivityFactor, temperatureToleranceC, betaRangeMPerS],
   );
   return (
     <div class="cycle-band" id={id}>

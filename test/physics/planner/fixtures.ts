@@ -2,7 +2,7 @@
 import { readFileSync } from 'node:fs';
 import { runCycle } from '../../../src/physics/cycle/simulate';
 import type { Recipe, SimulationResult } from '../../../src/physics/cycle/recipe';
-import { DIFFUSIVITY_MODELS, type DiffusivityModelId } from '../../../src/physics/diffusivity';
+import { DIFFUSIVITY_MODELS } from '../../../src/physics/diffusivity';
 
 export const readExample = (file: string): string =>
   readFileSync(new URL(`../../../public/examples/${file}`, import.meta.url), 'utf8');
@@ -18,7 +18,7 @@ export const pinionWith = (patch: Record<string, unknown>): Record<string, unkno
 
 /** The recipe simulated forward at the simulator's default resolution, D scaled by the furnace factor. */
 export function forward(recipe: Recipe, factor = 1, resolution = 1): SimulationResult {
-  const model = DIFFUSIVITY_MODELS[(recipe.model ?? 'agren') as DiffusivityModelId].diffusivity;
+  const model = DIFFUSIVITY_MODELS[recipe.model ?? 'agren'].diffusivity;
   return runCycle(recipe, resolution, { diffusivity: (tempK, carbonPct) => factor * model(tempK, carbonPct) });
 }
 

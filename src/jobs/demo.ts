@@ -4,9 +4,7 @@
  * Predictions come from the physics engine; "lab" depths are the prediction with an invented
  * per-furnace offset and scatter, so the comparison screens have something to show.
  */
-import { timeForCaseDepth, type TimeResult } from '../physics/caseDepth';
-import { findGrade } from '../physics/grades';
-import { mulberry32 } from '../physics/random';
+import { findGrade, mulberry32, timeForCaseDepth, type TimeResult } from '../physics';
 import type { Job, JobStatus } from './schema';
 import { DEFAULT_SHIFT_CONFIG, shiftOf, type ShiftConfig } from './shift';
 

@@ -4,10 +4,15 @@
  * Numbers are stored as finite numbers; the physics layer checked their ranges when it ran.
  */
 import * as v from 'valibot';
-import { MODEL_IDS } from '../physics/diffusivity';
-import type { Recipe } from '../physics/cycle/recipe';
-import { ALLOY_ELEMENT_MAX_PCT, MAX_CARBON_PCT } from '../physics/steel';
-import { DIFFUSIVITY_FACTOR_LIMITS, MAX_TEMPERATURE_TOLERANCE_C, MAX_TOTAL_CASE_MARGIN_PCT } from '../physics/validate';
+import {
+  ALLOY_ELEMENT_MAX_PCT,
+  DIFFUSIVITY_FACTOR_LIMITS,
+  MAX_CARBON_PCT,
+  MAX_TEMPERATURE_TOLERANCE_C,
+  MAX_TOTAL_CASE_MARGIN_PCT,
+  MODEL_IDS,
+  type Recipe,
+} from '../physics';
 
 export const ModelIdSchema = v.picklist(MODEL_IDS);
 

@@ -19,9 +19,7 @@ import {
 } from '../../src/app/settings/calibration';
 import { makeShow } from '../../src/app/ui/show';
 import { createI18n } from '../../src/i18n/i18n';
-import { caseDepth, runCycle } from '../../src/physics';
-import { scaledDiffusivity } from '../../src/physics/cycle/plan';
-import { DIFFUSIVITY_MODELS } from '../../src/physics/diffusivity';
+import { caseDepth, DIFFUSIVITY_MODELS, runCycle, scaledDiffusivity } from '../../src/physics';
 import type { Job } from '../../src/jobs/schema';
 import { pinionDraft } from '../jobs/helpers';
 

@@ -1,6 +1,6 @@
 /** The cycle editor's list operations, its recipe reading, and the solver behind the adapter. */
 import { describe, expect, it } from 'vitest';
-import { simulateCycle } from '../../src/physics/cycle/simulate';
+import { simulateCycle } from '../../src/physics';
 import { buildRecipe, computeCycle } from '../../src/app/cycle/results';
 import { simulate } from '../../src/app/cycle/simulate';
 import {

@@ -25,7 +25,7 @@ import { recoveryNote } from '../../src/app/recovery/logNote';
 import { computeRecovery } from '../../src/app/recovery/results';
 import { DEFAULT_RECOVERY_FORM } from '../../src/app/recovery/state';
 import { hrefFor, screenFromHash, subPathFromHash } from '../../src/app/shell/route';
-import { CUSTOM_STEEL } from '../../src/app/ui/steel';
+import { CUSTOM_STEEL } from '../../src/app/fields/steel';
 import { field } from '../../src/app/ui/fieldText';
 import { makeShow } from '../../src/app/ui/show';
 import { APP_VERSION } from '../../src/app/version';

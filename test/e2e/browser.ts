@@ -4,6 +4,7 @@
  */
 import { existsSync } from 'node:fs';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { SCREEN_IDS } from '../../src/app/shell/screens';
 
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
@@ -91,7 +92,8 @@ export function foreignRequests(recorder: Recorder): string[] {
   );
 }
 
-export const SCREENS = ['depth', 'cycle', 'plan', 'recovery', 'log', 'convert', 'settings', 'safety'] as const;
+/** Every screen's id, from the app's own screens table. */
+export const SCREENS = SCREEN_IDS;
 
 /** Waits until the service worker has cached the app (the header says "ready offline"). */
 export async function waitUntilOfflineReady(page: Page): Promise<void> {

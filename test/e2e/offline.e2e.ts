@@ -7,6 +7,7 @@ import assert from 'node:assert/strict';
 import { readFileSync, writeFileSync } from 'node:fs';
 import { after, before, describe, it } from 'node:test';
 import type { Browser } from 'playwright-core';
+import { HEADER_SCREEN, HOME, NAV_SCREENS } from '../../src/app/shell/screens';
 import { closeBrowser, foreignRequests, launch, openScreen, phoneContext, waitUntilOfflineReady } from './browser';
 
 let browser: Browser;
@@ -44,8 +45,9 @@ describe('offline', () => {
     await context.setOffline(true);
     await page.waitForFunction(() => !navigator.onLine);
     assert.equal(await page.getAttribute('.offline-status', 'data-offline-state'), 'offline');
-    for (const id of ['cycle', 'recovery', 'log', 'convert', 'settings', 'safety']) {
-      await page.click(id === 'safety' ? '.safety-link' : `a[href="#/${id}"]`);
+    // Every item of the bottom bar but the one open, then the header's link.
+    for (const id of [...NAV_SCREENS.map((s) => s.id).filter((id) => id !== HOME), HEADER_SCREEN.id]) {
+      await page.click(id === HEADER_SCREEN.id ? '.safety-link' : `a[href="#/${id}"]`);
       await page.waitForFunction(
         (screen) => location.hash === `#/${screen}` && !document.querySelector('.screen-loading'),
         id,

@@ -5,7 +5,7 @@ import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { Segmented } from '../ui/Segmented';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { conversionOutcome } from './results';
 import { CONVERT_QUANTITIES, CONVERT_UNITS, convertForm, quantityOfForm, unitOfForm } from './state';
 import './screen.css';

@@ -12,7 +12,7 @@ import { model } from '../settings/state';
 import { hrefFor } from '../shell/route';
 import { ErrorNote } from '../ui/Notices';
 import { ResultList, type ResultRow } from '../ui/ResultList';
-import { useScreenContext, type ScreenContext } from '../ui/screenContext';
+import { useScreenContext, type ScreenContext } from '../settings/screenContext';
 import { CheckField } from '../ui/TextField';
 import { calibrationCards, type FurnaceCard } from './calibration';
 import { formatMoment } from './dates';

@@ -4,7 +4,7 @@ import { describeJobsError, JOB_STATUSES, type Job, type JobStatus } from '../..
 import { ErrorNote } from '../ui/Notices';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { Segmented } from '../ui/Segmented';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { hrefFor } from '../shell/route';
 import { writeToLog } from './db';
 import { formatCalendarDate, formatMoment } from './dates';

@@ -16,7 +16,7 @@ import {
 import { language } from '../../i18n/useT';
 import { ErrorNote } from '../ui/Notices';
 import { Segmented } from '../ui/Segmented';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { APP_VERSION } from '../version';
 import { jobStore, writeToLog } from './db';
 import { downloadText } from './download';

@@ -3,7 +3,7 @@ import { JOB_STATUSES, SHIFT_IDS, type ShiftId } from '../../jobs';
 import { ChoiceField } from '../ui/ChoiceField';
 import { Segmented } from '../ui/Segmented';
 import { TextField } from '../ui/TextField';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { formatCalendarDate } from './dates';
 import { filterForm, isCurrentShift, showCurrentShift, type FilterForm, type StatusChoice } from './filter';
 

@@ -4,7 +4,7 @@ import { useEffect, useState } from 'preact/hooks';
 import { describeJobsError, type Job } from '../../jobs';
 import { DEMO_FURNACES, DEMO_PART_NUMBERS } from '../../jobs/demo';
 import { ErrorNote } from '../ui/Notices';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { DamagedRecords } from './DamagedRecords';
 import { filterForm, toJobFilter } from './filter';
 import { FilterPanel } from './FilterPanel';

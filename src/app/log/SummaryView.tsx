@@ -3,7 +3,7 @@ import { describeJobsError, JOB_STATUSES, summarizeShift, type EcdComparison, ty
 import { NO_VALUE } from '../ui/format';
 import { ErrorNote } from '../ui/Notices';
 import { ResultList } from '../ui/ResultList';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { hrefFor } from '../shell/route';
 import { DamagedRecords } from './DamagedRecords';
 import { filterForm, toJobFilter } from './filter';

@@ -1,6 +1,6 @@
 /** The planner's worded results: times, predictions, what binds and what would help (kept out of the JSX). */
 import type { TFunction } from 'i18next';
-import { calibrationWords } from '../ui/calibration';
+import { calibrationWords } from '../fields/calibrationWords';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
 import { stepCautions, wordWarning } from '../ui/warningText';

@@ -9,7 +9,7 @@ import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
 import { Segmented } from '../ui/Segmented';
 import { TextField } from '../ui/TextField';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from './screenContext';
 import { temperatureDifferenceText } from '../ui/fieldText';
 import { UNIT_CHOICES, UNIT_SYSTEMS, type DisplayQuantity, type UnitSystem } from '../ui/units';
 import { hrefFor } from '../shell/route';

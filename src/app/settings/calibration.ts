@@ -4,8 +4,7 @@
  * furnace the calculators work for (one choice shared by every calculator: a person stands at
  * one furnace at a time).
  */
-import { isModelId, type DiffusivityModelId } from '../../physics';
-import { DIFFUSIVITY_FACTOR_LIMITS } from '../../physics/validate';
+import { DIFFUSIVITY_FACTOR_LIMITS, type DiffusivityModelId, isModelId } from '../../physics';
 import { persisted } from '../ui/persist';
 
 export interface StoredCalibration {

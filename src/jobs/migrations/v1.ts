@@ -6,7 +6,7 @@
  * Kept for the upgrade of old databases; never written any more.
  */
 import * as v from 'valibot';
-import { findGrade } from '../../physics/grades';
+import { findGrade } from '../../physics';
 import { issuesOf } from '../issues';
 import { JobSchema, type Job } from '../schema';
 import type { FieldIssue } from '../result';

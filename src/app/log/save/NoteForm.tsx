@@ -2,7 +2,7 @@
 import { useEffect, useRef, useState } from 'preact/hooks';
 import { addDays, describeJobsError, OPEN_STATUSES, type Job } from '../../../jobs';
 import { ChoiceField } from '../../ui/ChoiceField';
-import { useScreenContext } from '../../ui/screenContext';
+import { useScreenContext } from '../../settings/screenContext';
 import { writeToLog } from '../db';
 import { formatClockTime } from '../dates';
 import { FormActions } from '../FormActions';

@@ -2,7 +2,7 @@
 import { useEffect, useRef, useState } from 'preact/hooks';
 import { persisted, patch } from '../../ui/persist';
 import { ResultList } from '../../ui/ResultList';
-import { useScreenContext } from '../../ui/screenContext';
+import { useScreenContext } from '../../settings/screenContext';
 import { askPersistenceOnce, writeToLog } from '../db';
 import { formatCalendarDate } from '../dates';
 import type { LogEntry } from '../entry';

@@ -3,10 +3,10 @@ import type { TFunction } from 'i18next';
 import { useMemo } from 'preact/hooks';
 import { language, useT } from '../../i18n/useT';
 import type { InputError } from '../../physics';
-import { units } from '../settings/state';
-import { wordError } from './fieldError';
-import { makeShow, type Show } from './show';
-import type { DisplayUnits } from './units';
+import { units } from './state';
+import { wordError } from '../ui/fieldError';
+import { makeShow, type Show } from '../ui/show';
+import type { DisplayUnits } from '../ui/units';
 
 export interface ScreenContext {
   t: TFunction;

@@ -4,14 +4,13 @@
  * range is computed only while it is open, once per changed recipe.
  */
 import { useMemo, useState } from 'preact/hooks';
-import { cycleDepthBand } from '../../physics/cycle/band';
-import type { Recipe } from '../../physics/cycle/recipe';
+import { cycleDepthBand, type Recipe } from '../../physics';
 import { defaults } from '../settings/state';
 import { bandRow } from './band';
 import { BandMethod } from './BandMethod';
-import { ResultList } from './ResultList';
-import type { ScreenContext } from './screenContext';
-import { timed } from './timing';
+import { ResultList } from '../ui/ResultList';
+import type { ScreenContext } from '../settings/screenContext';
+import { timed } from '../ui/timing';
 
 export interface CycleBandProps {
   id: string;

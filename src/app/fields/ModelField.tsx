@@ -1,8 +1,8 @@
 /** A calculation's own diffusivity model, or the one in the settings (the empty choice). */
 import { MODEL_IDS } from '../../physics';
 import { model } from '../settings/state';
-import { ChoiceField } from './ChoiceField';
-import type { ScreenContext } from './screenContext';
+import { ChoiceField } from '../ui/ChoiceField';
+import type { ScreenContext } from '../settings/screenContext';
 
 export function ModelField({
   id,

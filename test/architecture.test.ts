@@ -100,6 +100,25 @@ function starExports(path: string, text?: string): string[] {
     .map((s) => `${path}:${source.getLineAndCharacterOfPosition(s.getStart()).line + 1}: ${s.getText()}`);
 }
 
+const DEMO_LOG = 'src/app/log/demo/demoLog.ts';
+
+const importKind = (d: Dependency) =>
+  importsOf(parseSource(d.from)).find((ref) => ref.line === d.line && ref.specifier === d.specifier)?.kind;
+
+/** String literals naming the demo plant's parts (KR-nnnn) or furnaces (F1–F3). */
+function demoNames(path: string, text?: string): string[] {
+  const source = parseSource(path, text);
+  const found: string[] = [];
+  const visit = (node: ts.Node) => {
+    if (ts.isStringLiteralLike(node)) {
+      for (const m of node.text.matchAll(/\bKR-\d{4}\b|^F[1-3]$/gu)) found.push(`${path}: ${m[0]}`);
+    }
+    ts.forEachChild(node, visit);
+  };
+  visit(source);
+  return found;
+}
+
 const files = (dir: string) => sourceFiles(dir).map(repoPath);
 const physics = files('src/physics');
 const jobs = files('src/jobs');
@@ -185,6 +204,25 @@ describe('architecture: the direction of dependencies', () => {
     const ui = files('src/app/ui');
     expect(ui.length).toBeGreaterThan(10);
     expect(ui.flatMap((path) => uiImportProblems(dependencies(path)))).toEqual([]);
+  });
+
+  it('the demo log loads only through the explicit action: one import(), from the log files view', () => {
+    const intoDemo = files('src')
+      .flatMap((path) => dependencies(path))
+      .filter((d) => d.target === DEMO_LOG);
+    expect(intoDemo.map((d) => `${d.from} ${importKind(d)}`)).toEqual(['src/app/log/DemoData.tsx dynamic']);
+  });
+
+  it('no production source outside the demo log names a demo part number or furnace (text in code, not comments)', () => {
+    expect(demoNames('src/app/x.ts', "const picks = ['KR-2231', 'F2']; // KR-4410 in a comment is fine")).toEqual([
+      'src/app/x.ts: KR-2231',
+      'src/app/x.ts: F2',
+    ]);
+    expect(
+      files('src')
+        .filter((path) => path !== DEMO_LOG)
+        .flatMap((path) => demoNames(path)),
+    ).toEqual([]);
   });
 
   it('the CLI loads neither the app nor the job log (its whole static import graph)', () => {

@@ -5,7 +5,7 @@
  */
 import type { Page } from 'playwright-core';
 import { backupToJson, createBackup } from '../../src/jobs/backup';
-import { demoJobs } from '../../src/jobs/demo';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import type { Job } from '../../src/jobs/schema';
 import { DEFAULT_SHIFT_CONFIG, shiftOf } from '../../src/jobs/shift';
 

@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { backupToJson, createBackup } from '../../src/jobs/backup';
-import { demoJobs } from '../../src/jobs/demo';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import { importBackup } from '../../src/jobs/transfer';
 import { freshStore, pinionDraft, uniqueDbName, unwrap } from './helpers';
 

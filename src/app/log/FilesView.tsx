@@ -19,6 +19,7 @@ import { Segmented } from '../ui/Segmented';
 import { useScreenContext } from '../settings/screenContext';
 import { APP_VERSION } from '../version';
 import { jobStore, writeToLog } from './db';
+import { DemoData } from './DemoData';
 import { downloadText } from './download';
 
 type DecimalMark = '.' | ',';
@@ -125,6 +126,8 @@ export function FilesView() {
           {imported && (imported.ok ? <p class="log-saved">{imported.text}</p> : <ErrorNote message={imported.text} />)}
         </div>
       </section>
+
+      <DemoData />
     </>
   );
 }

@@ -7,7 +7,7 @@ import { useScreenContext } from '../settings/screenContext';
 import { formatCalendarDate } from './dates';
 import { filterForm, isCurrentShift, showCurrentShift, type FilterForm, type StatusChoice } from './filter';
 
-/** Furnaces and parts offered by the filter: those seen in the log this session and the demo plant's. */
+/** Furnaces and parts offered by the filter: those of this device's log (recent, and seen this session). */
 export function FilterPanel({ furnaces, parts }: { furnaces: readonly string[]; parts: readonly string[] }) {
   const { t, locale } = useScreenContext();
   const form = filterForm.value;

@@ -62,6 +62,6 @@ export {
 export { readRecipe } from './cycle/readRecipe';
 export { runCycle, simulateCycle } from './cycle/simulate';
 export { scaledDiffusivity } from './cycle/plan';
-export { cycleDepthBand } from './cycle/band';
+export { cycleDepthBand, type CycleBand, type CycleBandOptions } from './cycle/band';
 /** Reproducible pseudo-random numbers, for synthetic data (the demo log), never for anything secret. */
 export { mulberry32 } from './random';

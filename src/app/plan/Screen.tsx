@@ -76,6 +76,7 @@ export default function PlanScreen() {
         value={view?.answer}
         detail={view?.answerDetail}
         note={view?.answerNote}
+        updating={outcome.updating ? t('app.common.updating') : undefined}
       />
 
       <section class="card" aria-labelledby="plan-targets">

@@ -77,6 +77,8 @@ export default defineConfig({
       },
     },
   },
+  // The physics worker (src/app/worker/) is a module worker: ES output, so it can share chunks and stay 'self' under the CSP.
+  worker: { format: 'es' },
   preview: { port: 4173, strictPort: true },
   test: {
     include: ['test/**/*.test.ts', 'test/**/*.test.tsx'],

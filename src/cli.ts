@@ -6,13 +6,19 @@
  */
 import { readFileSync } from 'node:fs';
 import { createI18n, errorMessage, warningMessage } from './i18n/i18n';
-import { caseDepth, temperatureForCaseDepth, timeForCaseDepth } from './physics/caseDepth';
-import { convertRequest } from './physics/conversions';
-import { simulateCycle } from './physics/cycle/simulate';
-import { equivalentTime } from './physics/equivalentTime';
-import { planTwoStepCycle } from './physics/planner/planner';
-import { traverse } from './physics/traverse/traverse';
-import type { InputError, Result, Warning } from './physics/result';
+import {
+  caseDepth,
+  convertRequest,
+  equivalentTime,
+  type InputError,
+  planTwoStepCycle,
+  type Result,
+  simulateCycle,
+  temperatureForCaseDepth,
+  timeForCaseDepth,
+  traverse,
+  type Warning,
+} from './physics';
 
 type Command = (request: unknown) => Result<object>;
 

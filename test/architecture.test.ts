@@ -77,6 +77,48 @@ function browserGlobals(path: string, text?: string): string[] {
   return found;
 }
 
+/** Outside physics, physics is reached only through its public entry, `physics/index.ts`. */
+function deepPhysicsImports(deps: Dependency[]): string[] {
+  return deps
+    .filter((d) => layer(d.from) !== 'physics' && d.target && layer(d.target) === 'physics')
+    .filter((d) => d.target !== 'src/physics/index.ts')
+    .map(describeDependency);
+}
+
+/** `app/ui` is a leaf of the app: plain widgets and formatting, which know no settings, screen or feature. */
+function uiImportProblems(deps: Dependency[]): string[] {
+  return deps
+    .filter((d) => d.target?.startsWith('src/app/') && !d.target.startsWith('src/app/ui/'))
+    .map(describeDependency);
+}
+
+/** `export * from` in a module: its public names would be whatever the modules behind it export. */
+function starExports(path: string, text?: string): string[] {
+  const source = parseSource(path, text);
+  return source.statements
+    .filter((s) => ts.isExportDeclaration(s) && !s.exportClause && s.moduleSpecifier)
+    .map((s) => `${path}:${source.getLineAndCharacterOfPosition(s.getStart()).line + 1}: ${s.getText()}`);
+}
+
+const DEMO_LOG = 'src/app/log/demo/demoLog.ts';
+
+const importKind = (d: Dependency) =>
+  importsOf(parseSource(d.from)).find((ref) => ref.line === d.line && ref.specifier === d.specifier)?.kind;
+
+/** String literals naming the demo plant's parts (KR-nnnn) or furnaces (F1–F3). */
+function demoNames(path: string, text?: string): string[] {
+  const source = parseSource(path, text);
+  const found: string[] = [];
+  const visit = (node: ts.Node) => {
+    if (ts.isStringLiteralLike(node)) {
+      for (const m of node.text.matchAll(/\bKR-\d{4}\b|^F[1-3]$/gu)) found.push(`${path}: ${m[0]}`);
+    }
+    ts.forEachChild(node, visit);
+  };
+  visit(source);
+  return found;
+}
+
 const files = (dir: string) => sourceFiles(dir).map(repoPath);
 const physics = files('src/physics');
 const jobs = files('src/jobs');
@@ -102,6 +144,32 @@ describe('architecture: the direction of dependencies', () => {
       'src/physics/x.ts:1 imports idb',
     ]);
     expect(
+      deepPhysicsImports(
+        sample(
+          'src/app/x/y.ts',
+          "import { a } from '../../physics'; import { b } from '../../physics/index'; import type { C } from '../../physics/cycle/recipe'; const d = await import('../../physics/planner/planner');",
+        ),
+      ),
+    ).toEqual([
+      'src/app/x/y.ts:1 imports ../../physics/cycle/recipe',
+      'src/app/x/y.ts:1 imports ../../physics/planner/planner',
+    ]);
+    expect(deepPhysicsImports(sample('src/physics/cycle/x.ts', "import { a } from '../units';"))).toEqual([]);
+    expect(
+      uiImportProblems(
+        sample(
+          'src/app/ui/x.tsx',
+          "import { a } from './format'; import { b } from '../../physics'; import type { C } from '../settings/state'; import { d } from '../depth/state'; import { e } from '../../i18n/useT';",
+        ),
+      ),
+    ).toEqual(['src/app/ui/x.tsx:1 imports ../settings/state', 'src/app/ui/x.tsx:1 imports ../depth/state']);
+    expect(
+      starExports(
+        'src/physics/index.ts',
+        "export { a, type B } from './a';\nexport * from './c';\nexport * as d from './d';",
+      ).map((line) => line.split(': ')[1]),
+    ).toEqual(["export * from './c';"]);
+    expect(
       browserGlobals(
         'src/physics/x.ts',
         'const a = window.innerWidth; const b = { document: 1 }; const c = x.localStorage; function f(navigator: string) { return indexedDB; }',
@@ -124,6 +192,37 @@ describe('architecture: the direction of dependencies', () => {
         d.target ? !['jobs', 'physics'].includes(layer(d.target)) : /^(preact|@preact\/|i18next)/u.test(d.specifier),
       );
     expect(wrong.map(describeDependency)).toEqual([]);
+  });
+
+  it('outside physics, physics is imported only through physics/index.ts, which names every export', () => {
+    const outside = files('src').filter((path) => layer(path) !== 'physics');
+    expect(outside.flatMap((path) => deepPhysicsImports(dependencies(path)))).toEqual([]);
+    expect(starExports('src/physics/index.ts')).toEqual([]);
+  });
+
+  it('app/ui imports nothing of the app outside app/ui (no settings, screens or features)', () => {
+    const ui = files('src/app/ui');
+    expect(ui.length).toBeGreaterThan(10);
+    expect(ui.flatMap((path) => uiImportProblems(dependencies(path)))).toEqual([]);
+  });
+
+  it('the demo log loads only through the explicit action: one import(), from the log files view', () => {
+    const intoDemo = files('src')
+      .flatMap((path) => dependencies(path))
+      .filter((d) => d.target === DEMO_LOG);
+    expect(intoDemo.map((d) => `${d.from} ${importKind(d)}`)).toEqual(['src/app/log/DemoData.tsx dynamic']);
+  });
+
+  it('no production source outside the demo log names a demo part number or furnace (text in code, not comments)', () => {
+    expect(demoNames('src/app/x.ts', "const picks = ['KR-2231', 'F2']; // KR-4410 in a comment is fine")).toEqual([
+      'src/app/x.ts: KR-2231',
+      'src/app/x.ts: F2',
+    ]);
+    expect(
+      files('src')
+        .filter((path) => path !== DEMO_LOG)
+        .flatMap((path) => demoNames(path)),
+    ).toEqual([]);
   });
 
   it('the CLI loads neither the app nor the job log (its whole static import graph)', () => {

@@ -35,7 +35,7 @@ export function parseSource(path: string, text = readFileSync(resolve(ROOT, path
 function isTypeOnlyImport(node: ts.ImportDeclaration): boolean {
   const clause = node.importClause;
   if (!clause) return false; // `import './x.css'` loads for its effect
-  if (clause.isTypeOnly) return true;
+  if (clause.phaseModifier === ts.SyntaxKind.TypeKeyword) return true;
   const named = clause.namedBindings;
   return (
     !clause.name &&

@@ -6,7 +6,7 @@ import i18next, { type i18n, type TFunction } from 'i18next';
 import de from '../../locales/de/translation.json';
 import en from '../../locales/en/translation.json';
 import es from '../../locales/es/translation.json';
-import type { InputError, Warning } from '../physics/result';
+import type { InputError, Warning } from '../physics';
 
 export const LANGUAGES = ['en', 'es', 'de'] as const;
 export type Language = (typeof LANGUAGES)[number];

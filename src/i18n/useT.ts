@@ -115,11 +115,15 @@ export function tFor(lng: Language): TFunction {
 
 /** Translate function of the current language; re-renders the caller when the language changes or a part arrives. */
 export function useT(): TFunction {
-  void loadedParts.value;
-  return tFor(language.value);
+  return currentTranslator.value.t;
 }
+
+/** A new value whenever the language changes or a part arrives, so reading it subscribes a component to both. */
+const currentTranslator = computed(() => ({ t: tFor(language.value), parts: loadedParts.value }));
 
 export function initialLanguage(stored: unknown): Language {
   if (isLanguage(stored)) return stored;
-  return typeof navigator === 'undefined' ? 'en' : preferredLanguage(navigator.languages ?? [navigator.language]);
+  return typeof navigator === 'undefined'
+    ? 'en'
+    : preferredLanguage(navigator.languages.length > 0 ? navigator.languages : [navigator.language]);
 }

@@ -6,13 +6,22 @@
  * k is relative to one diffusivity model: `model` re-runs every job with it (the app passes the
  * model it calculates with), otherwise each job keeps its own.
  */
-import { fitDiffusivityFactor, type CalibrationFit, type CalibrationSample } from '../physics/calibration';
-import { depthFigures, readCaseSpec } from '../physics/caseDepth';
-import { checkTemperatureC, checkTimeH } from '../physics/validate';
-import { readRecipe } from '../physics/cycle/readRecipe';
-import { runCycle } from '../physics/cycle/simulate';
-import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, scaledDiffusivity, type DiffusivityModelId } from '../physics/diffusivity';
-import type { Result } from '../physics/result';
+import {
+  type CalibrationFit,
+  type CalibrationSample,
+  DEFAULT_MODEL,
+  depthFigures,
+  DIFFUSIVITY_MODELS,
+  type DiffusivityModelId,
+  fitDiffusivityFactor,
+  readCaseSpec,
+  checkTemperatureC,
+  checkTimeH,
+  readRecipe,
+  type Result,
+  runCycle,
+  scaledDiffusivity,
+} from '../physics';
 import { physicsRequestOf } from './inputs';
 import { compareNewestFirst } from './query';
 import type { Job } from './schema';

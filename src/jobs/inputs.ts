@@ -4,11 +4,16 @@
  * Numbers are stored as finite numbers; the physics layer checked their ranges when it ran.
  */
 import * as v from 'valibot';
-import { MODEL_IDS } from '../physics/diffusivity';
-import { HARDNESS_UNITS } from '../physics/hardness';
-import type { Recipe } from '../physics/cycle/recipe';
-import { ALLOY_ELEMENT_MAX_PCT, MAX_CARBON_PCT } from '../physics/steel';
-import { DIFFUSIVITY_FACTOR_LIMITS, MAX_TEMPERATURE_TOLERANCE_C, MAX_TOTAL_CASE_MARGIN_PCT } from '../physics/validate';
+import {
+  ALLOY_ELEMENT_MAX_PCT,
+  DIFFUSIVITY_FACTOR_LIMITS,
+  MAX_CARBON_PCT,
+  MAX_TEMPERATURE_TOLERANCE_C,
+  MAX_TOTAL_CASE_MARGIN_PCT,
+  MODEL_IDS,
+  HARDNESS_UNITS,
+  type Recipe,
+} from '../physics';
 
 export const ModelIdSchema = v.picklist(MODEL_IDS);
 
@@ -113,9 +118,9 @@ export const JobInputsSchema = v.variant('kind', [
 export type JobInputs = v.InferOutput<typeof JobInputsSchema>;
 export type JobInputKind = JobInputs['kind'];
 export const JOB_INPUT_KINDS = ['depth', 'time', 'temperature', 'cycle'] as const satisfies readonly JobInputKind[];
-// Compile-time: the list names every kind of the union.
-const everyKindListed: Exclude<JobInputKind, (typeof JOB_INPUT_KINDS)[number]> extends never ? true : false = true;
-void everyKindListed;
+// Compile-time: the list names every kind of the union (a type error here otherwise).
+type Holds<T extends true> = T;
+type _EveryKindListed = Holds<Exclude<JobInputKind, (typeof JOB_INPUT_KINDS)[number]> extends never ? true : false>;
 
 /** A closed-form input without its `kind`: exactly the request the physics function takes. */
 export function physicsRequestOf(inputs: Exclude<JobInputs, { kind: 'cycle' }>): Record<string, unknown> {
@@ -125,5 +130,4 @@ export function physicsRequestOf(inputs: Exclude<JobInputs, { kind: 'cycle' }>):
 
 // Compile-time proof that the stored recipe and the physics contract are the same shape.
 type Same<A, B> = [A] extends [B] ? ([B] extends [A] ? true : false) : false;
-const recipeMatchesContract: Same<v.InferOutput<typeof RecipeSchema>, Recipe> = true;
-void recipeMatchesContract;
+type _RecipeMatchesContract = Holds<Same<v.InferOutput<typeof RecipeSchema>, Recipe>>;

@@ -17,12 +17,8 @@ export function tidyEntry(input: unknown): unknown {
 
 /** A copy of `base` with `changes` applied; a change to `undefined` removes the field. */
 export function applyChanges(base: Record<string, unknown>, changes: Record<string, unknown>): Record<string, unknown> {
-  const merged: Record<string, unknown> = { ...base };
-  for (const [key, value] of Object.entries(changes)) {
-    if (value === undefined) delete merged[key];
-    else merged[key] = value;
-  }
-  return merged;
+  const removed = new Set(Object.keys(changes).filter((key) => changes[key] === undefined));
+  return Object.fromEntries(Object.entries({ ...base, ...changes }).filter(([key]) => !removed.has(key)));
 }
 
 /** An update time later than both now and the previous one, so "newest wins" always holds. */

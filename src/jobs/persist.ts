@@ -10,7 +10,7 @@ export interface StorageManagerLike {
 }
 
 function storageManager(): StorageManagerLike | undefined {
-  return typeof navigator === 'undefined' ? undefined : (navigator.storage as StorageManagerLike | undefined);
+  return typeof navigator === 'undefined' ? undefined : navigator.storage;
 }
 
 /** Requests persistent storage; already persisted counts as granted. */

@@ -4,7 +4,7 @@
  * stored records are checked with it on read, and backup files on import.
  */
 import * as v from 'valibot';
-import { MAX_DEPTH_MM } from '../physics/validate';
+import { MAX_DEPTH_MM } from '../physics';
 import {
   CarbonPctSchema,
   CompositionSchema,

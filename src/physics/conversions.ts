@@ -5,7 +5,7 @@
 import { CONVERTIBLE_RANGE, HARDNESS_UNITS, hardnessIn, isHardnessUnit, type HardnessUnit } from './hardness';
 import { fail, ok, type Result } from './result';
 import { convert, quantityOf, UNITS } from './units';
-import { asFields, readNumber } from './validate';
+import { asFields, readNumber, shownValue } from './validate';
 
 export interface ConversionResult {
   quantity: string;
@@ -30,14 +30,15 @@ export function convertRequest(request: unknown): Result<ConversionResult> {
   if (!fields.ok) return fields;
   const value = readNumber(fields.value, 'value');
   if (!value.ok) return value;
-  const from = String(fields.value.from ?? '');
+  const from = shownValue(fields.value.from ?? '');
   const isHardness = isHardnessUnit(from);
   const quantity = isHardness ? 'hardness' : quantityOf(from);
   if (!quantity) return fail('unit.unknown', 'from', { unit: from });
   const allUnits: readonly string[] = isHardness ? HARDNESS_UNITS : UNITS[quantity as keyof typeof UNITS];
   const to = fields.value.to;
-  if (to !== undefined && !allUnits.includes(String(to))) return fail('unit.unknown', 'to', { unit: String(to) });
-  const targets = to === undefined ? allUnits : [String(to)];
+  if (to !== undefined && !allUnits.includes(shownValue(to)))
+    return fail('unit.unknown', 'to', { unit: shownValue(to) });
+  const targets = to === undefined ? allUnits : [shownValue(to)];
   const values: Record<string, number> = {};
   for (const unit of targets) {
     const out =

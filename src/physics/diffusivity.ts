@@ -108,7 +108,7 @@ export function modelSpread(): ModelSpread {
     { min: number; max: number }
   >;
   let maxRatio = 1;
-  for (let tempC = r.minTempC; tempC <= r.maxTempC; tempC += 5) {
+  for (let tempC: number = r.minTempC; tempC <= r.maxTempC; tempC += 5) {
     for (let k = 0; r.minCarbonPct + 0.05 * k <= r.maxCarbonPct + 1e-9; k++) {
       const tempK = celsiusToKelvin(tempC);
       const carbonPct = r.minCarbonPct + 0.05 * k;

@@ -3,7 +3,7 @@
  * "1:20", or parts with units in English, Spanish or German ("80 min", "80m", "1 h 20",
  * "1,5 h", "2 Std 10 Min", "1 hora 5 minutos"). Decimal comma or point throughout.
  */
-import { fail, ok, type Result } from './result';
+import { fail, type Result } from './result';
 import { convert, parseNumber, type TimeUnit } from './units';
 
 type Part = 'h' | 'min' | 's';

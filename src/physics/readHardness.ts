@@ -4,7 +4,7 @@
  */
 import { HARDNESS_SCALE_RANGE, HARDNESS_UNITS, isHardnessUnit, type Hardness, type HardnessUnit } from './hardness';
 import { fail, ok, type Result } from './result';
-import { asFields, readNumber, type Fields } from './validate';
+import { asFields, readNumber, shownValue, type Fields } from './validate';
 
 const otherUnit = (unit: HardnessUnit): HardnessUnit => (unit === 'HV' ? 'HRC' : 'HV');
 
@@ -29,7 +29,7 @@ export function readHardnessFields(fields: Fields, range = HARDNESS_SCALE_RANGE)
   if (!isHardnessUnit(unit)) {
     return unit === undefined || unit === null || unit === ''
       ? fail('field.missing', 'unit')
-      : fail('hardness.unknownUnit', 'unit', { unit: String(unit), known: HARDNESS_UNITS.join(', ') });
+      : fail('hardness.unknownUnit', 'unit', { unit: shownValue(unit), known: HARDNESS_UNITS.join(', ') });
   }
   const value = readNumber(fields, 'value');
   if (!value.ok) return value;

@@ -33,6 +33,19 @@ export function asFields(request: unknown): Result<Fields> {
     : fail('request.notObject');
 }
 
+/** Untrusted input as text for a message: text as typed, anything else as JSON, cut to 40 characters. */
+export function shownValue(raw: unknown): string {
+  const text =
+    typeof raw === 'string'
+      ? raw
+      : typeof raw === 'object'
+        ? JSON.stringify(raw)
+        : typeof raw === 'number' || typeof raw === 'boolean' || typeof raw === 'bigint'
+          ? String(raw)
+          : typeof raw; // undefined, a function or a symbol: none comes from JSON or a form
+  return text.length > 40 ? `${text.slice(0, 39)}…` : text;
+}
+
 /** A number given as a JSON number or as text (`"0,8"` accepted). */
 const isBlank = (raw: unknown) => raw === undefined || raw === null || (typeof raw === 'string' && raw.trim() === '');
 
@@ -118,7 +131,7 @@ export function readChecked(
 export function readModel(fields: Fields, field = 'model'): Result<DiffusivityModelId> {
   const raw = fields[field];
   if (raw === undefined || raw === null || raw === '') return ok(DEFAULT_MODEL);
-  return isModelId(raw) ? ok(raw) : fail('model.unknown', field, { model: String(raw) });
+  return isModelId(raw) ? ok(raw) : fail('model.unknown', field, { model: shownValue(raw) });
 }
 
 /** An optional composition object `{Si, Mn, Cr, Ni, Mo}` in wt%; missing elements count as 0. */

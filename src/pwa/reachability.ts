@@ -19,7 +19,7 @@ async function originAnswers(): Promise<boolean> {
 }
 
 async function check(): Promise<void> {
-  offline.value = navigator.onLine === false || !(await originAnswers());
+  offline.value = !navigator.onLine || !(await originAnswers());
 }
 
 export function watchReachability(): void {

@@ -19,7 +19,7 @@ describe('the register of approximate values, worded', () => {
       expect(rows.map((r) => r.id)).toEqual(APPROXIMATIONS.map((a) => a.id));
       for (const row of rows) {
         for (const text of [row.name, row.value, row.basis, row.effect]) {
-          expect(text.trim().length, `${row.id}`).toBeGreaterThan(0);
+          expect(text.trim().length, row.id).toBeGreaterThan(0);
           expect(text).not.toMatch(/app\.approximations|\{\{|NaN|undefined|–$/u);
         }
       }

@@ -19,9 +19,7 @@ import {
 } from '../../src/app/settings/calibration';
 import { makeShow } from '../../src/app/ui/show';
 import { createI18n } from '../../src/i18n/i18n';
-import { caseDepth, runCycle } from '../../src/physics';
-import { scaledDiffusivity } from '../../src/physics/diffusivity';
-import { DIFFUSIVITY_MODELS } from '../../src/physics/diffusivity';
+import { caseDepth, DIFFUSIVITY_MODELS, runCycle, scaledDiffusivity } from '../../src/physics';
 import type { Job } from '../../src/jobs/schema';
 import { pinionDraft } from '../jobs/helpers';
 
@@ -183,7 +181,7 @@ describe('the calibration view', () => {
       shift: 'A',
       shiftDate: '2025-01-01',
       lab: { ecdMm: ecd.value.effectiveCaseDepthMm },
-    } as Job;
+    };
   };
   const now = new Date('2025-03-06T08:00:00.000Z');
   const jobs = [job('F1', 4, 1.21), job('F1', 6, 1.21), job('F1', 8, 1.21), job('F2', 6, 0.9)];

@@ -1,6 +1,7 @@
 /** The cycle editor's list operations, its recipe reading, and the solver behind the adapter. */
 import { describe, expect, it } from 'vitest';
-import { simulateCycle } from '../../src/physics/cycle/simulate';
+import { readFileSync } from 'node:fs';
+import { simulateCycle, type Recipe } from '../../src/physics';
 import { buildRecipe, computeCycle } from '../../src/app/cycle/results';
 import { simulate } from '../../src/app/cycle/simulate';
 import {
@@ -13,7 +14,6 @@ import {
   updateStep,
 } from '../../src/app/cycle/state';
 import { field } from '../../src/app/ui/fieldText';
-import { caseDepth } from '../../src/physics';
 
 const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: 0.05, betaMPerS: 1.5e-7 };
 
@@ -65,11 +65,37 @@ describe('recipe from the form', () => {
 });
 
 describe('the cycle screen runs the cycle solver', () => {
-  it('the recipe read from the form gives the same result as the solver called directly', () => {
-    const out = computeCycle(DEFAULT_CYCLE_FORM, settings);
-    const direct = simulateCycle(out.result!.recipe);
+  it('a cycle typed in shop units (min, °F) gives the answer the solver gives the same cycle written in SI', () => {
+    // The demo pinion's boost/diffuse file, written independently of the form reader.
+    const file = JSON.parse(readFileSync('public/examples/pinion-kr2231-cycle.json', 'utf8')) as Recipe;
+    let form = removeStep(DEFAULT_CYCLE_FORM, 2);
+    // 240 min = 4 h; 1697 °F = 925 °C exactly (°F = 1.8·°C + 32).
+    form = updateStep(form, 0, {
+      duration: field('240', 'min'),
+      startTemp: field('1697', 'F'),
+      endTemp: field('1697', 'F'),
+    });
+    form = updateStep(form, 2, { startTemp: field('850', 'C'), endTemp: field('850', 'C') });
+    const out = computeCycle(form, settings);
+    const recipe = out.result!.recipe;
+    expect(recipe.steps).toHaveLength(file.steps.length);
+    recipe.steps.forEach((step, i) => {
+      const written = file.steps[i]!;
+      expect(step.durationH).toBeCloseTo(written.durationH, 12);
+      expect(step.startTempC).toBeCloseTo(written.startTempC, 9);
+      expect(step.endTempC).toBeCloseTo(written.endTempC, 9);
+      expect(step.carbonPotentialPct).toBe(written.carbonPotentialPct);
+      expect(step.betaMPerS).toBe(written.betaMPerS);
+    });
+    expect(recipe.steel.coreCarbonPct).toBe(file.steel.coreCarbonPct);
+    expect(recipe.steel.composition).toEqual(file.steel.composition);
+    const direct = simulateCycle(file);
     if (!direct.ok) throw new Error(direct.error.code);
-    expect(out.result!.simulation).toEqual(direct.value);
+    expect(out.result!.simulation.effectiveCaseDepthMm).toBeCloseTo(direct.value.effectiveCaseDepthMm, 9);
+    expect(out.result!.simulation.surfaceCarbonPct).toBeCloseTo(direct.value.surfaceCarbonPct, 9);
+    // And the form's own default (a ramp to 845 °C instead) is a different cycle: the check can tell them apart.
+    const defaultDepth = computeCycle(DEFAULT_CYCLE_FORM, settings).result!.simulation.effectiveCaseDepthMm;
+    expect(Math.abs(defaultDepth - direct.value.effectiveCaseDepthMm)).toBeGreaterThan(0.005);
   });
   it('gives finite numbers and step-tagged cautions for the default boost/diffuse cycle', () => {
     const out = computeCycle(DEFAULT_CYCLE_FORM, settings);

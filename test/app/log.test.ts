@@ -25,12 +25,12 @@ import { recoveryNote } from '../../src/app/recovery/logNote';
 import { computeRecovery } from '../../src/app/recovery/results';
 import { DEFAULT_RECOVERY_FORM } from '../../src/app/recovery/state';
 import { hrefFor, screenFromHash, subPathFromHash } from '../../src/app/shell/route';
-import { CUSTOM_STEEL } from '../../src/app/ui/steel';
+import { CUSTOM_STEEL } from '../../src/app/fields/steel';
 import { field } from '../../src/app/ui/fieldText';
 import { makeShow } from '../../src/app/ui/show';
 import { APP_VERSION } from '../../src/app/version';
 import { createI18n } from '../../src/i18n/i18n';
-import { JobDraftSchema, JobSchema, OPEN_STATUSES, type Job } from '../../src/jobs';
+import { JobDraftSchema, JobSchema, OPEN_STATUSES } from '../../src/jobs';
 import { TOTAL_CASE_MARGIN_PCT } from '../../src/physics';
 import * as v from 'valibot';
 import { readFileSync } from 'node:fs';
@@ -58,7 +58,7 @@ describe('what the calculators hand to the log', () => {
     (mode) => {
       const { entry, result } = depthEntry({ solveFor: mode });
       const draft = v.safeParse(JobDraftSchema, draftOf(typed, entry));
-      expect(draft.success, JSON.stringify(!draft.success && draft.issues[0]?.path)).toBe(true);
+      expect(draft.success, JSON.stringify(!draft.success && draft.issues[0].path)).toBe(true);
       expect(entry.inputs.kind).toBe(mode);
       expect(entry.prediction.effectiveCaseDepthMm).toBe(result.figures.effectiveCaseDepthMm);
       expect(entry.prediction.ecdBandMm).toEqual({
@@ -163,7 +163,7 @@ describe('job and lab forms', () => {
     updatedAt: '2025-03-05T14:30:00.000Z',
     shift: 'B',
     shiftDate: '2025-03-05',
-  }) as Job;
+  });
 
   it('an edit sends only the fields that changed', () => {
     expect(changesOf(job, { ...typed, gradeName: 'SAE 8620', notes: 'Door opened at 3 h.' })).toEqual({

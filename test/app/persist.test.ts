@@ -1,6 +1,8 @@
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_CYCLE_FORM } from '../../src/app/cycle/state';
 import { mergeDefaults } from '../../src/app/ui/persist';
+import { sourceFiles } from '../sourceFiles';
 
 describe('stored UI state is validated against the defaults', () => {
   const defaults = { a: 1, b: { text: '925', unit: 'C' }, list: [{ x: 'a' }], flag: false };
@@ -23,5 +25,18 @@ describe('stored UI state is validated against the defaults', () => {
   it('garbage in storage gives the defaults', () => {
     for (const junk of [undefined, null, 42, 'text', []])
       expect(mergeDefaults(DEFAULT_CYCLE_FORM, junk)).toEqual(DEFAULT_CYCLE_FORM);
+  });
+});
+
+describe('the stored keys are listed in the contributor guide', () => {
+  it('every persisted(key) in the app is in DEVELOPERS.md, and the guide lists no key the app no longer has', () => {
+    const keys = sourceFiles('src')
+      .flatMap((file) => [...readFileSync(file, 'utf8').matchAll(/\bpersisted(?:<[^>]+>)?\(\s*'([^']+)'/gu)])
+      .map((m) => `casefront.${m[1]!}`)
+      .sort();
+    expect(keys.length).toBeGreaterThan(8);
+    const guide = readFileSync('DEVELOPERS.md', 'utf8');
+    const listed = [...new Set([...guide.matchAll(/`(casefront\.[\w.]+)`/gu)].map((m) => m[1]!))].sort();
+    expect(listed).toEqual(keys);
   });
 });

@@ -83,10 +83,20 @@ describe('warnings in the user’s units', () => {
 describe('timing a computation', () => {
   it('returns the result and records one User Timing measure, keeping the buffer short', () => {
     performance.clearMeasures('casefront:test');
-    expect(timed('test', () => 42)).toBe(42);
+    const work = { start: 0, end: 0 };
+    const answer = timed('test', () => {
+      work.start = performance.now();
+      while (performance.now() - work.start < 3); // a computation of at least 3 ms
+      work.end = performance.now();
+      return 42;
+    });
+    expect(answer).toBe(42);
     const entries = performance.getEntriesByName('casefront:test');
     expect(entries).toHaveLength(1);
-    expect(entries[0]!.duration).toBeGreaterThanOrEqual(0);
+    // The measure spans the whole computation: it starts before it and ends after it.
+    expect(entries[0]!.startTime).toBeLessThanOrEqual(work.start);
+    expect(entries[0]!.startTime + entries[0]!.duration).toBeGreaterThanOrEqual(work.end);
+    expect(entries[0]!.duration).toBeGreaterThanOrEqual(work.end - work.start);
     for (let i = 0; i < 120; i++) timed('test', () => i);
     expect(performance.getEntriesByName('casefront:test').length).toBeLessThanOrEqual(50);
   });

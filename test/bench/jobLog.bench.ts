@@ -5,7 +5,7 @@
  */
 import 'fake-indexeddb/auto';
 import { performance } from 'node:perf_hooks';
-import { demoJobs } from '../../src/jobs/demo';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import { openJobStore } from '../../src/jobs/store';
 import { exportBackup, exportCsv } from '../../src/jobs/transfer';
 import { medianMs } from './timing';

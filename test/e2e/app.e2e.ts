@@ -8,23 +8,22 @@ import { caseDepth } from '../../src/physics';
 import { runAxe } from './axe';
 import {
   BASE_URL,
+  closeBrowser,
   cspViolations,
   foreignRequests,
   launch,
   openScreen,
   phoneContext,
+  type Recorder,
   SCREENS,
   smallTargets,
-  type Recorder,
 } from './browser';
 
 let browser: Browser;
 before(async () => {
   browser = await launch();
 });
-after(async () => {
-  await browser?.close();
-});
+after(() => closeBrowser(browser));
 
 async function freshPage(locale = 'en-US'): Promise<{ page: Page; recorder: Recorder; close: () => Promise<void> }> {
   const { context, recorder } = await phoneContext(browser, locale);
@@ -227,7 +226,7 @@ describe('content security policy and origin', () => {
   it('the CSP allows only self: no inline script, no violation reported, no request leaves the origin', async () => {
     const html = readFileSync('dist/index.html', 'utf8');
     // The page source is formatted by prettier, so the attributes may sit on separate lines.
-    const csp = /http-equiv="Content-Security-Policy"\s+content="([^"]+)"/.exec(html)?.[1] ?? '';
+    const csp = /http-equiv="Content-Security-Policy"\s+content="([^"]+)"/u.exec(html)?.[1] ?? '';
     assert.match(csp, /default-src 'self'/);
     assert.match(csp, /script-src 'self'(;|$)/);
     assert.match(csp, /style-src 'self'(;|$)/);

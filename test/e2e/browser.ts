@@ -4,6 +4,7 @@
  */
 import { existsSync } from 'node:fs';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { SCREEN_IDS } from '../../src/app/shell/screens';
 
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
@@ -68,8 +69,13 @@ function watchPage(page: Page, recorder: Recorder): void {
   page.on('pageerror', (error) => recorder.problems.push(`page error: ${error.message}`));
 }
 
+/** Closes the shared browser; `undefined` when launching it failed, so the failure itself is what is reported. */
+export async function closeBrowser(browser: Browser | undefined): Promise<void> {
+  await browser?.close();
+}
+
 export async function cspViolations(page: Page): Promise<string[]> {
-  return page.evaluate(() => (window as unknown as { __cspViolations: string[] }).__cspViolations ?? []);
+  return page.evaluate(() => (window as unknown as { __cspViolations?: string[] }).__cspViolations ?? []);
 }
 
 /** Opens a screen by its route and waits for its heading. */
@@ -86,7 +92,8 @@ export function foreignRequests(recorder: Recorder): string[] {
   );
 }
 
-export const SCREENS = ['depth', 'cycle', 'plan', 'recovery', 'log', 'convert', 'settings', 'safety'] as const;
+/** Every screen's id, from the app's own screens table. */
+export const SCREENS = SCREEN_IDS;
 
 /** Waits until the service worker has cached the app (the header says "ready offline"). */
 export async function waitUntilOfflineReady(page: Page): Promise<void> {

@@ -11,6 +11,7 @@ import { shiftOf } from '../../src/jobs/shift';
 import { runAxe } from './axe';
 import {
   BASE_URL,
+  closeBrowser,
   cspViolations,
   foreignRequests,
   launch,
@@ -27,17 +28,15 @@ let browser: Browser;
 before(async () => {
   browser = await launch();
 });
-after(async () => {
-  await browser?.close();
-});
+after(() => closeBrowser(browser));
 
 /** Fills the "save to log" form of the screen shown and saves; returns the new job's id. */
 async function saveToLog(page: Page, workOrder: string, furnace = 'F1', operator = 'mk'): Promise<string> {
   await page.click('#log-save button');
   await page.waitForSelector('#log-save-title');
   await page.fill('#log-save-work-order', workOrder);
-  await page.click('.quick-pick >> text=KR-2231');
-  await page.click(`.quick-pick >> text=${furnace}`);
+  await page.fill('#log-save-part', 'KR-2231');
+  await page.fill('#log-save-furnace', furnace);
   await page.fill('#log-save-operator', operator);
   await page.fill('#log-save-notes', 'Coupon in basket 3.');
   await page.click('form.log-form button[type=submit]');
@@ -70,7 +69,9 @@ describe('job log', () => {
 
     await page.click('button:has-text("Edit")');
     await page.fill('#job-edit-notes', 'Coupon in basket 3.\nLoad 20 min late.');
-    await page.click('.field:has(#job-edit-furnace) .quick-pick >> text=F2');
+    // The quick picks offer what this device's log holds: the furnace just logged.
+    await page.waitForSelector('.field:has(#job-edit-furnace) .quick-pick:has-text("F1")');
+    await page.fill('#job-edit-furnace', 'F2');
     await page.click('button:has-text("Save changes")');
     await page.waitForSelector('.log-saved:has-text("Changes saved.")');
     await page.locator('label.segment', { hasText: 'In furnace' }).click();
@@ -142,9 +143,52 @@ describe('job log', () => {
     );
     assert.deepEqual(foreignRequests(recorder), []);
     assert.deepEqual(
-      recorder.problems.filter((p) => !/ERR_INTERNET_DISCONNECTED/.test(p)),
+      recorder.problems.filter((p) => !p.includes('ERR_INTERNET_DISCONNECTED')),
       [],
     );
+    await context.close();
+  });
+
+  it('a fresh install offers no demo part or furnace; demo data comes only from the files view, confirmed', async () => {
+    const { context, recorder } = await phoneContext(browser);
+    const page = await context.newPage();
+    const demoNames = /\bKR-\d{4}\b|\bF[1-3]\b/u;
+    await openScreen(page, 'depth');
+    await page.click('#log-save button');
+    await page.waitForSelector('#log-save-title');
+    assert.equal(await page.locator('.quick-pick').count(), 0, 'an empty log has no quick picks');
+    assert.doesNotMatch(await mainText(page), demoNames);
+    await page.fill('#log-save-work-order', 'WO-OWN-1');
+    await page.fill('#log-save-part', 'P-100');
+    await page.fill('#log-save-furnace', 'Pit 2');
+    await page.fill('#log-save-operator', 'MK');
+    await page.click('form.log-form button[type=submit]');
+    await page.locator('.log-saved a').waitFor();
+    for (const view of ['log', 'log/summary', 'log/calibration', 'log/files']) {
+      await page.goto(`${BASE_URL}#/${view}`);
+      await page.waitForFunction(() => !document.querySelector('.screen-loading') && document.querySelector('main h1'));
+      await page.waitForTimeout(200); // the view's read of the log
+      assert.doesNotMatch(await mainText(page), demoNames, `#/${view} names nothing of the demo plant`);
+    }
+    assert.equal(await page.locator('#log-furnace option', { hasText: /^F[1-3]$/u }).count(), 0);
+
+    // The one way in: load, confirm (cancel first changes nothing).
+    await page.click('button:has-text("Load demo data")');
+    await page.click('section:has(#files-demo) button:has-text("Cancel")');
+    assert.equal((await storedRecords(page)).length, 1);
+    await page.click('button:has-text("Load demo data")');
+    await page.click('button:has-text("Yes, add the demo jobs")');
+    await page.waitForSelector('section:has(#files-demo) .log-saved:has-text("200 demo jobs are in the log.")');
+    assert.equal((await storedRecords(page)).length, 201);
+
+    // Quick picks come from this device's log, now demo jobs included.
+    await openScreen(page, 'depth');
+    await page.click('#log-save button');
+    await page.waitForSelector('#log-save-title');
+    await page.waitForSelector('.field:has(#log-save-furnace) .quick-pick:has-text("Pit 2")');
+    assert.ok(await page.locator('.field:has(#log-save-part) .quick-pick', { hasText: /^KR-\d{4}$/u }).count());
+    assert.deepEqual(foreignRequests(recorder), []);
+    assert.deepEqual(recorder.problems, []);
     await context.close();
   });
 
@@ -194,9 +238,9 @@ describe('job log', () => {
     ]);
     await tab1.waitForSelector('.log-saved');
     await tab2.waitForSelector('.log-saved');
-    const [edited] = (await storedRecords(tab1)).filter((r) => r.id === id);
+    const edited = (await storedRecords(tab1)).find((r) => r.id === id);
     assert.equal(edited?.status, 'done');
-    assert.equal((edited?.lab as { ecdMm: number }).ecdMm, 1.31);
+    assert.equal((edited.lab as { ecdMm: number }).ecdMm, 1.31);
     assert.deepEqual(recorder.problems, []);
     await context.close();
   });
@@ -217,16 +261,16 @@ describe('job log', () => {
       page.click('button:has-text("Download backup (JSON)")'),
     ]);
     assert.match(backup.suggestedFilename(), /^casefront-job-log-\d{4}-\d{2}-\d{2}\.json$/u);
-    const backupJson = readFileSync((await backup.path())!, 'utf8');
+    const backupJson = readFileSync(await backup.path(), 'utf8');
     assert.equal((JSON.parse(backupJson) as { jobs: unknown[] }).jobs.length, 40);
     const [csv] = await Promise.all([
       page.waitForEvent('download'),
       page.click('button:has-text("Download for spreadsheets (CSV)")'),
     ]);
-    const csvText = readFileSync((await csv.path())!, 'utf8');
+    const csvText = readFileSync(await csv.path(), 'utf8');
     assert.ok(csvText.startsWith('\uFEFFid,created_at,updated_at,shift_date,shift,operator,furnace'));
     assert.equal(csvText.trim().split('\r\n').length, 41);
-    assert.match((await mainText(page)) ?? '', /40 jobs written to casefront-job-log-[\d-]+\.csv\./u);
+    assert.match(await mainText(page), /40 jobs written to casefront-job-log-[\d-]+\.csv\./u);
 
     await wipeLog(page);
     await page.reload();
@@ -334,7 +378,7 @@ describe('job log', () => {
     // Nothing ran and nothing was fetched (an <img src=x> made from the note would request /x).
     const later = recorder.requests.slice(requestsBefore);
     assert.deepEqual(
-      later.filter((u) => /\/x$/u.test(u) || !u.startsWith(new URL(BASE_URL).origin)),
+      later.filter((u) => u.endsWith('/x') || !u.startsWith(new URL(BASE_URL).origin)),
       [],
     );
     assert.deepEqual(dialogs, []);

@@ -5,7 +5,7 @@
  */
 import type { Page } from 'playwright-core';
 import { backupToJson, createBackup } from '../../src/jobs/backup';
-import { demoJobs } from '../../src/jobs/demo';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import type { Job } from '../../src/jobs/schema';
 import { DEFAULT_SHIFT_CONFIG, shiftOf } from '../../src/jobs/shift';
 
@@ -67,7 +67,7 @@ export function storedRecords(page: Page): Promise<Record<string, unknown>[]> {
           absent = true;
           open.transaction?.abort();
         };
-        open.onerror = () => (absent ? resolve([]) : reject(open.error));
+        open.onerror = () => (absent ? resolve([]) : reject(open.error ?? new Error('the log did not open')));
         open.onsuccess = () => {
           const db = open.result;
           if (!db.objectStoreNames.contains('jobs')) {
@@ -80,7 +80,7 @@ export function storedRecords(page: Page): Promise<Record<string, unknown>[]> {
             db.close();
             resolve((all.result as Record<string, unknown>[]).sort((a, b) => (String(a.id) < String(b.id) ? -1 : 1)));
           };
-          all.onerror = () => reject(all.error);
+          all.onerror = () => reject(all.error ?? new Error('the log could not be read'));
         };
       }),
     DB_NAME,
@@ -94,7 +94,7 @@ export function wipeLog(page: Page): Promise<void> {
       new Promise<void>((resolve, reject) => {
         const request = indexedDB.deleteDatabase(name);
         request.onsuccess = () => resolve();
-        request.onerror = () => reject(request.error);
+        request.onerror = () => reject(request.error ?? new Error('the log could not be deleted'));
       }),
     DB_NAME,
   );

@@ -12,16 +12,23 @@ import type { Job } from '../../src/jobs/schema';
 import { DEFAULT_SHIFT_CONFIG, shiftOf } from '../../src/jobs/shift';
 import { caseDepth } from '../../src/physics';
 import { runAxe } from './axe';
-import { BASE_URL, cspViolations, foreignRequests, launch, openScreen, phoneContext, smallTargets } from './browser';
+import {
+  BASE_URL,
+  closeBrowser,
+  cspViolations,
+  foreignRequests,
+  launch,
+  openScreen,
+  phoneContext,
+  smallTargets,
+} from './browser';
 import { backupText, importFile } from './logData';
 
 let browser: Browser;
 before(async () => {
   browser = await launch();
 });
-after(async () => {
-  await browser?.close();
-});
+after(() => closeBrowser(browser));
 
 const median = (values: number[]) => {
   const sorted = [...values].sort((a, b) => a - b);
@@ -47,6 +54,9 @@ async function expectNoAxeProblems(page: Page, what: string): Promise<string> {
   return `${what}: ${violations.length}`;
 }
 
+/** The plan is worked out in the worker: waits until the answer shown is the one for what was typed. */
+const answered = (page: Page) => page.waitForFunction(() => !document.querySelector('[data-updating]'));
+
 describe('planning a two-step cycle', () => {
   it('plans the demo pinion as you type, shows what binds when out of reach, and opens the plan in the cycle editor', async () => {
     const { context, recorder } = await phoneContext(browser);
@@ -55,13 +65,14 @@ describe('planning a two-step cycle', () => {
     await page.click('.view-tabs a[href="#/plan"]');
     await page.waitForSelector('#plan-ecd-min');
     assert.equal(await page.getAttribute('.bottom-nav a[href="#/cycle"]', 'aria-current'), 'page');
+    await answered(page);
     // The CLI's demo pinion plan (README): boost 3.868 h, diffuse 1.073 h, 0.5 h hardening, 5.441 h in all.
     assert.equal(await answer(page).textContent(), '5\u202fh 26\u202fmin');
     assert.equal(await rowValue(page, 'status'), 'Both met');
     assert.equal(await rowValue(page, 'boost'), '3.87\u202fh');
     assert.equal(await rowValue(page, 'ecd'), '0.88\u202fmm');
 
-    // Each change plans again; the measures are the plans the page ran, one per change.
+    // Each change plans again in the worker; the measures are the plans it computed (compute time there).
     for (const max of ['0.95', '0,9', '0.92', '0.98', '1']) await page.fill('#plan-ecd-max', max);
     await page.fill('#plan-surface-min', '0.85');
     await page.fill('#plan-surface-max', '0.95');
@@ -73,7 +84,8 @@ describe('planning a two-step cycle', () => {
     assert.equal(await page.textContent('.plan-suggestions li'), 'Raise the diffuse potential to about 0.88 %.');
     assert.equal(await page.isDisabled('#log-save button'), true);
     const planMs = await measures(page, 'plan');
-    assert.ok(planMs.length >= 8, `one plan per change (${planMs.length})`);
+    // At most one plan per change: a change typed while one is worked out replaces the one waiting.
+    assert.ok(planMs.length >= 2 && planMs.length <= 8, `plans as you type (${planMs.length} for 8 changes)`);
     console.log(
       `plan in Chromium: median ${median(planMs).toFixed(1)} ms, first ${planMs[0]!.toFixed(1)} ms, max ${Math.max(...planMs).toFixed(1)} ms over ${planMs.length} plans`,
     );
@@ -81,6 +93,7 @@ describe('planning a two-step cycle', () => {
     await page.fill('#plan-surface-min', '0.75');
     await page.fill('#plan-surface-max', '0.9');
     await page.waitForSelector('.plan-findings', { state: 'detached' });
+    await answered(page);
     const predictedEcd = await rowValue(page, 'ecd');
     await page.click('.plan-actions button');
     await page.waitForSelector('li.step');

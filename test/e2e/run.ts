@@ -48,6 +48,9 @@ async function waitForServer(url: string, timeoutMs: number): Promise<void> {
   throw new Error(`preview server did not answer at ${url}`);
 }
 
+/** `--perf`: the throttled responsiveness measurements (`*.perf.ts`) instead of the browser tests. */
+const SUFFIX = process.argv.includes('--perf') ? '.perf.ts' : '.e2e.ts';
+
 const vite = join('node_modules', 'vite', 'bin', 'vite.js');
 if (!existsSync(join('dist', 'index.html'))) {
   console.log('e2e: no build found, running vite build');
@@ -64,12 +67,12 @@ const server: ChildProcess = spawn(
     stdio: ['ignore', 'ignore', 'inherit'],
   },
 );
-let exitCode = 1;
+let exitCode: number;
 const started = Date.now();
 try {
   await waitForServer(url, 20_000);
   const files = readdirSync(join('test', 'e2e'))
-    .filter((f) => f.endsWith('.e2e.ts'))
+    .filter((f) => f.endsWith(SUFFIX))
     .sort()
     .map((f) => join('test', 'e2e', f));
   const run = spawnSync(

@@ -3,15 +3,13 @@ import assert from 'node:assert/strict';
 import { mkdirSync } from 'node:fs';
 import { after, before, describe, it } from 'node:test';
 import type { Browser } from 'playwright-core';
-import { launch, openScreen, phoneContext, SCREENS } from './browser';
+import { closeBrowser, launch, openScreen, phoneContext, SCREENS } from './browser';
 
 let browser: Browser;
 before(async () => {
   browser = await launch();
 });
-after(async () => {
-  await browser?.close();
-});
+after(() => closeBrowser(browser));
 
 describe('screenshots', () => {
   for (const [language, locale] of [

@@ -41,8 +41,8 @@ function expectSplit(messages: Messages, keys: readonly string[]) {
 
 describe('splitting a locale file in two parts', () => {
   it.each(LANGUAGES)('%s: the parts are disjoint and together are the whole file', (lng) => {
-    expectSplit(RESOURCES[lng] as Messages, FIRST_SCREEN_KEYS);
-    const first = leafKeys(pickLocalePart(RESOURCES[lng] as Messages, 'first'));
+    expectSplit(RESOURCES[lng], FIRST_SCREEN_KEYS);
+    const first = leafKeys(pickLocalePart(RESOURCES[lng], 'first'));
     expect(first.length).toBeGreaterThan(100);
     expect(first.length).toBeLessThan(leafKeys(RESOURCES[lng]).length / 2 + 100);
   });
@@ -69,11 +69,11 @@ describe('splitting a locale file in two parts', () => {
 
   it('the build plugin serves each part of a locale as a module', async () => {
     const plugin = localeChunks();
-    const call = <T>(hook: unknown, ...args: unknown[]) =>
-      (hook as (this: unknown, ...a: unknown[]) => T).call({ addWatchFile: () => {} }, ...args);
-    const id = call<string>(plugin.resolveId, 'virtual:casefront-locale/es/first');
+    const call = (hook: unknown, ...args: unknown[]): unknown =>
+      (hook as (this: unknown, ...a: unknown[]) => unknown).call({ addWatchFile: () => {} }, ...args);
+    const id = call(plugin.resolveId, 'virtual:casefront-locale/es/first') as string;
     expect(typeof id).toBe('string');
-    const loaded = call<{ code: string }>(plugin.load, id);
+    const loaded = call(plugin.load, id) as { code: string };
     const text = loaded.code.replace(/^export default /u, '').replace(/;\s*$/u, '');
     expect(JSON.parse(text)).toEqual(pickLocalePart(RESOURCES.es as Messages, 'first'));
     expect(call(plugin.resolveId, './other')).toBeNull();
@@ -126,7 +126,7 @@ describe('the first part holds what the first screen asks for', () => {
   it.each(LANGUAGES)(
     '%s: every key (and every key a template can build) asked for there is in the first part',
     (lng) => {
-      const first = new Set(leafKeys(pickLocalePart(RESOURCES[lng] as Messages, 'first')));
+      const first = new Set(leafKeys(pickLocalePart(RESOURCES[lng], 'first')));
       const problems = uses.flatMap((use) => {
         const messages = messagesOf(use, english);
         if (messages.length === 0) return [`${use.where}: ${use.key} names no message`];
@@ -151,7 +151,7 @@ describe('the first part holds what the first screen asks for', () => {
   });
 
   it.each(LANGUAGES)('%s: a first-part message nests no message of the rest ($t)', (lng) => {
-    const first = pickLocalePart(RESOURCES[lng] as Messages, 'first');
+    const first = pickLocalePart(RESOURCES[lng], 'first');
     const firstKeys = new Set(leafKeys(first));
     const nested = entries(first).flatMap(([key, text]) =>
       [...String(text).matchAll(/\$t\(([\w.]+)/gu)].map((m) => [key, m[1]!] as const),

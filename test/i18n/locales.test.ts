@@ -5,10 +5,10 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { LANGUAGES, RESOURCES } from '../../src/i18n/i18n';
-import { ERROR_CODES, WARNING_CODES } from '../../src/physics/result';
-import { CASE_CRITERION_IDS } from '../../src/physics/hardness';
+import { CASE_CRITERION_IDS, ERROR_CODES, WARNING_CODES } from '../../src/physics';
 import { UNIT_WARNINGS } from '../../src/app/ui/warningText';
 import { sourceFiles } from '../sourceFiles';
+import { HEADER_SCREEN, NAV_SCREENS } from '../../src/app/shell/screens';
 
 function leafKeys(node: unknown, prefix = ''): string[] {
   if (typeof node !== 'object' || node === null) return [prefix];
@@ -70,7 +70,7 @@ describe('locales', () => {
   it('every key built from a template in the app resolves for each value the code passes', () => {
     // The templates used in the app and the values they take (from the code's own lists).
     const templates: [string, readonly string[]][] = [
-      ['app.nav.', ['depth', 'cycle', 'recovery', 'log', 'convert', 'settings', 'safety']],
+      ['app.nav.', [...NAV_SCREENS.map((screen) => screen.id), HEADER_SCREEN.id]],
       ['app.log.tabs.', ['list', 'summary', 'files']],
       ['app.cycleTabs.', ['cycle', 'plan']],
       ['app.plan.steps.', ['boost', 'diffuse', 'hardening']],

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createI18n, LANGUAGES } from '../../src/i18n/i18n';
 import { backupToJson, createBackup, parseBackup } from '../../src/jobs/backup';
-import { demoJobs } from '../../src/jobs/demo';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import { describeJobsError } from '../../src/jobs/result';
 import type { Job } from '../../src/jobs/schema';
 import { exportBackup, exportFileName, importBackup } from '../../src/jobs/transfer';

@@ -8,12 +8,16 @@ import { describe, expect, it } from 'vitest';
 import { calibrateFurnace, calibrationSamples, furnacesWithLabDepth } from '../../src/jobs/calibration';
 import type { JobInputs } from '../../src/jobs/inputs';
 import type { Job } from '../../src/jobs/schema';
-import { caseDepth, timeForCaseDepth } from '../../src/physics/caseDepth';
-import { scaledDiffusivity } from '../../src/physics/diffusivity';
-import type { Recipe } from '../../src/physics/cycle/recipe';
-import { runCycle } from '../../src/physics/cycle/simulate';
-import { DIFFUSIVITY_MODELS, type DiffusivityModelId } from '../../src/physics/diffusivity';
-import { mulberry32 } from '../../src/physics/random';
+import {
+  caseDepth,
+  DIFFUSIVITY_MODELS,
+  type DiffusivityModelId,
+  mulberry32,
+  type Recipe,
+  runCycle,
+  scaledDiffusivity,
+  timeForCaseDepth,
+} from '../../src/physics';
 import { pinionDraft } from './helpers';
 
 const SAE_8620 = { Si: 0.25, Mn: 0.8, Cr: 0.5, Ni: 0.55, Mo: 0.2 };
@@ -40,7 +44,7 @@ function job(
     status: 'done',
     prediction: { ...draft.prediction!, ...predictionExtra },
     ...(labEcdMm === undefined ? {} : { lab: { ecdMm: labEcdMm } }),
-  } as Job;
+  };
 }
 
 const depthInputs = (temperatureC: number, timeH: number, extra: Partial<JobInputs> = {}): JobInputs =>

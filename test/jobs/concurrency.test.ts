@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { backupToJson, createBackup } from '../../src/jobs/backup';
-import { demoJobs } from '../../src/jobs/demo';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import { importBackup } from '../../src/jobs/transfer';
 import { freshStore, pinionDraft, uniqueDbName, unwrap } from './helpers';
 
@@ -56,7 +56,7 @@ describe('two tabs saving at the same time', () => {
       importBackup(tab1, file),
       ...Array.from({ length: 30 }, (_, i) => tab2.add(pinionDraft({ workOrder: `LIVE-${i}` }))),
     ]);
-    expect(unwrap(report!)).toEqual({ added: 300, updated: 0, unchanged: 0, skippedOlder: 0 });
+    expect(unwrap(report)).toEqual({ added: 300, updated: 0, unchanged: 0, skippedOlder: 0 });
     expect(adds.every((r) => r.ok)).toBe(true);
     expect(unwrap(await tab2.count())).toBe(330);
     tab1.close();

@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { CSV_COLUMNS, csvRow, guardText, jobsToCsv } from '../../src/jobs/csv';
-import { demoJobs } from '../../src/jobs/demo';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import type { Job } from '../../src/jobs/schema';
 import { exportCsv } from '../../src/jobs/transfer';
 import { freshStore, pinionDraft, unwrap } from './helpers';

@@ -71,7 +71,7 @@ const V1_FIXTURES: JobV1[] = [
     updatedAt: '2025-01-22T08:00:00.000Z',
     shift: 'B',
     shiftDate: '2025-01-20',
-    initials: 'AT',
+    initials: 'AL',
     furnace: 'F2',
     workOrder: 'WO-024155',
     part: 'KR-4410',

@@ -43,7 +43,7 @@ class Add implements fc.AsyncCommand<Model, Real> {
     expect(result.ok).toBe(true);
     if (!result.ok) return;
     const stamp = now.toISOString();
-    const expected = { ...this.draft, id: result.value.id, createdAt: stamp, updatedAt: stamp, ...shiftOf(now) } as Job;
+    const expected = { ...this.draft, id: result.value.id, createdAt: stamp, updatedAt: stamp, ...shiftOf(now) };
     expect(result.value).toEqual(expected);
     model.jobs.set(expected.id, expected);
     model.ids.push(expected.id);
@@ -112,7 +112,7 @@ class Refused implements fc.AsyncCommand<Model, Real> {
 
 const initials = fc.stringMatching(/^[A-Z]{1,4}$/u);
 const text = fc.string({ maxLength: 30 }).map((s) => s.trim());
-const status = fc.constantFrom('planned', 'inFurnace', 'done', 'onHold', 'rejected') as fc.Arbitrary<Job['status']>;
+const status = fc.constantFrom<Job['status']>('planned', 'inFurnace', 'done', 'onHold', 'rejected');
 const furnace = fc.constantFrom('F1', 'F2', 'F3');
 const minutes = fc.integer({ min: -120, max: 600 });
 
@@ -136,10 +136,7 @@ const commands = fc.commands(
     fc.tuple(fc.nat(), changes, minutes).map(([p, c, m]) => new Edit(p, c, m)),
     fc.nat().map((p) => new Delete(p)),
     fc
-      .tuple(
-        fc.constantFrom('editMissing', 'deleteMissing', 'badAdd', 'badEdit') as fc.Arbitrary<Refused['kind']>,
-        fc.nat(),
-      )
+      .tuple(fc.constantFrom<Refused['kind']>('editMissing', 'deleteMissing', 'badAdd', 'badEdit'), fc.nat())
       .map(([k, p]) => new Refused(k, p)),
   ],
   { maxCommands: 40, size: 'max' },

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { demoJobs } from '../../src/jobs/demo';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import { compareNewestFirst, currentShiftFilter, matchesFilter, planQuery, type JobFilter } from '../../src/jobs/query';
 import { JOB_STATUSES } from '../../src/jobs/schema';
 import { SHIFT_IDS } from '../../src/jobs/shift';
@@ -22,7 +22,7 @@ async function seeded() {
       notes: 'Öl temperature high',
     }),
     lateF3: await add(local(5, 22, 30), { furnace: 'F3', partNumber: 'KR-0907', status: 'planned' }),
-    nextDay: await add(local(6, 10), { furnace: 'F1', status: 'planned', operator: 'AT' }),
+    nextDay: await add(local(6, 10), { furnace: 'F1', status: 'planned', operator: 'AL' }),
   };
   return { store, jobs };
 }

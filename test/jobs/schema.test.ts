@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import * as v from 'valibot';
 import { describe, expect, it } from 'vitest';
-import { demoJobs } from '../../src/jobs/demo';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import { JobInputsSchema } from '../../src/jobs/inputs';
 import { InitialsSchema, JobSchema, LabResultSchema, TimestampSchema, type Job } from '../../src/jobs/schema';
 

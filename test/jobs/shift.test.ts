@@ -65,7 +65,7 @@ describe('shiftOf with configured hours', () => {
     const clock = fc.integer({ min: 0, max: 1439 });
     const configs = fc
       .uniqueArray(clock, { minLength: 3, maxLength: 3 })
-      .map(([a, b, c]) => ({ A: hhmm(a!), B: hhmm(b!), C: hhmm(c!) }) as ShiftConfig);
+      .map(([a, b, c]) => ({ A: hhmm(a!), B: hhmm(b!), C: hhmm(c!) }));
     fc.assert(
       fc.property(configs, clock, (config, minute) => {
         const slot = shiftOf(at(5, Math.floor(minute / 60), minute % 60), config);

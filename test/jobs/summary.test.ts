@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { demoJobs } from '../../src/jobs/demo';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import type { Job } from '../../src/jobs/schema';
 import { ecdComparison, summarizeShift } from '../../src/jobs/summary';
 

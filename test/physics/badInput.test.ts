@@ -228,3 +228,22 @@ describe('wild input never throws and never yields NaN or Infinity', () => {
     );
   });
 });
+
+describe('a refused value is quoted as the user gave it, never as "[object Object]"', () => {
+  it('an object where a unit or model name belongs is shown as JSON', () => {
+    expect(convertRequest({ value: 1, from: { unit: 'C' } })).toMatchObject({
+      ok: false,
+      error: { code: 'unit.unknown', params: { unit: '{"unit":"C"}' } },
+    });
+    expect(caseDepth({ ...base, model: ['agren'] })).toMatchObject({
+      ok: false,
+      error: { code: 'model.unknown', params: { model: '["agren"]' } },
+    });
+  });
+
+  it('a long value is cut to 40 characters', () => {
+    const r = convertRequest({ value: 1, from: 'x'.repeat(100) });
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.error.params?.unit).toBe(`${'x'.repeat(39)}…`);
+  });
+});

@@ -26,7 +26,7 @@ describe('depth: the demo pinion KR-2231 (SAE 8620, 925 °C, 6 h, 0.90/0.20 %C)'
     expect(r.modelRangeMm.max).toBeGreaterThanOrEqual(r.effectiveCaseDepthMm);
     expect(r.modelRangeMm.max - r.modelRangeMm.min).toBeGreaterThan(0);
   });
-  it('ECD = 2√(Dt)·erfc⁻¹(θ), hand-checked: θ = 0.2/0.7, erfc⁻¹(θ) = 0.7549, √(Dt) = 0.5721 mm → 0.864 mm', () => {
+  it('regression pin (the same formula, evaluated by hand): ECD = 2√(Dt)·erfc⁻¹(θ), θ = 0.2/0.7, erfc⁻¹(θ) = 0.7549, √(Dt) = 0.5721 mm → 0.864 mm', () => {
     expect(r.sqrtDtMm).toBeCloseTo(0.5721, 4);
     expect(r.effectiveCaseDepthMm).toBeCloseTo(0.8637, 4);
   });

@@ -29,15 +29,17 @@ function worstDeviationFromAgren(
 }
 
 describe('diffusivity of carbon in austenite: the three published models check each other', () => {
-  it('hand evaluation of Ågren (1986) at 925 °C, 0.55 %C gives 1.515e-11 m²/s', () => {
+  // Regression pins: each model's formula evaluated by hand (the same formula the code uses, not an outside
+  // value). They catch a changed constant or unit slip; the cross-checks below compare the models.
+  it('regression pin: Ågren (1986) evaluated by hand at 925 °C, 0.55 %C gives 1.515e-11 m²/s', () => {
     // x_C = 0.02507, y = 0.02572; prefactor 1.1745; exponent −(8.3463e-4 − 2.221e-4)·(17767 − 680.0)
     expect(agrenDiffusivity(K(925), 0.55)).toBeCloseTo(1.515e-11, 13);
   });
-  it('hand evaluation of Tibbetts (1980) at 925 °C, 0.55 %C gives 1.594e-11 m²/s', () => {
+  it('regression pin: Tibbetts (1980) evaluated by hand at 925 °C, 0.55 %C gives 1.594e-11 m²/s', () => {
     // 0.47·e^(−0.88)·e^(−33370/(1.987·1198.15)) cm²/s
     expect(tibbettsDiffusivity(K(925), 0.55)).toBeCloseTo(1.594e-11, 13);
   });
-  it('hand evaluation of Wells, Batz & Mehl (1950, from memory) at 925 °C, 0.55 %C gives 1.497e-11 m²/s', () => {
+  it('regression pin: Wells, Batz & Mehl (1950, from memory) evaluated by hand at 925 °C, 0.55 %C gives 1.497e-11 m²/s', () => {
     // (0.07 + 0.033)·e^(−32000/(1.987·1198.15)) cm²/s
     expect(wellsBatzMehlDiffusivity(K(925), 0.55)).toBeCloseTo(1.497e-11, 13);
   });

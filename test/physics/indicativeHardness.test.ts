@@ -14,7 +14,7 @@ import type { SimulationResult } from '../../src/physics/cycle/recipe';
 
 const pinion = JSON.parse(
   readFileSync(new URL('../../public/examples/pinion-kr2231-cycle.json', import.meta.url), 'utf8'),
-);
+) as { steel: Record<string, unknown> } & Record<string, unknown>;
 
 function simulate(request: unknown): SimulationResult {
   const r = simulateCycle(request);

@@ -23,7 +23,7 @@ describe('saturation of austenite (Acm)', () => {
     expect(saturationCarbonPct(1151)).toBeUndefined();
   });
   it('covers every accepted carburizing temperature, up to 1150 °C (held at the eutectic 2.11 %C above 1148 °C)', () => {
-    for (let t = TEMPERATURE_LIMITS_C.min; t <= TEMPERATURE_LIMITS_C.max; t += 1)
+    for (let t: number = TEMPERATURE_LIMITS_C.min; t <= TEMPERATURE_LIMITS_C.max; t += 1)
       expect(saturationCarbonPct(t)).toBeGreaterThan(0);
     expect(saturationCarbonPct(1150)).toBe(2.11);
   });

@@ -5,16 +5,9 @@ import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { Segmented } from '../ui/Segmented';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { conversionOutcome } from './results';
-import {
-  CONVERT_QUANTITIES,
-  CONVERT_UNITS,
-  convertForm,
-  quantityOfForm,
-  unitOfForm,
-  type ConvertQuantity,
-} from './state';
+import { CONVERT_QUANTITIES, CONVERT_UNITS, convertForm, quantityOfForm, unitOfForm } from './state';
 import './screen.css';
 
 /** Decimals per unit in the conversion list (more than results elsewhere: this is a reference). */
@@ -77,7 +70,7 @@ export default function ConvertScreen() {
           id="convert-value"
           label={t('app.convert.value')}
           unitLabel={UNIT_SYMBOLS[from] ?? from}
-          value={form.value[quantity as ConvertQuantity]}
+          value={form.value[quantity]}
           onInput={(v) => patch(convertForm, { value: { ...form.value, [quantity]: v } })}
           error={word(outcome.errors.value)}
         />

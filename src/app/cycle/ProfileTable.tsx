@@ -1,6 +1,6 @@
 /** The profile as a plain table: the same numbers as the chart, for screen readers and print. */
-import type { ProfilePoint } from '../../physics/cycle/recipe';
-import type { ScreenContext } from '../ui/screenContext';
+import type { ProfilePoint } from '../../physics';
+import type { ScreenContext } from '../settings/screenContext';
 
 /** Every n-th point, so the table stays short on a phone. */
 export function tableRows(profile: readonly ProfilePoint[], maxRows = 11): ProfilePoint[] {

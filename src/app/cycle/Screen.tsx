@@ -4,15 +4,15 @@ import { isModelId } from '../../physics';
 import { factorOf } from '../settings/calibration';
 import { defaults, model, theme } from '../settings/state';
 import { Answer } from '../ui/Answer';
-import { CycleBand } from '../ui/CycleBand';
-import { FurnaceField } from '../ui/FurnaceField';
-import { ModelField } from '../ui/ModelField';
+import { CycleBand } from '../range/CycleBand';
+import { FurnaceField } from '../fields/FurnaceField';
+import { ModelField } from '../fields/ModelField';
 import { patch } from '../ui/persist';
 import { ResultsCard } from '../ui/ResultsCard';
-import { ThresholdField } from '../ui/ThresholdField';
-import { useScreenContext } from '../ui/screenContext';
-import { ShapeFields } from '../ui/ShapeFields';
-import { SteelFields } from '../ui/SteelFields';
+import { ThresholdField } from '../fields/ThresholdField';
+import { useScreenContext } from '../settings/screenContext';
+import { ShapeFields } from '../fields/ShapeFields';
+import { SteelFields } from '../fields/SteelFields';
 import { CycleTabs } from './CycleTabs';
 import { ProfileChart } from './ProfileChart';
 import { ProfileTable } from './ProfileTable';
@@ -31,10 +31,10 @@ export default function CycleScreen() {
   const outcome = cycleOutcome.value;
   const errors = outcome.errors;
   const result = outcome.result;
-  const view = useMemo(() => (result ? cycleView(result, t, show, units) : undefined), [result, t, units]);
+  const view = useMemo(() => (result ? cycleView(result, t, show, units) : undefined), [result, t, show, units]);
   const logEntry = useMemo(() => (result ? cycleLogEntry(result) : undefined), [result]);
   const canAdd = form.steps.length < MAX_STEPS;
-  const set = (next: typeof form) => (cycleForm.value = next);
+  const set = (next: typeof form) => patch(cycleForm, next);
   return (
     <div class="screen cycle">
       <CycleTabs current="cycle" />

@@ -4,7 +4,7 @@ import { Icon } from '../ui/Icon';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
 import { CheckField, TextField } from '../ui/TextField';
-import type { ScreenContext } from '../ui/screenContext';
+import type { ScreenContext } from '../settings/screenContext';
 import type { StepForm } from './state';
 
 export interface StepCardProps {

@@ -42,6 +42,7 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
     ticks: { stroke: grid },
     font: '13px system-ui, sans-serif',
     labelFont: '600 13px system-ui, sans-serif',
+    // eslint-disable-next-line @typescript-eslint/no-unsafe-enum-assignment -- uPlot's Side is an ambient const enum, which isolated modules cannot name; its values are 0–3.
     ...(side === undefined ? {} : { side }),
   });
   return {

@@ -3,10 +3,10 @@
  * exactly the planned steps: hours and °C as typed values (the fields show them in the user's
  * units), β left empty where it equals the settings' default.
  */
-import type { Recipe } from '../../physics/cycle/recipe';
+import type { Recipe } from '../../physics';
 import { BETA_INPUT_SCALE } from '../settings/state';
 import { field, type FieldText } from '../ui/fieldText';
-import type { SteelForm } from '../ui/steel';
+import type { SteelForm } from '../fields/steel';
 import type { CycleForm, StepForm } from './state';
 
 export interface FormExtras {

@@ -2,8 +2,7 @@
  * A simulated or planned cycle as a job-log entry: the whole recipe and what it predicted (no band:
  * the likely range of a cycle is worked out on demand only), and the furnace chosen for it.
  */
-import { DEFAULT_MODEL, findGrade } from '../../physics';
-import type { Recipe, SimulationResult } from '../../physics/cycle/recipe';
+import { DEFAULT_MODEL, findGrade, type Recipe, type SimulationResult } from '../../physics';
 import type { LogEntry } from '../log/entry';
 import type { CalibrationState } from '../settings/calibration';
 import { APP_VERSION } from '../version';

@@ -1,7 +1,14 @@
 /** Reads the cycle form into a Recipe (°C, h, mm, m/s) and runs it through the simulate adapter. */
 import { computed } from '@preact/signals';
-import { ALLOY_ELEMENTS, isModelId, type DiffusivityModelId, type Hardness } from '../../physics';
-import type { Recipe, RecipeStep, SimulationResult } from '../../physics/cycle/recipe';
+import {
+  ALLOY_ELEMENTS,
+  type DiffusivityModelId,
+  type Hardness,
+  isModelId,
+  type Recipe,
+  type RecipeStep,
+  type SimulationResult,
+} from '../../physics';
 import {
   calibrations,
   calibrationState,
@@ -12,8 +19,8 @@ import {
 import { BETA_INPUT_SCALE, defaults, model } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
 import { FieldReader, placeError, type Outcome } from '../ui/outcome';
-import { readShape } from '../ui/shape';
-import { readComposition } from '../ui/steel';
+import { readShape } from '../fields/shape';
+import { readComposition } from '../fields/steel';
 import { PHYSICS_UNITS } from '../ui/units';
 import { simulate } from './simulate';
 import { cycleForm, type CycleForm } from './state';

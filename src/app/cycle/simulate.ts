@@ -1,7 +1,13 @@
 /** The cycle screen's one link to the cycle solver (kept apart so tests and screens share it), with a furnace's factor on D. */
-import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, isModelId, scaledDiffusivity, type Result } from '../../physics';
-import type { SimulationResult } from '../../physics/cycle/recipe';
-import { simulateCycle } from '../../physics/cycle/simulate';
+import {
+  DEFAULT_MODEL,
+  DIFFUSIVITY_MODELS,
+  isModelId,
+  type Result,
+  scaledDiffusivity,
+  simulateCycle,
+  type SimulationResult,
+} from '../../physics';
 
 /** Simulates a cycle request (validated by the solver's reader) with its model's D × `diffusivityFactor`. */
 export function simulate(request: unknown, diffusivityFactor = 1): Result<SimulationResult> {

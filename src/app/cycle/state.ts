@@ -1,7 +1,7 @@
 /** The cycle editor's form: steps, part shape, steel, model and threshold, persisted as typed. */
 import { field, type FieldText } from '../ui/fieldText';
 import { persisted } from '../ui/persist';
-import { defaultSteel, type SteelForm } from '../ui/steel';
+import { defaultSteel, type SteelForm } from '../fields/steel';
 
 export interface StepForm {
   /** Stable key for the list (survives reordering). */

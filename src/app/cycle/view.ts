@@ -1,8 +1,8 @@
 /** The cycle screen's worded results and chart data (kept out of the JSX). */
 import type { TFunction } from 'i18next';
 import { convert, findGradeByIdOrName, type IndicativeHardnessBasis } from '../../physics';
-import { calibrationWords } from '../ui/calibration';
-import { ecdLabel } from '../ui/ecdLabel';
+import { ecdLabel } from '../fields/ecdLabel';
+import { calibrationWords } from '../fields/calibrationWords';
 import { UNIT_SYMBOLS } from '../ui/format';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';

@@ -1,16 +1,16 @@
 /** Case depth: from time and temperature, or the time or the temperature for a target depth. */
 import { Answer } from '../ui/Answer';
-import { BandMethod } from '../ui/BandMethod';
+import { BandMethod } from '../range/BandMethod';
 import { UNIT_SYMBOLS } from '../ui/format';
-import { FurnaceField } from '../ui/FurnaceField';
+import { FurnaceField } from '../fields/FurnaceField';
 import { patch } from '../ui/persist';
 import { defaults, model } from '../settings/state';
 import { NumberField } from '../ui/NumberField';
 import { ResultsCard } from '../ui/ResultsCard';
-import { ThresholdField } from '../ui/ThresholdField';
+import { ThresholdField } from '../fields/ThresholdField';
 import { Segmented } from '../ui/Segmented';
-import { SteelFields } from '../ui/SteelFields';
-import { useScreenContext } from '../ui/screenContext';
+import { SteelFields } from '../fields/SteelFields';
+import { useScreenContext } from '../settings/screenContext';
 import { LogSaveButton } from '../log/save/LogActions';
 import { depthLogEntry } from './logEntry';
 import { depthOutcome, solveFor, usesField } from './results';

@@ -25,7 +25,7 @@ import {
 import { defaults, model } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
 import { FieldReader, placeError, type Outcome } from '../ui/outcome';
-import { readComposition } from '../ui/steel';
+import { readComposition } from '../fields/steel';
 import { PHYSICS_UNITS } from '../ui/units';
 import { depthForm, type DepthForm, type SolveFor } from './state';
 

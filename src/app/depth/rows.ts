@@ -1,9 +1,9 @@
 /** The depth screen's result rows, worded and formatted (kept out of the JSX). */
 import type { TFunction } from 'i18next';
 import { DIFFUSIVITY_MODELS, MODEL_IDS } from '../../physics';
-import { bandRow } from '../ui/band';
-import { calibrationWords } from '../ui/calibration';
-import { ecdLabel } from '../ui/ecdLabel';
+import { bandRow } from '../range/band';
+import { calibrationWords } from '../fields/calibrationWords';
+import { ecdLabel } from '../fields/ecdLabel';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
 import { wordWarning } from '../ui/warningText';

@@ -1,7 +1,7 @@
 /** The case-depth form: what is solved for and every input, persisted as typed. */
 import { field, type FieldText } from '../ui/fieldText';
 import { persisted } from '../ui/persist';
-import { defaultSteel, type SteelForm } from '../ui/steel';
+import { defaultSteel, type SteelForm } from '../fields/steel';
 
 export const SOLVE_FOR = ['depth', 'time', 'temperature'] as const;
 export type SolveFor = (typeof SOLVE_FOR)[number];

@@ -3,7 +3,7 @@
  * the jobs and their residuals, and a switch to apply it to that furnace's predictions (off by
  * default). The figures are kept with the settings, so the calculators never open the log.
  */
-import { useMemo } from 'preact/hooks';
+import { useEffect, useMemo } from 'preact/hooks';
 import { DEFAULT_CALIBRATION_JOBS, describeJobsError, type Job, type SkippedJob } from '../../jobs';
 import { errorMessage } from '../../i18n/i18n';
 import type { CalibrationFit } from '../../physics';
@@ -12,20 +12,38 @@ import { model } from '../settings/state';
 import { hrefFor } from '../shell/route';
 import { ErrorNote } from '../ui/Notices';
 import { ResultList, type ResultRow } from '../ui/ResultList';
-import { useScreenContext, type ScreenContext } from '../ui/screenContext';
+import { useScreenContext, type ScreenContext } from '../settings/screenContext';
 import { CheckField } from '../ui/TextField';
-import { calibrationCards, type FurnaceCard } from './calibration';
+import { calibrationFurnaces, cardsOf, measuredJobs, type FurnaceCard } from './calibration';
+import { latestRun } from '../worker/client';
+import type { CalibrationInput } from '../worker/tasks';
 import { formatMoment } from './dates';
-import { useLogRead } from './useLog';
+import { useJobList } from './useLog';
+
+/** A calibration input told apart by model, furnaces and each job's id and last change (not its whole text). */
+const calibrationKey = ({ jobs, furnaces, model }: CalibrationInput) =>
+  [model, furnaces.join('\u0000'), ...jobs.map((job) => `${job.id}@${job.updatedAt}`)].join('|');
 
 export function CalibrationView() {
   const ctx = useScreenContext();
   const { t } = ctx;
-  const list = useLogRead((store) => store.list({}), []);
-  const jobs: Job[] = list.state === 'ready' ? list.value.jobs : [];
+  const list = useJobList({});
+  const jobs = useMemo((): Job[] => (list.state === 'ready' ? list.value.jobs : []), [list]);
   const stored = calibrations.value;
   const current = model.value;
-  const cards = useMemo(() => calibrationCards(jobs, stored, current, new Date()), [jobs, stored, current]);
+  // The fits re-run every lab job's prediction many times: they run in the physics worker.
+  const fits = useMemo(() => latestRun('calibrate', calibrationKey), []);
+  const measured = useMemo(() => measuredJobs(jobs), [jobs]);
+  const furnaces = useMemo(() => calibrationFurnaces(measured, stored), [measured, stored]);
+  useEffect(() => {
+    if (list.state === 'ready') fits.run({ jobs: measured, furnaces, model: current });
+  }, [fits, list.state, measured, furnaces, current]);
+  const answer = fits.answer.value;
+  const cards = useMemo(
+    () => (answer && 'output' in answer ? cardsOf(answer.output, stored, answer.input.model, new Date()) : []),
+    [answer, stored],
+  );
+  const updating = list.state === 'loading' || fits.updating.value;
   const byId = useMemo(() => new Map(jobs.map((job) => [job.id, job])), [jobs]);
   return (
     <>
@@ -34,7 +52,12 @@ export function CalibrationView() {
         {t('app.calibration.intro', { count: DEFAULT_CALIBRATION_JOBS, model: t(`app.models.${current}`) })}
       </p>
       {list.state === 'failed' && <ErrorNote message={describeJobsError(t, list.error)} />}
-      {list.state === 'ready' && cards.length === 0 && <p class="note">{t('app.calibration.noLabResults')}</p>}
+      {updating && (
+        <p class="updating-mark" data-updating>
+          {t('app.common.updating')}
+        </p>
+      )}
+      {!updating && answer && cards.length === 0 && <p class="note">{t('app.calibration.noLabResults')}</p>}
       {cards.map((card) => (
         <FurnaceCalibrationCard key={card.furnace} card={card} byId={byId} ctx={ctx} />
       ))}
@@ -83,7 +106,7 @@ function FurnaceCalibrationCard({
       {!fit.ok && <ErrorNote message={errorMessage(t, fit.error)} />}
       {fit.ok && <ResultList rows={rows} label={t('app.calibration.furnaceHeading', { furnace })} />}
       {calibration.skipped.length > 0 && <LeftOutJobs skipped={calibration.skipped} byId={byId} ctx={ctx} />}
-      {(fresh || stored) && (
+      {(fresh !== undefined || stored !== undefined) && (
         <CheckField
           id={`${id}-apply`}
           label={t('app.calibration.apply', { furnace })}

@@ -4,7 +4,7 @@ import { describeJobsError, JOB_STATUSES, type Job, type JobStatus } from '../..
 import { ErrorNote } from '../ui/Notices';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { Segmented } from '../ui/Segmented';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { hrefFor } from '../shell/route';
 import { writeToLog } from './db';
 import { formatCalendarDate, formatMoment } from './dates';
@@ -22,13 +22,13 @@ import {
 } from './jobForm';
 import { comparisonRows, labRows, planRows, predictionRows } from './jobRows';
 import { LabEditor } from './LabEditor';
-import { useLogRead } from './useLog';
+import { useJob } from './useLog';
 
 type Mode = 'view' | 'edit' | 'lab';
 
 export function DetailView({ id }: { id: string }) {
   const { t, locale } = useScreenContext();
-  const loaded = useLogRead((store) => store.get(id), [id]);
+  const loaded = useJob(id);
   const back = (
     <a class="back-link" href={hrefFor('log')}>
       {t('app.log.detail.back')}

@@ -16,9 +16,10 @@ import {
 import { language } from '../../i18n/useT';
 import { ErrorNote } from '../ui/Notices';
 import { Segmented } from '../ui/Segmented';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { APP_VERSION } from '../version';
 import { jobStore, writeToLog } from './db';
+import { DemoData } from './DemoData';
 import { downloadText } from './download';
 
 type DecimalMark = '.' | ',';
@@ -125,6 +126,8 @@ export function FilesView() {
           {imported && (imported.ok ? <p class="log-saved">{imported.text}</p> : <ErrorNote message={imported.text} />)}
         </div>
       </section>
+
+      <DemoData />
     </>
   );
 }

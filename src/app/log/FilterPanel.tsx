@@ -3,11 +3,11 @@ import { JOB_STATUSES, SHIFT_IDS, type ShiftId } from '../../jobs';
 import { ChoiceField } from '../ui/ChoiceField';
 import { Segmented } from '../ui/Segmented';
 import { TextField } from '../ui/TextField';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { formatCalendarDate } from './dates';
 import { filterForm, isCurrentShift, showCurrentShift, type FilterForm, type StatusChoice } from './filter';
 
-/** Furnaces and parts offered by the filter: those seen in the log this session and the demo plant's. */
+/** Furnaces and parts offered by the filter: those of this device's log (recent, and seen this session). */
 export function FilterPanel({ furnaces, parts }: { furnaces: readonly string[]; parts: readonly string[] }) {
   const { t, locale } = useScreenContext();
   const form = filterForm.value;

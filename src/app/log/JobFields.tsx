@@ -1,11 +1,11 @@
 /** The fields a person types for a job, shared by "save to log" and editing a job. */
 import type { TFunction } from 'i18next';
 import { JOB_STATUSES, type JobStatus } from '../../jobs';
-import { DEMO_FURNACES, DEMO_PART_NUMBERS } from '../../jobs/demo';
 import { useT } from '../../i18n/useT';
 import { Segmented } from '../ui/Segmented';
 import { QuickPicks, TextAreaField, TextField } from '../ui/TextField';
 import { JOB_FORM_FIELDS, TEXT_MAX, type JobForm } from './jobForm';
+import { useLogPicks } from './picks';
 
 export interface JobFieldsProps {
   idPrefix: string;
@@ -24,6 +24,7 @@ export const jobFieldLabel = (t: TFunction) => (field: string) =>
 
 export function JobFields({ idPrefix, form, onChange, errors, askGradeName, withStatus }: JobFieldsProps) {
   const t = useT();
+  const picks = useLogPicks();
   const id = (name: string) => `${idPrefix}-${name}`;
   return (
     <div class="job-fields">
@@ -59,7 +60,7 @@ export function JobFields({ idPrefix, form, onChange, errors, askGradeName, with
       >
         <QuickPicks
           label={t('app.log.fields.partPicks')}
-          values={DEMO_PART_NUMBERS}
+          values={picks.parts}
           current={form.partNumber}
           onPick={(v) => onChange({ partNumber: v })}
         />
@@ -75,7 +76,7 @@ export function JobFields({ idPrefix, form, onChange, errors, askGradeName, with
       >
         <QuickPicks
           label={t('app.log.fields.furnacePicks')}
-          values={DEMO_FURNACES}
+          values={picks.furnaces}
           current={form.furnace}
           onPick={(v) => onChange({ furnace: v })}
         />

@@ -5,7 +5,7 @@ import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
 import { Segmented } from '../ui/Segmented';
 import { TextField } from '../ui/TextField';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { writeToLog } from './db';
 import { FormActions } from './FormActions';
 import { placeJobsError, type PlacedErrors } from './jobForm';

@@ -2,23 +2,20 @@
 import { signal } from '@preact/signals';
 import { useEffect, useState } from 'preact/hooks';
 import { describeJobsError, type Job } from '../../jobs';
-import { DEMO_FURNACES, DEMO_PART_NUMBERS } from '../../jobs/demo';
 import { ErrorNote } from '../ui/Notices';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { DamagedRecords } from './DamagedRecords';
 import { filterForm, toJobFilter } from './filter';
 import { FilterPanel } from './FilterPanel';
 import { JobCard } from './JobCard';
-import { useLogRead } from './useLog';
+import { useLogPicks } from './picks';
+import { useJobList } from './useLog';
 
 /** Jobs drawn at once; more on request, so a year of log stays quick on a phone. */
 const PAGE = 50;
 
-/** Furnaces and parts met in the log this session (the filter offers them). */
-const seen = signal<{ furnaces: string[]; parts: string[] }>({
-  furnaces: [...DEMO_FURNACES],
-  parts: [...DEMO_PART_NUMBERS],
-});
+/** Furnaces and parts met in the log this session (the filter offers them, with the recent ones). */
+const seen = signal<{ furnaces: string[]; parts: string[] }>({ furnaces: [], parts: [] });
 
 function remember(jobs: readonly Job[]): void {
   const furnaces = new Set(seen.value.furnaces);
@@ -37,17 +34,22 @@ export function ListView() {
   const { t, show, locale } = ctx;
   const filter = toJobFilter(filterForm.value);
   const filterKey = JSON.stringify(filter);
-  const list = useLogRead((store) => store.list(filter), [filterKey]);
+  const list = useJobList(filter);
   const [shown, setShown] = useState(PAGE);
   useEffect(() => setShown(PAGE), [filterKey]);
   useEffect(() => {
     if (list.state === 'ready') remember(list.value.jobs);
   }, [list]);
   const jobs = list.state === 'ready' ? list.value.jobs : [];
+  const recent = useLogPicks();
+  const union = (a: readonly string[], b: readonly string[]) => [...new Set([...a, ...b])].sort();
   return (
     <>
       <h1 tabIndex={-1}>{t('app.log.title')}</h1>
-      <FilterPanel furnaces={seen.value.furnaces} parts={seen.value.parts} />
+      <FilterPanel
+        furnaces={union(recent.furnaces, seen.value.furnaces)}
+        parts={union(recent.parts, seen.value.parts)}
+      />
       {list.state === 'failed' && <ErrorNote message={describeJobsError(t, list.error)} />}
       {list.state === 'ready' && <DamagedRecords records={list.value.corrupt} />}
       <p class="log-count" aria-live="polite">

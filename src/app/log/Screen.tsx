@@ -25,15 +25,15 @@ export default function LogScreen() {
   const t = useT();
   const { view, jobId } = viewOf(subPath.value);
   const shownKey = `${view}/${jobId ?? ''}`;
-  const previous = useRef(shownKey);
+  const previousKeyRef = useRef(shownKey);
   useEffect(() => {
     followCurrentShift();
     void refreshPersistence();
   }, []);
   useEffect(() => {
     // Moving between the log's views: start at the top, focus on the new heading.
-    if (previous.current === shownKey) return;
-    previous.current = shownKey;
+    if (previousKeyRef.current === shownKey) return;
+    previousKeyRef.current = shownKey;
     window.scrollTo(0, 0);
     requestAnimationFrame(() => document.querySelector<HTMLElement>('main h1')?.focus());
   }, [shownKey]);

@@ -3,21 +3,21 @@ import { describeJobsError, JOB_STATUSES, summarizeShift, type EcdComparison, ty
 import { NO_VALUE } from '../ui/format';
 import { ErrorNote } from '../ui/Notices';
 import { ResultList } from '../ui/ResultList';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { hrefFor } from '../shell/route';
 import { DamagedRecords } from './DamagedRecords';
 import { filterForm, toJobFilter } from './filter';
 import { describeFilter } from './FilterPanel';
 import { JobCard } from './JobCard';
 import { signedPercent } from './jobRows';
-import { useLogRead } from './useLog';
+import { useJobList } from './useLog';
 
 export function SummaryView() {
   const ctx = useScreenContext();
   const { t, show, locale } = ctx;
   const form = filterForm.value;
   const filter = toJobFilter(form);
-  const list = useLogRead((store) => store.list(filter), [JSON.stringify(filter)]);
+  const list = useJobList(filter);
   const jobs: Job[] = list.state === 'ready' ? list.value.jobs : [];
   const summary = summarizeShift(jobs);
   const inBand = summary.ecdPairs.filter((p) => p.withinBand === true).length;

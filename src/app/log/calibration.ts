@@ -46,15 +46,24 @@ const sameFit = (a: StoredCalibration, b: StoredCalibration) =>
   Math.abs(a.factor - b.factor) <= 1e-9 * b.factor &&
   Math.abs(a.low - b.low) <= 1e-9 * b.low;
 
-export function calibrationCards(
-  jobs: readonly Job[],
+/** The furnaces the view has a card for: those with lab depths in the log, and those with stored figures. */
+export function calibrationFurnaces(jobs: readonly Job[], stored: readonly StoredCalibration[]): string[] {
+  return [...new Set([...furnacesWithLabDepth(jobs), ...stored.map((s) => s.furnace)])].sort();
+}
+
+/** The jobs a calibration reads: those with a lab ECD (the only ones worth sending to the worker). */
+export const measuredJobs = (jobs: readonly Job[]): Job[] =>
+  jobs.filter((job) => job.lab?.ecdMm !== undefined && job.lab.ecdMm > 0);
+
+/** One card per fitted furnace, beside the figures the settings keep. */
+export function cardsOf(
+  calibrations: readonly FurnaceCalibration[],
   stored: readonly StoredCalibration[],
   model: DiffusivityModelId,
   now: Date,
 ): FurnaceCard[] {
-  const furnaces = [...new Set([...furnacesWithLabDepth(jobs), ...stored.map((s) => s.furnace)])].sort();
-  return furnaces.map((furnace) => {
-    const calibration = calibrateFurnace(jobs, furnace, { model });
+  return calibrations.map((calibration) => {
+    const furnace = calibration.furnace;
     const kept = stored.find((s) => s.furnace === furnace);
     const fresh = calibration.fit.ok
       ? storableFit(furnace, calibration.fit.value, model, now.toISOString(), kept?.apply ?? false)
@@ -67,4 +76,15 @@ export function calibrationCards(
       stale: kept !== undefined && (fresh === undefined || !sameFit(kept, fresh)),
     };
   });
+}
+
+/** The cards computed here and now (the tests; the view fits in the worker). */
+export function calibrationCards(
+  jobs: readonly Job[],
+  stored: readonly StoredCalibration[],
+  model: DiffusivityModelId,
+  now: Date,
+): FurnaceCard[] {
+  const fits = calibrationFurnaces(jobs, stored).map((furnace) => calibrateFurnace(jobs, furnace, { model }));
+  return cardsOf(fits, stored, model, now);
 }

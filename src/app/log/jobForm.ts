@@ -92,7 +92,7 @@ export function changesOf(job: Job, form: JobForm): JobChanges {
     if (form[field] !== before[field]) changes[field] = form[field];
   }
   if (form.gradeName !== before.gradeName) changes.steel = { ...job.steel, gradeName: form.gradeName.trim() };
-  return changes as JobChanges;
+  return changes;
 }
 
 /** The form field a problem's path belongs to (`steel.gradeName` → gradeName, `lab.ecdMm` → lab). */

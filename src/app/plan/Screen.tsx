@@ -14,18 +14,18 @@ import { factorOf } from '../settings/calibration';
 import { defaults, model } from '../settings/state';
 import { hrefFor } from '../shell/route';
 import { Answer } from '../ui/Answer';
-import { CycleBand } from '../ui/CycleBand';
+import { CycleBand } from '../range/CycleBand';
 import { UNIT_SYMBOLS } from '../ui/format';
-import { FurnaceField } from '../ui/FurnaceField';
-import { ModelField } from '../ui/ModelField';
+import { FurnaceField } from '../fields/FurnaceField';
+import { ModelField } from '../fields/ModelField';
 import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
 import { ResultsCard } from '../ui/ResultsCard';
-import { useScreenContext } from '../ui/screenContext';
-import { ShapeFields } from '../ui/ShapeFields';
-import { SteelFields } from '../ui/SteelFields';
+import { useScreenContext } from '../settings/screenContext';
+import { ShapeFields } from '../fields/ShapeFields';
+import { SteelFields } from '../fields/SteelFields';
 import { CheckField } from '../ui/TextField';
-import { ThresholdField } from '../ui/ThresholdField';
+import { ThresholdField } from '../fields/ThresholdField';
 import { planOutcome } from './results';
 import { planForm } from './state';
 import { StepFields } from './StepFields';
@@ -39,7 +39,7 @@ export default function PlanScreen() {
   const outcome = planOutcome.value;
   const errors = outcome.errors;
   const result = outcome.result;
-  const view = useMemo(() => (result ? planView(result, t, show) : undefined), [result, t, units]);
+  const view = useMemo(() => (result ? planView(result, t, show) : undefined), [result, t, show]);
   const logEntry = useMemo(
     () =>
       result?.plan.reachable
@@ -76,6 +76,7 @@ export default function PlanScreen() {
         value={view?.answer}
         detail={view?.answerDetail}
         note={view?.answerNote}
+        updating={outcome.updating ? t('app.common.updating') : undefined}
       />
 
       <section class="card" aria-labelledby="plan-targets">

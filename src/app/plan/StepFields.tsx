@@ -2,7 +2,7 @@
 import type { InputError } from '../../physics';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
-import type { ScreenContext } from '../ui/screenContext';
+import type { ScreenContext } from '../settings/screenContext';
 import type { PotentialStepForm } from './state';
 
 export interface StepFieldsProps {

@@ -1,17 +1,17 @@
 /**
  * Reads the planner's form into a `plan` request (°C, h, mm, %C, m/s) and plans it with the
- * chosen furnace's calibration. A plan is a few milliseconds of simulation: it runs as you type,
- * inside a `computed`, so it runs once per change that is shown and never queues up.
+ * chosen furnace's calibration. The search (about 20 simulator runs) runs in the physics worker as
+ * you type; the screen keeps the last plan, marked updating, until the newest request is answered.
  */
-import { computed } from '@preact/signals';
-import { ALLOY_ELEMENTS, isModelId, planTwoStepCycle, type PlanResult } from '../../physics';
+import { computed, effect } from '@preact/signals';
+import { ALLOY_ELEMENTS, isModelId, planTwoStepCycle, type PlanResult, type Result } from '../../physics';
 import { CYCLE_FIELD_MAP, cycleDefaults, readBaseFields, type CycleDefaults } from '../cycle/results';
 import { factorOf, type CalibrationState } from '../settings/calibration';
 import { BETA_INPUT_SCALE } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
 import { FieldReader, placeError, type Outcome } from '../ui/outcome';
-import { timed } from '../ui/timing';
 import { PHYSICS_UNITS } from '../ui/units';
+import { latestRun } from '../worker/client';
 import { planForm, type PlanForm, type PotentialStepForm } from './state';
 
 export interface PlanOutcome {
@@ -88,20 +88,51 @@ export function buildPlanRequest(
   };
 }
 
-export function computePlan(form: PlanForm, settings: CycleDefaults): Outcome<PlanOutcome> {
+export interface PlanRequest {
+  request: Record<string, unknown>;
+  calibration: CalibrationState;
+}
+
+/** The form read into a `plan` request with the chosen furnace's calibration, or the fields it cannot read. */
+export function planRequestOf(form: PlanForm, settings: CycleDefaults): Outcome<PlanRequest> {
   const built = buildPlanRequest(form, settings);
   if (!built.request) return { errors: built.errors };
   const model = isModelId(built.request.model) ? built.request.model : settings.model;
   const calibration: CalibrationState = settings.calibrationFor?.(model) ?? { kind: 'none' };
   const factor = factorOf(calibration);
   const request = factor === 1 ? built.request : { ...built.request, diffusivityFactor: factor };
-  const plan = planTwoStepCycle(request);
+  return { errors: {}, result: { request, calibration } };
+}
+
+/** What the screen shows for a planned request: the plan, or its error placed on the field that caused it. */
+export function planOutcomeOf({ request, calibration }: PlanRequest, plan: Result<PlanResult>): Outcome<PlanOutcome> {
   if (!plan.ok) return placeError(plan.error, FIELD_MAP, PLAN_FORM_FIELDS);
   return { errors: {}, result: { request, plan: plan.value, calibration } };
 }
 
-export const planOutcome = computed(() => {
-  const form = planForm.value;
-  const settings = cycleDefaults.value;
-  return timed('plan', () => computePlan(form, settings));
+/** Plans the form here and now (the tests; the screen plans in the worker). */
+export function computePlan(form: PlanForm, settings: CycleDefaults): Outcome<PlanOutcome> {
+  const asked = planRequestOf(form, settings);
+  return asked.result ? planOutcomeOf(asked.result, planTwoStepCycle(asked.result.request)) : { errors: asked.errors };
+}
+
+/** The request of the form as typed (cheap: reading and checking fields). */
+export const planRequest = computed(() => planRequestOf(planForm.value, cycleDefaults.value));
+
+const planner = latestRun('plan');
+// Every new request goes to the worker; the newest one wins.
+effect(() => {
+  const asked = planRequest.value.result;
+  if (asked) planner.run(asked.request);
+});
+
+/** The newest plan answered for this form, kept on screen (marked updating) while the next is worked out. */
+export const planOutcome = computed((): Outcome<PlanOutcome> & { updating: boolean } => {
+  const asked = planRequest.value;
+  if (!asked.result) return { errors: asked.errors, updating: false };
+  const answer = planner.answer.value;
+  const updating = planner.updating.value;
+  if (!answer || 'failed' in answer) return { errors: {}, updating };
+  const calibration = asked.result.calibration;
+  return { ...planOutcomeOf({ request: answer.input, calibration }, answer.output), updating };
 });

@@ -1,7 +1,7 @@
 /** The planner's form: steel, model, shape, the boost and diffuse steps, an optional hardening soak and the drawing's targets, persisted as typed. */
 import { field, type FieldText } from '../ui/fieldText';
 import { persisted } from '../ui/persist';
-import { defaultSteel, type SteelForm } from '../ui/steel';
+import { defaultSteel, type SteelForm } from '../fields/steel';
 
 /** A step at one temperature and carbon potential; β empty: the default from the settings. */
 export interface PotentialStepForm {

@@ -1,8 +1,8 @@
 /** The planner's worded results: times, predictions, what binds and what would help (kept out of the JSX). */
 import type { TFunction } from 'i18next';
 import type { Hardness } from '../../physics';
-import { calibrationWords } from '../ui/calibration';
-import { ecdLabel } from '../ui/ecdLabel';
+import { calibrationWords } from '../fields/calibrationWords';
+import { ecdLabel } from '../fields/ecdLabel';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
 import { stepCautions, wordWarning } from '../ui/warningText';

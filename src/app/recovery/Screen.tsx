@@ -6,7 +6,7 @@ import { NumberField } from '../ui/NumberField';
 import { ErrorNote } from '../ui/Notices';
 import { patch } from '../ui/persist';
 import { ResultList, type ResultRow } from '../ui/ResultList';
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { LogNoteButton } from '../log/save/LogActions';
 import { recoveryNote } from './logNote';
 import { recoveryOutcome } from './results';

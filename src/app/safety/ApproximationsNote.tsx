@@ -1,5 +1,5 @@
 /** The register of approximate constants, one tap away on the safety screen: every number a result rests on that is recalled or common practice. */
-import type { ScreenContext } from '../ui/screenContext';
+import type { ScreenContext } from '../settings/screenContext';
 import { approximationRows } from './approximations';
 
 export function ApproximationsNote({ ctx }: { ctx: ScreenContext }) {

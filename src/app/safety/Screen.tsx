@@ -1,5 +1,5 @@
 /** Safety notes, one tap away from every screen. Each defers to the plant's procedures, codes and qualified people. */
-import { useScreenContext } from '../ui/screenContext';
+import { useScreenContext } from '../settings/screenContext';
 import { ApproximationsNote } from './ApproximationsNote';
 import { SAFETY_NOTES } from './notes';
 import './screen.css';

@@ -4,8 +4,7 @@
  * furnace the calculators work for (one choice shared by every calculator: a person stands at
  * one furnace at a time).
  */
-import { isModelId, type DiffusivityModelId } from '../../physics';
-import { DIFFUSIVITY_FACTOR_LIMITS } from '../../physics/validate';
+import { DIFFUSIVITY_FACTOR_LIMITS, type DiffusivityModelId, isModelId } from '../../physics';
 import { persisted } from '../ui/persist';
 
 export interface StoredCalibration {
@@ -40,8 +39,8 @@ function isCalibration(raw: unknown): raw is StoredCalibration {
     c.furnace.trim() !== '' &&
     c.furnace.length <= FURNACE_MAX_LENGTH &&
     finiteIn(c.low, min, max) &&
-    finiteIn(c.factor, c.low as number, max) &&
-    finiteIn(c.high, c.factor as number, max) &&
+    finiteIn(c.factor, c.low, max) &&
+    finiteIn(c.high, c.factor, max) &&
     Number.isInteger(c.jobCount) &&
     (c.jobCount as number) > 0 &&
     finiteIn(c.rmsMm, 0, Number.MAX_VALUE) &&

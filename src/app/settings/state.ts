@@ -7,21 +7,25 @@ import type { Language } from '../../i18n/i18n';
 import { initialLanguage, language, startLanguage, switchLanguage } from '../../i18n/useT';
 import {
   CASE_CRITERIA,
+  checkBeta,
+  checkCarbonPct,
+  checkTemperatureTolerance,
+  DEFAULT_BETA_M_PER_S,
+  DEFAULT_BETA_RANGE_M_PER_S,
   DEFAULT_CASE_CRITERION,
   DEFAULT_ECD_THRESHOLD_PCT,
   DEFAULT_MODEL,
+  DEFAULT_TEMPERATURE_TOLERANCE_C,
   isCaseCriterionId,
-  isModelId,
   type CaseCriterionId,
-  TOTAL_CASE_MARGIN_PCT,
   type DiffusivityModelId,
+  fail,
+  isModelId,
+  type Range,
   type Result,
+  TOTAL_CASE_MARGIN_PCT,
 } from '../../physics';
 import { DEFAULT_SHIFT_CONFIG, type ShiftConfig } from '../../jobs/shiftNames';
-import { DEFAULT_BETA_M_PER_S } from '../../physics/cycle/recipe';
-import { DEFAULT_BETA_RANGE_M_PER_S, DEFAULT_TEMPERATURE_TOLERANCE_C, type Range } from '../../physics/uncertainty';
-import { checkBeta, checkCarbonPct, checkTemperatureTolerance } from '../../physics/validate';
-import { fail } from '../../physics/result';
 import { field, readField, readTemperatureDifferenceC, type FieldText } from '../ui/fieldText';
 import { persisted } from '../ui/persist';
 import { displayUnits, type UnitOverrides, type UnitSystem } from '../ui/units';

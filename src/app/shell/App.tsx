@@ -9,10 +9,10 @@ import './shell.css';
 
 export function App() {
   const id = route.value;
-  const first = useRef(true);
+  const firstRenderRef = useRef(true);
   useEffect(() => {
     // A new screen starts at its top (focus moves to its heading in ScreenView).
-    if (first.current) first.current = false;
+    if (firstRenderRef.current) firstRenderRef.current = false;
     else window.scrollTo(0, 0);
   }, [id]);
   return (

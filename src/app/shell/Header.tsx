@@ -1,8 +1,9 @@
 /** Top bar: the name, whether the app is ready offline, and the safety notes one tap away. */
 import { useT } from '../../i18n/useT';
 import { OfflineStatus } from '../../pwa/OfflineStatus';
-import { Icon } from '../ui/Icon';
+import { StrokeIcon } from '../ui/Icon';
 import { hrefFor, route } from './route';
+import { HEADER_SCREEN } from './screens';
 
 export function Header() {
   const t = useT();
@@ -16,9 +17,13 @@ export function Header() {
         <span class="brand-name">{t('app.name')}</span>
       </span>
       <OfflineStatus />
-      <a class="safety-link" href={hrefFor('safety')} aria-current={route.value === 'safety' ? 'page' : undefined}>
-        <Icon name="safety" />
-        <span>{t('app.nav.safety')}</span>
+      <a
+        class="safety-link"
+        href={hrefFor(HEADER_SCREEN.id)}
+        aria-current={route.value === HEADER_SCREEN.id ? 'page' : undefined}
+      >
+        <StrokeIcon path={HEADER_SCREEN.icon} />
+        <span>{t(`app.nav.${HEADER_SCREEN.id}`)}</span>
       </a>
     </header>
   );

@@ -1,6 +1,6 @@
 /** Bottom navigation within thumb reach; each item at least 48 px tall. */
 import { useT } from '../../i18n/useT';
-import { Icon } from '../ui/Icon';
+import { StrokeIcon } from '../ui/Icon';
 import { hrefFor, route } from './route';
 import { NAV_SCREENS, navItemOf } from './screens';
 
@@ -9,10 +9,10 @@ export function Nav() {
   return (
     <nav class="bottom-nav" aria-label={t('app.nav.label')}>
       <ul>
-        {NAV_SCREENS.map((id) => (
+        {NAV_SCREENS.map(({ id, icon }) => (
           <li key={id}>
             <a href={hrefFor(id)} aria-current={navItemOf(route.value) === id ? 'page' : undefined}>
-              <Icon name={id} />
+              <StrokeIcon path={icon} />
               <span>{t(`app.nav.${id}`)}</span>
             </a>
           </li>

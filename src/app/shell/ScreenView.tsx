@@ -7,14 +7,17 @@ import { signal } from '@preact/signals';
 import type { ComponentType } from 'preact';
 import { useEffect, useRef } from 'preact/hooks';
 import { fullLocale, useT, withFullLocale } from '../../i18n/useT';
-import type { ScreenId } from './route';
-import { FIRST_SCREEN, LOADERS } from './screens';
+import DepthScreen from '../depth/Screen';
+import { HOME, loaderOf, type ScreenId } from './screens';
 
-const loaded = signal<Partial<Record<ScreenId, ComponentType>>>({ depth: FIRST_SCREEN });
+/** The first bundle's screen (the table's `entry`); every other screen arrives as its chunk. */
+const loaded = signal<Partial<Record<ScreenId, ComponentType>>>({ [HOME]: DepthScreen });
 const failed = signal<Partial<Record<ScreenId, boolean>>>({});
 
-function load(id: Exclude<ScreenId, 'depth'>): void {
-  withFullLocale(LOADERS[id])()
+function load(id: ScreenId): void {
+  const loader = loaderOf(id);
+  if (!loader) return;
+  withFullLocale(loader)()
     .then((mod) => {
       loaded.value = { ...loaded.value, [id]: mod.default };
     })
@@ -25,16 +28,17 @@ function load(id: Exclude<ScreenId, 'depth'>): void {
 
 export function ScreenView({ id }: { id: ScreenId }) {
   const t = useT();
-  const Screen = id === 'depth' || fullLocale.value ? loaded.value[id] : undefined;
-  const shown = useRef<ScreenId | null>(null);
+  // The first screen's messages are the locale's first part; every other screen waits for the rest.
+  const Screen = id === HOME || fullLocale.value ? loaded.value[id] : undefined;
+  const shownRef = useRef<ScreenId | null>(null);
   useEffect(() => {
     if (!Screen) {
-      if (id !== 'depth') load(id);
+      load(id);
       return;
     }
     // After a navigation (not the first paint), once the screen is on the page, move focus to its heading.
-    if (shown.current !== null && shown.current !== id) document.querySelector<HTMLElement>('main h1')?.focus();
-    shown.current = id;
+    if (shownRef.current !== null && shownRef.current !== id) document.querySelector<HTMLElement>('main h1')?.focus();
+    shownRef.current = id;
   }, [id, Screen]);
   if (Screen) return <Screen />;
   return <p class="screen-loading">{failed.value[id] ? t('app.shell.loadFailed') : t('app.shell.loading')}</p>;

@@ -1,10 +1,6 @@
 /** Which screen is shown: a hash route (#/depth), so every screen works from the precached index.html. */
 import { signal } from '@preact/signals';
-
-export const SCREEN_IDS = ['depth', 'cycle', 'plan', 'recovery', 'log', 'convert', 'settings', 'safety'] as const;
-export type ScreenId = (typeof SCREEN_IDS)[number];
-
-export const HOME: ScreenId = 'depth';
+import { HOME, SCREEN_IDS, type ScreenId } from './screens';
 
 export function screenFromHash(hash: string): ScreenId {
   const id = hash.replace(/^#\/?/, '').split(/[/?]/)[0];

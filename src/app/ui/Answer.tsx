@@ -6,15 +6,23 @@ export interface AnswerProps {
   value: string | undefined;
   detail?: string | undefined;
   note?: string | undefined;
+  /** While a newer answer is worked out: the words of the small mark beside the one shown. */
+  updating?: string | undefined;
 }
 
-export function Answer({ label, value, detail, note }: AnswerProps) {
+export function Answer({ label, value, detail, note, updating }: AnswerProps) {
   return (
-    <div class="answer" aria-live="polite">
+    <div
+      class="answer"
+      aria-live="polite"
+      aria-busy={updating ? 'true' : undefined}
+      data-updating={updating ? '' : undefined}
+    >
       <span class="answer-label">{label}</span>
       <span class="answer-value" data-answer>
         {value ?? NO_VALUE}
       </span>
+      {updating && <span class="answer-updating">{updating}</span>}
       {detail && <span class="answer-detail">{detail}</span>}
       {note && <span class="answer-note">{note}</span>}
     </div>

@@ -19,6 +19,9 @@ export interface TextFieldProps {
   children?: ComponentChildren;
 }
 
+/** Preact splits input attributes by `type` into a union a union of types cannot match; each of ours is text-like. */
+const asTextInput = (type: NonNullable<TextFieldProps['type']>) => type as 'text';
+
 export function TextField({
   id,
   label,
@@ -38,8 +41,7 @@ export function TextField({
       <div class={error ? 'field-box field-box-invalid' : 'field-box'}>
         <input
           id={id}
-          // Preact's input types are split by `type`; every value here is a plain text-like input.
-          type={type as 'text'}
+          type={asTextInput(type)}
           autoComplete="off"
           autoCapitalize={autoCapitalize}
           spellcheck={false}

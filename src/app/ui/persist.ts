@@ -15,7 +15,7 @@ const PREFIX = 'casefront.';
 export function mergeDefaults<T>(defaults: T, stored: unknown): T {
   if (Array.isArray(defaults)) {
     if (!Array.isArray(stored)) return defaults;
-    const template = defaults[0];
+    const template: unknown = defaults[0];
     if (template === undefined) return defaults; // nothing to check items against
     const items = stored.filter((item) => sameKind(template, item)).map((item) => mergeDefaults(template, item));
     return items as T;

@@ -15,3 +15,11 @@ export function timed<T>(name: string, work: () => T): T {
     performance.measure(entry, { start, end: performance.now() });
   }
 }
+
+/** Records a computation timed elsewhere (in the worker) as the measure `casefront:<name>`, ending now. */
+export function recordMeasure(name: string, durationMs: number): void {
+  const entry = `casefront:${name}`;
+  if (performance.getEntriesByName(entry).length >= KEPT_MEASURES) performance.clearMeasures(entry);
+  const end = performance.now();
+  performance.measure(entry, { start: Math.max(0, end - durationMs), end });
+}

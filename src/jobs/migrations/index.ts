@@ -34,10 +34,11 @@ export const MIGRATIONS: readonly Migration[] = [
   {
     // The first release: the store, and indexes by creation time and furnace.
     version: 1,
-    async upgrade(db) {
+    upgrade(db) {
       const store = db.createObjectStore(JOBS_STORE, { keyPath: 'id' });
       store.createIndex(INDEX.createdAt, 'createdAt');
       store.createIndex(INDEX.furnace, 'furnace');
+      return Promise.resolve();
     },
   },
   {

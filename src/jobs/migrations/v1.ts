@@ -6,7 +6,7 @@
  * Kept for the upgrade of old databases; never written any more.
  */
 import * as v from 'valibot';
-import { findGrade } from '../../physics/grades';
+import { findGrade } from '../../physics';
 import { issuesOf } from '../issues';
 import { JobSchema, type Job } from '../schema';
 import type { FieldIssue } from '../result';
@@ -56,6 +56,8 @@ const V2_STATUS: Record<V1Status, Job['status']> = {
   rejected: 'rejected',
 };
 
+const isV1Status = (status: unknown): status is V1Status => (V1_STATUSES as readonly unknown[]).includes(status);
+
 const definedOnly = (obj: Record<string, unknown>) =>
   Object.fromEntries(Object.entries(obj).filter(([, value]) => value !== undefined));
 
@@ -97,7 +99,7 @@ export function jobFromV1(raw: unknown): { ok: true; job: Job } | { ok: false; i
       model: raw.model,
       appVersion: raw.appVersion,
     },
-    status: V2_STATUS[raw.status as V1Status] ?? raw.status,
+    status: isV1Status(raw.status) ? V2_STATUS[raw.status] : raw.status,
     ...(raw.labEcdMm === undefined || raw.labEcdMm === null ? {} : { lab: { ecdMm: raw.labEcdMm } }),
     notes: raw.notes,
   };

@@ -20,6 +20,7 @@ import {
   readModel,
   readNumber,
   readOptionalNumber,
+  shownValue,
   TEMPERATURE_LIMITS_C,
   type Fields,
 } from '../validate';
@@ -138,7 +139,7 @@ function readSize(fields: Fields, field: string): Result<number> {
 function readShape(raw: unknown): Result<PartShape> {
   if (raw === undefined || raw === null) return ok({ kind: 'semi-infinite' });
   const fields = asFields(raw);
-  if (!fields.ok) return fail('shape.unknown', 'kind', { kind: String(raw) });
+  if (!fields.ok) return fail('shape.unknown', 'kind', { kind: shownValue(raw) });
   const kind = fields.value.kind;
   if (kind === 'semi-infinite') return ok({ kind });
   if (kind === 'plate') {

@@ -66,7 +66,10 @@ const MAX_STEP_FACTOR = 4;
 const OVERSHOOT = 0.1;
 const MAX_EXPANSIONS = 40;
 
-export type Solved = { x: number; status: 'root' | 'belowRange' | 'aboveRange' };
+export interface Solved {
+  x: number;
+  status: 'root' | 'belowRange' | 'aboveRange';
+}
 
 /**
  * Root of an increasing g on [lo, hi]: trial steps from `start`, first by `propose(x, g(x))`,

@@ -43,7 +43,7 @@ function readPoint(raw: unknown, index: number, previous: TraversePoint | undefi
   if (depthMm < 0) return fail('traverse.depthNegative', 'depthMm', { point: pointNumber(index), value: depthMm });
   if (depthMm > MAX_TRAVERSE_DEPTH_MM)
     return fail('depth.tooDeep', 'depthMm', { value: depthMm, max: MAX_TRAVERSE_DEPTH_MM });
-  if (previous !== undefined && depthMm === previous.depthMm) {
+  if (depthMm === previous?.depthMm) {
     return fail('traverse.depthRepeated', 'depthMm', {
       point: pointNumber(index),
       previousPoint: pointNumber(index - 1),

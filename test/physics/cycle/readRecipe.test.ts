@@ -169,7 +169,10 @@ describe('readRecipe and simulateCycle: each bad input returns its code and fiel
         if (result.ok) throw new Error('expected an error');
         const own = result.error.code
           .split('.')
-          .reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].errors);
+          .reduce<unknown>(
+            (node, key) => (node as Record<string, unknown> | undefined)?.[key],
+            RESOURCES[language].errors,
+          );
         expect(typeof own, `${language} errors.${result.error.code}`).toBe('string');
         const message = errorMessage(t, result.error);
         expect(message).not.toBe(`errors.${result.error.code}`);

@@ -124,7 +124,10 @@ describe('cycle warnings', () => {
         seen.add(warning.code);
         const own = warning.code
           .split('.')
-          .reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].warnings);
+          .reduce<unknown>(
+            (node, key) => (node as Record<string, unknown> | undefined)?.[key],
+            RESOURCES[language].warnings,
+          );
         expect(typeof own, `${language} warnings.${warning.code}`).toBe('string');
         expect(warningMessage(t, warning)).not.toMatch(/\{\{/);
       }

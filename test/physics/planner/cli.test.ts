@@ -4,7 +4,11 @@ import { roundOutput, runCli } from '../../../src/cli';
 import { planTwoStepCycle } from '../../../src/physics/planner/planner';
 import { pinionWith, readExample } from './fixtures';
 
-type Worded = { code: string; params?: Record<string, unknown>; message: string };
+interface Worded {
+  code: string;
+  params?: Record<string, unknown>;
+  message: string;
+}
 
 describe('CLI `plan`', () => {
   it.each(['pinion-kr2231-plan.json', 'shaft-kr4410-plan.json'])(

@@ -305,7 +305,10 @@ describe('findings are worded in every language', () => {
     for (const finding of findings) {
       const own = finding.code
         .split('.')
-        .reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].warnings);
+        .reduce<unknown>(
+          (node, key) => (node as Record<string, unknown> | undefined)?.[key],
+          RESOURCES[language].warnings,
+        );
       expect(typeof own, `${language} warnings.${finding.code}`).toBe('string');
       const message = warningMessage(t, finding);
       expect(message).not.toMatch(/\{\{/);
@@ -318,7 +321,10 @@ describe('findings are worded in every language', () => {
       const placeholders = LANGUAGES.map((language) => {
         const text = code
           .split('.')
-          .reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].warnings);
+          .reduce<unknown>(
+            (node, key) => (node as Record<string, unknown> | undefined)?.[key],
+            RESOURCES[language].warnings,
+          );
         expect(typeof text, `${language} warnings.${code}`).toBe('string');
         return [...(text as string).matchAll(/\{\{(\w+)\}\}/g)].map((m) => m[1]).sort();
       });

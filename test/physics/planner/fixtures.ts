@@ -3,7 +3,7 @@ import { readFileSync } from 'node:fs';
 import { expect } from 'vitest';
 import { runCycle } from '../../../src/physics/cycle/simulate';
 import type { Recipe, SimulationResult } from '../../../src/physics/cycle/recipe';
-import { DIFFUSIVITY_MODELS, MODEL_CALIBRATED_RANGE, type DiffusivityModelId } from '../../../src/physics/diffusivity';
+import { DIFFUSIVITY_MODELS, MODEL_CALIBRATED_RANGE } from '../../../src/physics/diffusivity';
 import { saturationFinding } from '../../../src/physics/planner/findings';
 import { readPlanRequest, type PlanRequest } from '../../../src/physics/planner/readPlanRequest';
 import type { Warning } from '../../../src/physics/result';
@@ -23,13 +23,16 @@ export const pinionWith = (patch: Record<string, unknown>): Record<string, unkno
 
 /** The recipe simulated forward at the simulator's default resolution, D scaled by the furnace factor. */
 export function forward(recipe: Recipe, factor = 1, resolution = 1): SimulationResult {
-  const model = DIFFUSIVITY_MODELS[(recipe.model ?? 'agren') as DiffusivityModelId].diffusivity;
+  const model = DIFFUSIVITY_MODELS[recipe.model ?? 'agren'].diffusivity;
   return runCycle(recipe, resolution, { diffusivity: (tempK, carbonPct) => factor * model(tempK, carbonPct) });
 }
 
 export const within = (value: number, range: { min: number; max: number }) => value >= range.min && value <= range.max;
 
-type Step = { temperatureC: number; carbonPotentialPct: number };
+interface Step {
+  temperatureC: number;
+  carbonPotentialPct: number;
+}
 
 /** A suggestion applied to a copy of the request it was made for; undefined for one that names no new value. */
 function applied(request: Record<string, unknown>, suggestion: Warning): Record<string, unknown> | undefined {

@@ -179,7 +179,7 @@ function requestFor(c: Cycle): Omit<PlanRequest, 'targetEcdMm' | 'targetSurfaceC
     steel: { coreCarbonPct: c.coreCarbonPct, ...(grade ? { composition: grade.composition } : {}) },
     model: c.model,
     thresholdCarbonPct: 0.4,
-    shape: c.shape as PlanRequest['shape'],
+    shape: c.shape,
     boost: { temperatureC: c.boostC, carbonPotentialPct: c.boostPct, betaMPerS: 1.5e-7 },
     diffuse: { temperatureC: c.diffuseC, carbonPotentialPct: c.diffusePct, betaMPerS: 1.5e-7 },
     ...(c.hardening ? { hardening: c.hardening } : {}),

@@ -193,7 +193,10 @@ describe('readPlanRequest: every error path returns its key and field', () => {
         if (result.ok) throw new Error('expected an error');
         const own = result.error.code
           .split('.')
-          .reduce<unknown>((node, key) => (node as Record<string, unknown>)?.[key], RESOURCES[language].errors);
+          .reduce<unknown>(
+            (node, key) => (node as Record<string, unknown> | undefined)?.[key],
+            RESOURCES[language].errors,
+          );
         expect(typeof own, `${language} errors.${result.error.code}`).toBe('string');
         expect(errorMessage(t, result.error)).not.toMatch(/\{\{/);
       }

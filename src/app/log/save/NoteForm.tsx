@@ -2,12 +2,12 @@
 import { useEffect, useRef, useState } from 'preact/hooks';
 import { addDays, describeJobsError, OPEN_STATUSES, type Job } from '../../../jobs';
 import { ChoiceField } from '../../ui/ChoiceField';
-import { useScreenContext } from '../../ui/screenContext';
+import { useScreenContext } from '../../settings/screenContext';
 import { writeToLog } from '../db';
 import { formatClockTime } from '../dates';
 import { FormActions } from '../FormActions';
 import { currentShift } from '../shifts';
-import { useLogRead } from '../useLog';
+import { useJobList } from '../useLog';
 import type { PanelProps } from './LogActions';
 import '../log.css';
 
@@ -19,10 +19,7 @@ export function appendLine(notes: string, line: string): string {
 export default function NoteForm({ value: note, onDone }: PanelProps<string>) {
   const { t, locale } = useScreenContext();
   const { shiftDate } = currentShift();
-  const open = useLogRead(
-    (store) => store.list({ fromDate: addDays(shiftDate, -1), status: OPEN_STATUSES }),
-    [shiftDate],
-  );
+  const open = useJobList({ fromDate: addDays(shiftDate, -1), status: OPEN_STATUSES });
   const [chosen, setChosen] = useState('');
   const [error, setError] = useState<string | undefined>(undefined);
   const [busy, setBusy] = useState(false);

@@ -2,7 +2,7 @@
 import { useEffect, useRef, useState } from 'preact/hooks';
 import { persisted, patch } from '../../ui/persist';
 import { ResultList } from '../../ui/ResultList';
-import { useScreenContext } from '../../ui/screenContext';
+import { useScreenContext } from '../../settings/screenContext';
 import { askPersistenceOnce, writeToLog } from '../db';
 import { formatCalendarDate } from '../dates';
 import type { LogEntry } from '../entry';
@@ -32,11 +32,12 @@ export default function SaveForm({ value: entry, onDone }: PanelProps<LogEntry>)
   const [placed, setPlaced] = useState<PlacedErrors | undefined>(undefined);
   const [busy, setBusy] = useState(false);
   const title = useRef<HTMLHeadingElement>(null);
+  const calculatorFurnace = entry?.furnace;
   useEffect(() => {
     // The furnace chosen in the calculator is the one this load runs in.
-    if (entry?.furnace) patch(draft, { furnace: entry.furnace });
-    title.current?.focus();
-  }, []);
+    if (calculatorFurnace) patch(draft, { furnace: calculatorFurnace });
+  }, [calculatorFurnace]);
+  useEffect(() => title.current?.focus(), []);
   if (!entry) return null;
   const wording = { t, show: ctx.show, locale };
 

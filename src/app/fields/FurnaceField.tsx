@@ -1,9 +1,9 @@
 /** The furnace a calculation is for: one choice shared by the calculators, shown once a furnace has a calibration. */
 import type { DiffusivityModelId } from '../../physics';
 import { calibrations, calibrationState, chosenFurnace } from '../settings/calibration';
-import { calibrationWords } from './calibration';
-import { ChoiceField } from './ChoiceField';
-import type { ScreenContext } from './screenContext';
+import { calibrationWords } from './calibrationWords';
+import { ChoiceField } from '../ui/ChoiceField';
+import type { ScreenContext } from '../settings/screenContext';
 
 export function FurnaceField({ id, model, ctx }: { id: string; model: DiffusivityModelId; ctx: ScreenContext }) {
   const { t, show } = ctx;

@@ -1,8 +1,8 @@
 /** The likely range of an effective case depth as a result row: the band, and its parts in the detail. */
 import type { TFunction } from 'i18next';
 import type { DepthBand } from '../../physics';
-import type { ResultRow } from './ResultList';
-import type { Show } from './show';
+import type { ResultRow } from '../ui/ResultList';
+import type { Show } from '../ui/show';
 
 export function bandRow(band: DepthBand, t: TFunction, show: Show): ResultRow {
   const parts = [

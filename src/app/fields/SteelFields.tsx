@@ -1,9 +1,9 @@
 /** Steel grade (nominal composition, flagged as such) or a custom composition, and core carbon. */
 import { ALLOY_ELEMENTS, findGrade, STEEL_GRADES, type InputError } from '../../physics';
 import { language, useT } from '../../i18n/useT';
-import { ChoiceField } from './ChoiceField';
-import { formatQuantity, UNIT_SYMBOLS } from './format';
-import { NumberField } from './NumberField';
+import { ChoiceField } from '../ui/ChoiceField';
+import { formatQuantity, UNIT_SYMBOLS } from '../ui/format';
+import { NumberField } from '../ui/NumberField';
 import { chooseGrade, CUSTOM_STEEL, type SteelForm } from './steel';
 
 export interface SteelFieldsProps {

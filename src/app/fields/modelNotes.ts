@@ -10,7 +10,7 @@ import {
   modelSpread,
   type DiffusivityModelId,
 } from '../../physics';
-import type { Show } from './show';
+import type { Show } from '../ui/show';
 
 let spread: ReturnType<typeof modelSpread> | undefined;
 /** The spread is a property of the models, worked out once. */

@@ -1,9 +1,9 @@
 /** A calculation's own diffusivity model, or the one in the settings (the empty choice). */
 import { MODEL_IDS } from '../../physics';
 import { model } from '../settings/state';
-import { ChoiceField } from './ChoiceField';
+import { ChoiceField } from '../ui/ChoiceField';
 import { wellsBatzMehlNote } from './modelNotes';
-import type { ScreenContext } from './screenContext';
+import type { ScreenContext } from '../settings/screenContext';
 
 export function ModelField({
   id,

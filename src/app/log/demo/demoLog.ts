@@ -3,12 +3,12 @@
  * KR-2231, KR-4410, KR-0907, shifts A/B/C, operators by initials). Deterministic for a seed.
  * Predictions come from the physics engine; "lab" depths are the prediction with an invented
  * per-furnace offset and scatter, so the comparison screens have something to show.
+ *
+ * Nothing of it reaches a real log unasked: the app loads this module only through the log's
+ * "load demo data" action (import() from the files view), and the tests use it as a fixture.
  */
-import { timeForCaseDepth, type TimeResult } from '../physics/caseDepth';
-import { findGrade } from '../physics/grades';
-import { mulberry32 } from '../physics/random';
-import type { Job, JobStatus } from './schema';
-import { DEFAULT_SHIFT_CONFIG, shiftOf, type ShiftConfig } from './shift';
+import { DEFAULT_SHIFT_CONFIG, shiftOf, type Job, type JobStatus, type ShiftConfig } from '../../../jobs';
+import { findGrade, mulberry32, timeForCaseDepth, type TimeResult } from '../../../physics';
 
 export interface DemoOptions {
   count: number;
@@ -57,11 +57,12 @@ const PARTS: readonly DemoPart[] = [
   },
 ];
 
-/** Part numbers of the demo plant, offered as quick picks when a job is logged. */
+/** Part numbers of the demo plant. */
 export const DEMO_PART_NUMBERS: readonly string[] = PARTS.map((p) => p.partNumber);
 
-const OPERATORS = ['MK', 'JR', 'AT', 'LS', 'PW', 'DN', 'EH', 'RB', 'CO'];
-const LAB_INITIALS = ['QL', 'HV', 'TS'];
+// Initials only (DOMAIN §5), none of them a trade abbreviation (HV, CO, AT, HRC…).
+const OPERATORS = ['MK', 'JR', 'AL', 'LS', 'PW', 'DN', 'EH', 'RB', 'CG'];
+const LAB_INITIALS = ['QL', 'WN', 'TF'];
 const NOTES = [
   '',
   '',
@@ -75,7 +76,7 @@ const NOTES = [
 ];
 /** Invented furnace offsets of the lab depth against the prediction. */
 const FURNACE_BIAS: Record<string, number> = { F1: 0.02, F2: -0.04, F3: 0.0 };
-/** The demo plant's furnaces, offered as quick picks when a job is logged. */
+/** The demo plant's furnaces. */
 export const DEMO_FURNACES: readonly string[] = Object.keys(FURNACE_BIAS);
 
 function uuidFrom(random: () => number): string {

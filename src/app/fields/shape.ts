@@ -1,8 +1,8 @@
 /** The part's shape in a cycle form (cycle editor and planner): the kind, and a plate's thickness or a bar's diameter. */
 import { fail, type PartShape } from '../../physics';
-import { readField, type FieldText } from './fieldText';
-import type { FieldReader } from './outcome';
-import { PHYSICS_UNITS } from './units';
+import { readField, type FieldText } from '../ui/fieldText';
+import type { FieldReader } from '../ui/outcome';
+import { PHYSICS_UNITS } from '../ui/units';
 
 export const SHAPES = ['semi-infinite', 'plate', 'bar'] as const;
 export type ShapeKind = (typeof SHAPES)[number];

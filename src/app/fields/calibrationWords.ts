@@ -1,7 +1,7 @@
 /** A furnace's calibration in words, for every result it touches and for the furnace choice. */
 import type { TFunction } from 'i18next';
 import type { CalibrationState } from '../settings/calibration';
-import type { Show } from './show';
+import type { Show } from '../ui/show';
 
 export interface CalibrationWords {
   /** The whole sentence ("Calibrated for F1: D × 1.08 (95 %: 1.02–1.15, 7 jobs)"). */

@@ -3,7 +3,7 @@
  * (nominal composition) or a custom composition, and core carbon.
  */
 import { ALLOY_ELEMENTS, findGrade, fail, ok, type Composition, type Result } from '../../physics';
-import { field, readField, type FieldText } from './fieldText';
+import { field, readField, type FieldText } from '../ui/fieldText';
 
 export const CUSTOM_STEEL = 'custom';
 

@@ -1,6 +1,6 @@
 import * as v from 'valibot';
 import { describe, expect, it } from 'vitest';
-import { demoJobs } from '../../src/jobs/demo';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import { JobSchema } from '../../src/jobs/schema';
 import { summarizeShift } from '../../src/jobs/summary';
 

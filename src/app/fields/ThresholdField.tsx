@@ -1,10 +1,10 @@
 /** The ECD threshold carbon of a form; empty means the default from the settings (shown as the placeholder). */
 import { useT } from '../../i18n/useT';
 import { defaults } from '../settings/state';
-import type { FieldText } from './fieldText';
-import { UNIT_SYMBOLS } from './format';
-import { NumberField } from './NumberField';
-import type { Show } from './show';
+import type { FieldText } from '../ui/fieldText';
+import { UNIT_SYMBOLS } from '../ui/format';
+import { NumberField } from '../ui/NumberField';
+import type { Show } from '../ui/show';
 
 export interface ThresholdFieldProps {
   id: string;

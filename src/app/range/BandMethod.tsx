@@ -1,8 +1,9 @@
 /** "How this range is worked out": the method of the likely range in plain words, one tap away. */
 import { useT } from '../../i18n/useT';
 import { defaults } from '../settings/state';
-import { UNIT_SYMBOLS } from './format';
-import type { Show } from './show';
+import { UNIT_SYMBOLS } from '../ui/format';
+import type { Show } from '../ui/show';
+import './range.css';
 
 /** β is shown in the unit it is typed in (10⁻⁷ m/s). */
 const BETA_SHOWN = 1e-7;

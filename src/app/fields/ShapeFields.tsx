@@ -1,8 +1,8 @@
 /** Part shape and, for a plate or a bar, its size. */
-import { ChoiceField } from './ChoiceField';
-import type { FieldText } from './fieldText';
-import { NumberField } from './NumberField';
-import type { ScreenContext } from './screenContext';
+import { ChoiceField } from '../ui/ChoiceField';
+import type { FieldText } from '../ui/fieldText';
+import { NumberField } from '../ui/NumberField';
+import type { ScreenContext } from '../settings/screenContext';
 import { SHAPES } from './shape';
 
 export interface ShapeFieldsProps {

@@ -107,8 +107,9 @@ describe('cycle editor', () => {
       'chart chunk loaded on demand',
     );
     assert.equal(await page.locator('table.numbers tbody tr').count(), 11);
+    // A duration field takes 1:20 or 80 min besides a number, and says so when the text is neither.
     await page.fill('li.step >> nth=2 >> input[id$="-duration"]', 'zwei');
-    assert.match((await page.locator('li.step >> nth=2 >> .field-error').textContent()) ?? '', /not a number/);
+    assert.match((await page.locator('li.step >> nth=2 >> .field-error').textContent()) ?? '', /“zwei” is not a time/);
     assert.deepEqual(foreignRequests(recorder), []);
     assert.deepEqual(recorder.problems, []);
     await close();

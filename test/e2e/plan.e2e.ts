@@ -274,7 +274,8 @@ describe('depth correction from lab results', () => {
         await page.goto(`${BASE_URL}#/${id}`);
         await page.waitForSelector(`#${id}-furnace`);
         assert.equal(await page.inputValue(`#${id}-furnace`), 'F1', 'one furnace choice for every calculator');
-        await page.waitForSelector(`[data-result="calibration"]:has-text("${note}")`);
+        const speed = language === 'en' ? 'diffusion speed × 1.21' : 'velocidad de difusión × 1,21';
+        await page.waitForSelector(`[data-result="calibration"]:has-text("${speed}")`);
         assert.equal(await page.textContent('.answer-note'), note);
       }
       await page.screenshot({ path: `test-results/${language}-plan-calibrated.png` });

@@ -4,6 +4,8 @@
  */
 import uPlot from 'uplot';
 import 'uplot/dist/uPlot.min.css';
+import { language } from '../../i18n/useT';
+import { formatNumber } from '../ui/format';
 
 export interface ProfileChartData {
   depth: number[];
@@ -26,6 +28,18 @@ export interface ProfileChartData {
   };
 }
 
+/**
+ * Tick labels in the app's language, with as many decimals as the tick spacing needs (uPlot's
+ * own would use the browser's language, and its number format costs a long task to make).
+ */
+function tickLabels(_u: uPlot, splits: number[]): string[] {
+  const spacing = splits.length > 1 ? Math.abs(splits[1]! - splits[0]!) : 1;
+  // The decimals of the spacing (0.25 → 2, 5 → 0), read off its text to ten places.
+  const digits = Math.min(6, spacing.toFixed(10).replace(/0+$/, '').split('.')[1]?.length ?? 0);
+  const locale = language.peek();
+  return splits.map((v) => formatNumber(v, locale, { digits, grouping: false }));
+}
+
 const cssVar = (name: string) => getComputedStyle(document.documentElement).getPropertyValue(name).trim() || '#888';
 
 /** `shown()` is the data drawn now: the ECD mark reads it on every draw, so new data needs no new chart. */
@@ -44,6 +58,7 @@ function options(shown: () => ProfileChartData, width: number): uPlot.Options {
     ticks: { stroke: grid },
     font: '13px system-ui, sans-serif',
     labelFont: '600 13px system-ui, sans-serif',
+    values: tickLabels,
     // eslint-disable-next-line @typescript-eslint/no-unsafe-enum-assignment -- uPlot's Side is an ambient const enum, which isolated modules cannot name; its values are 0–3.
     ...(side === undefined ? {} : { side }),
   });

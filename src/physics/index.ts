@@ -26,7 +26,6 @@ export {
   carbonDependence,
   isModelId,
   modelSpread,
-  scaledDiffusivity,
   type DiffusivityModelId,
 } from './diffusivity';
 export {
@@ -76,6 +75,7 @@ export {
   checkTemperatureC,
   checkTemperatureTolerance,
   checkTimeH,
+  checkTotalCaseMargin,
 } from './validate';
 export {
   caseDepth,
@@ -108,6 +108,7 @@ export {
   type SimulationResult,
 } from './cycle/recipe';
 export { readRecipe } from './cycle/readRecipe';
+export { LIMITS, MAX_STEPS, TEXT_LENGTH_LIMITS, checkLimit, withinLimit, type Limit, type ValueUnit } from './limits';
 export { runCycle, simulateCycle } from './cycle/simulate';
 export { cycleDepthBand, type CycleBand, type CycleBandOptions } from './cycle/band';
 /** Reproducible pseudo-random numbers, for synthetic data (the demo log), never for anything secret. */

@@ -67,6 +67,7 @@ export const ERROR_CODES = [
   'range.minAboveMax',
   'carbon.boostNotAboveDiffuse',
   'time.limitTooShort',
+  'text.tooLong',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -150,7 +150,8 @@ function readShape(raw: unknown): Result<PartShape> {
     const diameterMm = readSize(fields.value, 'diameterMm');
     return diameterMm.ok ? ok({ kind, diameterMm: diameterMm.value }) : diameterMm;
   }
-  return fail('shape.unknown', 'kind', { kind: String(kind) });
+  if (kind === undefined || kind === null || kind === '') return fail('field.missing', 'kind');
+  return fail('shape.unknown', 'kind', { kind: shownValue(kind) });
 }
 
 /** Everything of a cycle request but its steps: shared by `simulate` and `plan`. */

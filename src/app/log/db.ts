@@ -4,12 +4,15 @@
  * and a change counter that every view reloads on, bumped by writes here and in other tabs.
  */
 import { signal } from '@preact/signals';
+import PouchDB from 'pouchdb-browser';
 import {
   openJobStore,
   persistentStorageStatus,
   requestPersistentStorage,
+  failWith,
   type JobsResult,
   type JobStore,
+  type LogDatabase,
   type PersistOutcome,
 } from '../../jobs';
 import { persisted } from '../ui/persist';
@@ -29,11 +32,15 @@ export function announceChange(): void {
   channel?.postMessage('changed');
 }
 
+/** The browser's document database (IndexedDB underneath). */
+const browserPouch = (name: string) => new PouchDB(name) as unknown as LogDatabase;
+
 /** The open store; a failed or closed one is opened again on the next call. */
 export async function jobStore(): Promise<JobsResult<JobStore>> {
   const current = opening ? await opening : undefined;
   if (current?.ok && !current.value.closed) return current;
-  opening = openJobStore();
+  if (typeof indexedDB === 'undefined') return failWith('storage.unavailable');
+  opening = openJobStore({ pouch: browserPouch });
   const result = await opening;
   if (!result.ok) opening = undefined;
   return result;

@@ -89,7 +89,7 @@ export function editedDoc(
   for (const field of TRACKED_FIELDS) {
     if (sameValue(doc.job[field], next[field]) && !options.settle?.includes(field)) continue;
     versions[field] = [newVersionId(), ...(versions[field] ?? [])].slice(0, MAX_FIELD_VERSIONS);
-    delete open[field];
+    Reflect.deleteProperty(open, field);
   }
   const edited: JobDoc = { ...doc, job: next, versions };
   if (Object.keys(open).length > 0) edited.open = open;

@@ -61,7 +61,7 @@ function distinctValues(alternatives: readonly Alternative[]): Alternative[] {
 }
 
 function setField(target: Record<string, unknown>, field: string, value: unknown): void {
-  if (value === undefined) delete target[field];
+  if (value === undefined) Reflect.deleteProperty(target, field);
   else target[field] = value;
 }
 
@@ -82,10 +82,10 @@ export function mergeDocs(a: JobDoc, b: JobDoc, bHistoryKnown = true): MergeOutc
   const takeB = (field: string) => {
     setField(job, field, b.job[field]);
     if (vb[field]) versions[field] = vb[field];
-    else delete versions[field];
+    else Reflect.deleteProperty(versions, field);
     const bOpen = b.open?.[field];
     if (bOpen) open[field] = bOpen;
-    else delete open[field];
+    else Reflect.deleteProperty(open, field);
     fromB.push(field);
   };
 
@@ -111,7 +111,7 @@ export function mergeDocs(a: JobDoc, b: JobDoc, bHistoryKnown = true): MergeOutc
     const alternatives = distinctValues([...alternativesOf(a, field, va), ...alternativesOf(b, field, vb)]);
     open[field] = alternatives;
     const mergeId = stableId(
-      [ha ?? '', hb ?? '', ...alternatives.map((alt) => JSON.stringify(alt.value) ?? '')].sort().join('|'),
+      [ha ?? '', hb ?? '', ...alternatives.map((alt) => JSON.stringify(alt.value ?? null))].sort().join('|'),
     );
     versions[field] = unique([mergeId, ha, hb, ...fa, ...fb]).slice(0, MAX_FIELD_VERSIONS);
     conflicted.push(field);

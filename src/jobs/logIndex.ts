@@ -58,7 +58,7 @@ export class LogIndex {
       return;
     }
     const job = parsed.output;
-    const open = (isJobDoc(doc) && doc.open) || {};
+    const open = isJobDoc(doc) ? (doc.open ?? {}) : {};
     const entry: JobEntry = { job, rev: doc._rev ?? '', open, versions: versionsOf(doc as { versions?: unknown }) };
     if (typeof doc.changedBy === 'string' && doc.changedBy) entry.changedBy = doc.changedBy;
     this.#jobs.set(id, { entry, text: searchableText(job) });

@@ -90,5 +90,5 @@ export interface PouchError {
 }
 
 export function pouchError(error: unknown): PouchError {
-  return typeof error === 'object' && error !== null ? (error as PouchError) : { message: String(error) };
+  return typeof error === 'object' && error !== null ? error : { message: String(error) };
 }

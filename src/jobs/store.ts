@@ -90,7 +90,7 @@ function isConflict(error: unknown): boolean {
   return pouchError(error).status === 409;
 }
 
-function writeFailure<T>(result: WriteResult | unknown): JobsResult<T> {
+function writeFailure<T>(result: WriteResult): JobsResult<T> {
   return storageFailure(result);
 }
 
@@ -191,7 +191,7 @@ export class JobStore {
       const { _conflicts: _ignored, ...body } = merged;
       const by = this.user();
       const writes: StoredDoc[] = [
-        { ...body, _id: id, _rev: parent._rev!, ...(by ? { changedBy: by } : {}) } as unknown as StoredDoc,
+        { ...body, _id: id, _rev: parent._rev!, ...(by ? { changedBy: by } : {}) },
         ...[winner, ...losers]
           .filter((leaf) => leaf._rev !== parent._rev)
           .map((leaf) => ({
@@ -281,9 +281,11 @@ export class JobStore {
   }
 
   /**
-   * Applies an edit. With `baseRev`, the edit is refused as `record.stale` when the job has changed
-   * since that revision (the fields changed meanwhile are named); without it (a one-tap change, a
-   * repair), it is applied to the job as it is now, retried if another writer came in between.
+   * Applies an edit. With `baseRev` (the revision the form or the tap started from), the edit is
+   * refused as `record.stale` when a field it writes has changed since that revision (those fields are
+   * named), so it never goes over a newer value; changes meanwhile to other fields stay, as a merge
+   * of different fields would keep them. Without `baseRev` (a repair, a restore), it is applied to the
+   * job as it is now. Either way it is redone if another writer came in between.
    */
   async update(id: string, changes: unknown, options: EditOptions = {}): Promise<JobsResult<Job>> {
     const parsed = v.safeParse(JobChangesSchema, tidyEntry(changes));
@@ -308,17 +310,26 @@ export class JobStore {
     );
   }
 
-  async #staleIssues(id: string, baseRev: string, current: JobDoc): Promise<FieldIssue[]> {
+  /**
+   * The fields among `written` that changed between the revision `baseRev` and `current`; every one
+   * of them when that revision can no longer be read (it is then unknown what changed).
+   */
+  async #changedMeanwhile(
+    id: string,
+    baseRev: string,
+    current: JobDoc,
+    written: readonly string[],
+  ): Promise<FieldIssue[]> {
+    let base: StoredDoc | undefined;
     try {
-      const base = await this.db.get(id, { rev: baseRev });
-      if (!isJobDoc(base)) return [];
-      return TRACKED_FIELDS.filter((field) => !sameValue(base.job[field], current.job[field])).map((field) => ({
-        path: field,
-        problem: 'changedMeanwhile' as const,
-      }));
+      base = await this.db.get(id, { rev: baseRev });
     } catch {
-      return [];
+      base = undefined;
     }
+    const fields = TRACKED_FIELDS.filter(
+      (field) => written.includes(field) && (!isJobDoc(base) || !sameValue(base.job[field], current.job[field])),
+    );
+    return fields.map((field) => ({ path: field, problem: 'changedMeanwhile' as const }));
   }
 
   /** Runs writes of this tab one after another, so they contend only with other tabs and devices. */
@@ -331,7 +342,11 @@ export class JobStore {
     return run;
   }
 
-  #edit(id: string, changesFor: (raw: JobDoc) => JobsResult<JobChanges>, options: EditOptions): Promise<JobsResult<Job>> {
+  #edit(
+    id: string,
+    changesFor: (raw: JobDoc) => JobsResult<JobChanges>,
+    options: EditOptions,
+  ): Promise<JobsResult<Job>> {
     return this.#serial(() => this.#editNow(id, changesFor, options));
   }
 
@@ -346,11 +361,13 @@ export class JobStore {
       for (let attempt = 0; attempt < WRITE_ATTEMPTS; attempt++) {
         const current = await this.#getDoc(id);
         if (!current || !isJobDoc(current)) return failWith('record.notFound', { id });
-        if (options.baseRev !== undefined && current._rev !== options.baseRev) {
-          return failWith('record.stale', { id }, await this.#staleIssues(id, options.baseRev, current));
-        }
         const changes = changesFor(current);
         if (!changes.ok) return changes;
+        if (options.baseRev !== undefined && current._rev !== options.baseRev) {
+          const written = [...Object.keys(changes.value), ...(options.settle ?? [])];
+          const clash = await this.#changedMeanwhile(id, options.baseRev, current, written);
+          if (clash.length > 0) return failWith('record.stale', { id }, clash);
+        }
         const merged = applyChanges(current.job, changes.value);
         merged.updatedAt = nextTimestamp(now, current.job.updatedAt);
         const job = v.safeParse(JobSchema, merged);
@@ -361,11 +378,6 @@ export class JobStore {
           if (!result.ok) return writeFailure(result);
         } catch (error) {
           if (!isConflict(error)) throw error;
-          if (options.baseRev !== undefined) {
-            const now2 = await this.#getDoc(id);
-            const issues = now2 && isJobDoc(now2) ? await this.#staleIssues(id, options.baseRev, now2) : [];
-            return failWith('record.stale', { id }, issues);
-          }
           // Another tab wrote in between: wait a moment (so two tabs do not keep colliding), then redo.
           await new Promise((resolve) => setTimeout(resolve, Math.random() * 5 * (attempt + 1)));
           continue;
@@ -399,7 +411,10 @@ export class JobStore {
     const kept = await this.#damaged();
     return this.#read(() => ({
       jobs: this.#index.list(filter),
-      corrupt: [...this.#index.corrupt, ...kept.map(({ key, issues }) => ({ key, issues, source: 'migration' as const }))],
+      corrupt: [
+        ...this.#index.corrupt,
+        ...kept.map(({ key, issues }) => ({ key, issues, source: 'migration' as const })),
+      ],
     }));
   }
 
@@ -480,7 +495,7 @@ export class JobStore {
           if (!current || !isJobDoc(current)) {
             report.added += current ? 0 : 1;
             report.updated += current ? 1 : 0;
-            writes.push({ ...fileDoc, ...(current?._rev ? { _rev: current._rev } : {}) } as unknown as StoredDoc);
+            writes.push({ ...fileDoc, ...(current?._rev ? { _rev: current._rev } : {}) });
             return;
           }
           const { doc, conflicted } = mergeDocs(current, fileDoc, history !== undefined);
@@ -495,7 +510,7 @@ export class JobStore {
           }
           report.updated++;
           const { _conflicts: _ignored, ...body } = doc;
-          writes.push({ ...body, _rev: current._rev!, ...(by ? { changedBy: by } : {}) } as unknown as StoredDoc);
+          writes.push({ ...body, _rev: current._rev!, ...(by ? { changedBy: by } : {}) });
         });
         if (writes.length > 0) {
           const results = await this.db.bulkDocs(writes);

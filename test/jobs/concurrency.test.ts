@@ -63,17 +63,21 @@ describe('two tabs saving at the same time', () => {
     tab2.close();
   });
 
-  it('a form opened in one tab is refused after the other tab saved the job, naming what changed meanwhile', async () => {
+  it('a form left open in one tab never writes over what the other tab saved meanwhile', async () => {
     const [tab1, tab2] = await twoTabs();
     const job = unwrap(await tab1.add(pinionDraft()));
     const opened = unwrap(await tab2.entry(job.id));
     unwrap(await tab1.update(job.id, { notes: 'Coupon moved to basket 2.' }, { baseRev: opened.rev }));
-    const stale = await tab2.update(job.id, { furnace: 'F3' }, { baseRev: opened.rev });
+    // The same field from the old revision: refused, the field named, nothing written.
+    const stale = await tab2.update(job.id, { notes: 'Coupon in basket 3.', furnace: 'F3' }, { baseRev: opened.rev });
     expect(stale).toEqual({
       ok: false,
       error: { code: 'record.stale', params: { id: job.id }, issues: [{ path: 'notes', problem: 'changedMeanwhile' }] },
     });
     expect(unwrap(await tab2.get(job.id))).toMatchObject({ notes: 'Coupon moved to basket 2.', furnace: 'F1' });
+    // Another field from the old revision: applied, and the other tab's note stays.
+    unwrap(await tab2.update(job.id, { furnace: 'F3' }, { baseRev: opened.rev }));
+    expect(unwrap(await tab1.get(job.id))).toMatchObject({ notes: 'Coupon moved to basket 2.', furnace: 'F3' });
     tab1.close();
     tab2.close();
   });

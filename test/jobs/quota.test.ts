@@ -24,7 +24,7 @@ const quotaError = () =>
 
 interface Faults {
   /** The error the next writes fail with; undefined: writes work. */
-  next?: () => unknown;
+  next?: () => Error;
 }
 
 async function storeWithFaults(): Promise<{ store: JobStore; faults: Faults; jobs: Job[] }> {

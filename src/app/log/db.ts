@@ -4,7 +4,6 @@
  * and a change counter that every view reloads on, bumped by writes here and in other tabs.
  */
 import { signal } from '@preact/signals';
-import PouchDB from 'pouchdb-browser';
 import {
   openJobStore,
   persistentStorageStatus,
@@ -32,15 +31,21 @@ export function announceChange(): void {
   channel?.postMessage('changed');
 }
 
-/** The browser's document database (IndexedDB underneath). */
-const browserPouch = (name: string) => new PouchDB(name) as unknown as LogDatabase;
+/** The browser's document database (IndexedDB underneath), loaded with the first use of the log. */
+async function browserPouch(): Promise<(name: string) => LogDatabase> {
+  const { default: PouchDB } = await import('pouchdb-browser');
+  return (name) => new PouchDB(name) as LogDatabase;
+}
 
 /** The open store; a failed or closed one is opened again on the next call. */
 export async function jobStore(): Promise<JobsResult<JobStore>> {
   const current = opening ? await opening : undefined;
   if (current?.ok && !current.value.closed) return current;
   if (typeof indexedDB === 'undefined') return failWith('storage.unavailable');
-  opening = openJobStore({ pouch: browserPouch });
+  opening = browserPouch().then(
+    (pouch) => openJobStore({ pouch }),
+    () => failWith<JobStore>('storage.failed', { name: 'LoadFailed' }),
+  );
   const result = await opening;
   if (!result.ok) opening = undefined;
   return result;

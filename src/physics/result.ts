@@ -55,6 +55,10 @@ export const ERROR_CODES = [
   'calibration.tooFewJobs',
   'calibration.noSensitivity',
   'calibration.factorOutOfRange',
+  'plantThreshold.tooFewLoads',
+  'plantThreshold.notIdentifiable',
+  'plantThreshold.factorOutOfRange',
+  'plantThreshold.outOfRange',
   'steps.empty',
   'steps.tooMany',
   'shape.unknown',
@@ -63,6 +67,7 @@ export const ERROR_CODES = [
   'range.minAboveMax',
   'carbon.boostNotAboveDiffuse',
   'time.limitTooShort',
+  'text.tooLong',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];

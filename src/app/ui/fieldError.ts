@@ -14,7 +14,7 @@ const UNIT_PARAMS: Partial<
   Record<InputError['code'], { quantity: keyof DisplayUnits; physicsUnit: string; params: string[] }>
 > = {
   'temperature.outOfRange': { quantity: 'temperature', physicsUnit: 'C', params: ['value', 'min', 'max'] },
-  'temperature.noAustenite': { quantity: 'temperature', physicsUnit: 'C', params: ['value', 'limitC'] },
+  'temperature.noAustenite': { quantity: 'temperature', physicsUnit: 'C', params: ['value', 'min'] },
   'solve.temperatureBelowRange': { quantity: 'temperature', physicsUnit: 'C', params: ['minC', 'maxC'] },
   'solve.temperatureAboveRange': { quantity: 'temperature', physicsUnit: 'C', params: ['minC', 'maxC'] },
   'depth.tooDeep': { quantity: 'depth', physicsUnit: 'mm', params: ['value', 'max'] },

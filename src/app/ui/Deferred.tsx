@@ -2,7 +2,7 @@
  * Work split into tasks, so that no single one keeps a slow phone from answering the next key.
  * `deferred(signal)` follows a signal one task later: a keystroke redraws its field at once, and
  * what it causes (the calculation and its results) is drawn in a task of its own. `<Deferred>`
- * draws a lower part of a screen after the parts above it, one part per task, so opening a screen
+ * draws a lower part of a screen after the parts above it, one part per frame, so opening a screen
  * is several short tasks instead of one long one.
  */
 import { effect, signal, type ReadonlySignal } from '@preact/signals';
@@ -32,7 +32,16 @@ export function deferred<T>(source: ReadonlySignal<T>): ReadonlySignal<T> {
   return shown;
 }
 
-/** Parts waiting to be drawn, in the order they asked (document order): one is drawn per task. */
+/**
+ * Runs `run` in a task after the next frame is drawn, so each part's layout and paint land in a frame
+ * of their own (several parts drawn between two frames would be laid out together, in one long task).
+ */
+function afterNextFrame(run: () => void): void {
+  if (typeof requestAnimationFrame === 'function') requestAnimationFrame(() => inNewTask(run));
+  else inNewTask(run);
+}
+
+/** Parts waiting to be drawn, in the order they asked (document order): one is drawn per frame. */
 const waiting: (() => void)[] = [];
 let draining = false;
 
@@ -43,7 +52,7 @@ function drawNext(): void {
     return;
   }
   next();
-  inNewTask(drawNext);
+  afterNextFrame(drawNext);
 }
 
 function queuePart(draw: () => void): () => void {

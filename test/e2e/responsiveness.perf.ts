@@ -9,6 +9,7 @@
  * thread and would be recorded as the app's own long tasks.
  */
 import assert from 'node:assert/strict';
+import { cpus, loadavg } from 'node:os';
 import { after, before, describe, it } from 'node:test';
 import type { Browser, BrowserContext, CDPSession, Page } from 'playwright-core';
 import { NO_VALUE } from '../../src/app/ui/format';
@@ -201,6 +202,12 @@ describe('responsiveness with the CPU slowed 4×', () => {
 
     const firstResultMs = median(firstResults);
     const ms = (values: readonly number[]) => values.map((v) => v.toFixed(0)).join(', ');
+    // Chromium's slowdown multiplies whatever else the machine is doing: the load goes with the figures.
+    console.log(
+      `machine: ${cpus().length} cores, load average ${loadavg()
+        .map((l) => l.toFixed(1))
+        .join(' ')}`,
+    );
     console.log(
       `4× slowed CPU, 390 px: first result after ${ms(firstResults)} ms, median ${firstResultMs.toFixed(0)} ms (limit ${FIRST_RESULT_MS}); calibration of 30 cycle jobs shown after ${calibrationMs.toFixed(0)} ms`,
     );

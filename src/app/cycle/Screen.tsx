@@ -3,6 +3,7 @@ import { useMemo } from 'preact/hooks';
 import { isModelId } from '../../physics';
 import { defaults, model, theme } from '../settings/state';
 import { Answer } from '../ui/Answer';
+import { calibrationWords } from '../fields/calibrationWords';
 import { Deferred } from '../ui/Deferred';
 import { CycleBand } from '../range/CycleBand';
 import { FurnaceField } from '../fields/FurnaceField';
@@ -37,20 +38,19 @@ import './screen.css';
 
 export default function CycleScreen() {
   const ctx = useScreenContext();
-  const { t, units, show, word } = ctx;
+  const { t, show } = ctx;
   // A keystroke redraws its own step at once (CycleSteps); the results follow in the next task.
-  const outcome = cycleOutcome.value;
-  const result = outcome.result;
-  const view = useMemo(() => (result ? cycleView(result, t, show, units) : undefined), [result, t, show, units]);
-  const logEntry = useMemo(() => (result ? cycleLogEntry(result) : undefined), [result]);
+  const result = cycleOutcome.value.result;
+  // Only the answer is worded here: the rows, chart and method are worded with the results part, in its own task.
+  const answerNote = result ? calibrationWords(result.calibration, t, show)?.short : undefined;
   return (
     <div class="screen cycle">
       <CycleTabs current="cycle" />
       <h1 tabIndex={-1}>{t('app.cycle.title')}</h1>
       <Answer
-        label={view ? t('app.depth.answerDepth') : t('app.common.noResult')}
-        value={view?.answer}
-        note={view?.answerNote}
+        label={result ? t('app.depth.answerDepth') : t('app.common.noResult')}
+        value={result ? show.depth(result.simulation.effectiveCaseDepthMm) : undefined}
+        note={answerNote}
       />
       <Deferred>
         <CycleSteps />
@@ -59,15 +59,30 @@ export default function CycleScreen() {
         <CyclePart />
       </Deferred>
       <Deferred>
-        <ResultsCard id="cycle-results" error={word(outcome.general)} view={view}>
-          <CycleBand id="cycle-band" recipe={result?.recipe} ctx={ctx} />
-          {view && <ProfileChart data={view.chart} label={t('app.cycle.chartLabel')} theme={theme.value} />}
-          {view && <p class="note">{view.hardnessMethod}</p>}
-          {result && <ProfileTable profile={result.simulation.profile} ctx={ctx} />}
-        </ResultsCard>
-        <LogSaveButton entry={logEntry} />
+        <CycleResults />
       </Deferred>
     </div>
+  );
+}
+
+/** Rows, likely range, chart, method and table of the newest result, and "save to log". */
+function CycleResults() {
+  const ctx = useScreenContext();
+  const { t, units, show, word } = ctx;
+  const outcome = cycleOutcome.value;
+  const result = outcome.result;
+  const view = useMemo(() => (result ? cycleView(result, t, show, units) : undefined), [result, t, show, units]);
+  const logEntry = useMemo(() => (result ? cycleLogEntry(result) : undefined), [result]);
+  return (
+    <>
+      <ResultsCard id="cycle-results" error={word(outcome.general)} view={view}>
+        <CycleBand id="cycle-band" recipe={result?.recipe} ctx={ctx} />
+        {view && <ProfileChart data={view.chart} label={t('app.cycle.chartLabel')} theme={theme.value} />}
+        {view && <p class="note">{view.hardnessMethod}</p>}
+        {result && <ProfileTable profile={result.simulation.profile} ctx={ctx} />}
+      </ResultsCard>
+      <LogSaveButton entry={logEntry} />
+    </>
   );
 }
 

@@ -1,4 +1,5 @@
 /** Cycle editor: steps (add, remove, reorder, duplicate), part shape, steel, model, threshold, furnace; results, range, chart and table. */
+import { sizePath } from '../fields/shape';
 import { useMemo } from 'preact/hooks';
 import { isModelId } from '../../physics';
 import { defaults, model, theme } from '../settings/state';
@@ -76,7 +77,7 @@ export default function CycleScreen() {
           shape={form.shape}
           size={form.size}
           onChange={(changes) => patch(cycleForm, changes)}
-          error={word(errors.size)}
+          error={word(errors[sizePath(form.shape) ?? ''])}
           ctx={ctx}
         />
         <SteelFields
@@ -84,6 +85,7 @@ export default function CycleScreen() {
           steel={form.steel}
           onChange={(s) => patch(cycleForm, { steel: s })}
           errors={errors}
+          path="steel."
           word={word}
         />
         <ModelField id="cycle-model" value={form.model} onChange={(v) => patch(cycleForm, { model: v })} ctx={ctx} />
@@ -91,7 +93,7 @@ export default function CycleScreen() {
           id="cycle-threshold"
           value={form.threshold}
           onInput={(v) => patch(cycleForm, { threshold: v })}
-          error={word(errors.threshold)}
+          error={word(errors.thresholdCarbonPct)}
           show={show}
         />
         <FurnaceField id="cycle-furnace" model={isModelId(form.model) ? form.model : model.value} ctx={ctx} />

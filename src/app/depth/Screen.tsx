@@ -13,7 +13,7 @@ import { SteelFields } from '../fields/SteelFields';
 import { useScreenContext } from '../settings/screenContext';
 import { LogSaveButton } from '../log/save/LogActions';
 import { depthLogEntry } from './logEntry';
-import { depthOutcome, solveFor, usesField } from './results';
+import { carbonPath, depthOutcome, solveFor, usesField } from './results';
 import { depthView } from './rows';
 import { CARBON_SOURCES, depthForm, SOLVE_FOR } from './state';
 import './screen.css';
@@ -59,7 +59,7 @@ export default function DepthScreen() {
               unit={units.temperature}
               value={form.temperature}
               onInput={(v) => patch(depthForm, { temperature: v })}
-              error={word(errors.temperature)}
+              error={word(errors.temperatureC)}
             />
           )}
           {usesField(mode, 'time') && (
@@ -69,7 +69,7 @@ export default function DepthScreen() {
               unit={units.time}
               value={form.time}
               onInput={(v) => patch(depthForm, { time: v })}
-              error={word(errors.time)}
+              error={word(errors.timeH)}
             />
           )}
           {usesField(mode, 'targetDepth') && (
@@ -79,7 +79,7 @@ export default function DepthScreen() {
               unit={units.depth}
               value={form.targetDepth}
               onInput={(v) => patch(depthForm, { targetDepth: v })}
-              error={word(errors.targetDepth)}
+              error={word(errors.targetDepthMm)}
             />
           )}
         </div>
@@ -97,13 +97,13 @@ export default function DepthScreen() {
             unitLabel={UNIT_SYMBOLS.pctC}
             value={form.carbon}
             onInput={(v) => patch(depthForm, { carbon: v })}
-            error={word(errors.carbon)}
+            error={word(errors[carbonPath(form)])}
           />
           <ThresholdField
             id="depth-threshold"
             value={form.threshold}
             onInput={(v) => patch(depthForm, { threshold: v })}
-            error={word(errors.threshold)}
+            error={word(errors.thresholdCarbonPct)}
             show={show}
           />
         </div>
@@ -112,6 +112,7 @@ export default function DepthScreen() {
           steel={form.steel}
           onChange={(s) => patch(depthForm, { steel: s })}
           errors={errors}
+          path=""
           word={word}
         />
         <FurnaceField id="depth-furnace" model={model.value} ctx={ctx} />

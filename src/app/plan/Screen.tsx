@@ -3,6 +3,7 @@
  * depth and surface carbon, worked out as you type; what binds when they are out of reach; the
  * plan opened in the cycle editor or saved to the log.
  */
+import { sizePath } from '../fields/shape';
 import { useMemo } from 'preact/hooks';
 import { isModelId } from '../../physics';
 import { cycleFormOfRecipe } from '../cycle/fromRecipe';
@@ -126,7 +127,7 @@ export default function PlanScreen() {
           id="plan-threshold"
           value={form.threshold}
           onInput={(v) => patch(planForm, { threshold: v })}
-          error={word(errors.threshold)}
+          error={word(errors.thresholdCarbonPct)}
           show={show}
         />
       </section>
@@ -184,7 +185,7 @@ export default function PlanScreen() {
           shape={form.shape}
           size={form.size}
           onChange={(changes) => patch(planForm, changes)}
-          error={word(errors.size)}
+          error={word(errors[sizePath(form.shape) ?? ''])}
           ctx={ctx}
         />
         <SteelFields
@@ -192,6 +193,7 @@ export default function PlanScreen() {
           steel={form.steel}
           onChange={(s) => patch(planForm, { steel: s })}
           errors={errors}
+          path="steel."
           word={word}
         />
         <ModelField id="plan-model" value={form.model} onChange={(v) => patch(planForm, { model: v })} ctx={ctx} />

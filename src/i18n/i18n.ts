@@ -6,7 +6,15 @@ import i18next, { type i18n, type TFunction } from 'i18next';
 import de from '../../locales/de/translation.json';
 import en from '../../locales/en/translation.json';
 import es from '../../locales/es/translation.json';
-import type { InputError, Warning } from '../physics';
+import {
+  errorParamUnits,
+  warningParamUnits,
+  type InputError,
+  type Params,
+  type ParamUnits,
+  type ValueUnit,
+  type Warning,
+} from '../physics';
 
 export const LANGUAGES = ['en', 'es', 'de'] as const;
 export type Language = (typeof LANGUAGES)[number];
@@ -31,12 +39,43 @@ export function createI18n(language: Language = 'en'): i18n {
   return instance;
 }
 
-/** The sentence for a physics error, in the instance's language. */
-export function errorMessage(t: TFunction, error: InputError): string {
-  return t(`errors.${error.code}`, error.params ?? {});
+/** A figure of a message with its unit, as the reader is shown it (the message holds no unit). */
+export type FigureFormatter = (value: number, unit: ValueUnit) => string;
+
+const PHYSICS_SYMBOLS: Record<ValueUnit, string> = {
+  C: '°C',
+  dC: '°C',
+  h: 'h',
+  mm: 'mm',
+  '%C': '%C',
+  '%': '%',
+  'm/s': 'm/s',
+  ratio: '',
+};
+
+/** A figure in the unit physics gives it (the CLI's wording): six significant digits, then the unit. */
+export const physicsFigure: FigureFormatter = (value, unit) => {
+  const text = String(Number(value.toPrecision(6)));
+  const symbol = PHYSICS_SYMBOLS[unit];
+  return symbol === '' ? text : `${text} ${symbol}`;
+};
+
+/** The params with each figure that has a unit formatted with it. */
+function withUnits(params: Params | undefined, units: ParamUnits, format: FigureFormatter): Params {
+  const out: Params = { ...params };
+  for (const [name, unit] of Object.entries(units)) {
+    const raw = params?.[name];
+    if (typeof raw === 'number' && Number.isFinite(raw)) out[name] = format(raw, unit);
+  }
+  return out;
 }
 
-/** The sentence for a physics caution, in the instance's language. */
-export function warningMessage(t: TFunction, warning: Warning): string {
-  return t(`warnings.${warning.code}`, warning.params ?? {});
+/** The sentence for a physics error, in the instance's language, each figure with its unit (physics units by default). */
+export function errorMessage(t: TFunction, error: InputError, format: FigureFormatter = physicsFigure): string {
+  return t(`errors.${error.code}`, withUnits(error.params, errorParamUnits(error.code, error.field), format));
+}
+
+/** The sentence for a physics caution or finding, in the instance's language, each figure with its unit. */
+export function warningMessage(t: TFunction, warning: Warning, format: FigureFormatter = physicsFigure): string {
+  return t(`warnings.${warning.code}`, withUnits(warning.params, warningParamUnits(warning.code), format));
 }

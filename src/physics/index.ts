@@ -11,6 +11,7 @@ export {
   ok,
   type ErrorCode,
   type InputError,
+  type Params,
   type Result,
   type Warning,
   type WarningCode,
@@ -110,6 +111,13 @@ export {
 } from './cycle/recipe';
 export { readRecipe } from './cycle/readRecipe';
 export { LIMITS, MAX_STEPS, TEXT_LENGTH_LIMITS, checkLimit, withinLimit, type Limit, type ValueUnit } from './limits';
+export {
+  ERROR_PARAM_UNITS,
+  WARNING_PARAM_UNITS,
+  errorParamUnits,
+  warningParamUnits,
+  type ParamUnits,
+} from './paramUnits';
 export {
   readRequest,
   specAt,

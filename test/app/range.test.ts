@@ -4,7 +4,8 @@ import { defaults, readBetaRange, readTolerance, settings } from '../../src/app/
 import { field, readTemperatureDifferenceC, temperatureDifferenceText } from '../../src/app/ui/fieldText';
 import { makeShow } from '../../src/app/ui/show';
 import { timed } from '../../src/app/ui/timing';
-import { UNIT_WARNINGS, wordWarning } from '../../src/app/ui/warningText';
+import { wordWarning } from '../../src/app/ui/warningText';
+import { WARNING_PARAM_UNITS } from '../../src/physics';
 import { createI18n, warningMessage } from '../../src/i18n/i18n';
 
 describe('furnace temperature tolerance', () => {
@@ -69,14 +70,16 @@ describe('warnings in the user’s units', () => {
       'The case reaches 0.100\u202fin, more than a third of the 0.200\u202fin available: risk of through-carburizing.',
     );
   });
-  it('formats figures the user’s way (decimal comma in Spanish) and leaves messages without units as physics words them', () => {
+  it('formats figures the user’s way (decimal comma in Spanish), with the unit physics gives each', () => {
     const show = makeShow({ temperature: 'C', depth: 'mm', time: 'h' }, 'es');
     expect(
       wordWarning(es, { code: 'plan.missedInFinalCheck', params: { ecdMm: 0.748, surfacePct: 0.905 } }, show),
     ).toMatch(/^La comprobación final del plan da 0,75\u202fmm y 0,91\u202f%C/u);
-    const plain = { code: 'plan.lowerBoostPotential' as const, params: { potentialPct: 1.15 } };
-    expect(UNIT_WARNINGS[plain.code]).toBeUndefined();
-    expect(wordWarning(en, plain, show)).toBe(warningMessage(en, plain));
+    const lower = { code: 'plan.lowerBoostPotential' as const, params: { potentialPct: 1.15 } };
+    expect(WARNING_PARAM_UNITS[lower.code]).toEqual({ potentialPct: '%C' });
+    expect(wordWarning(es, lower, show)).toMatch(/1,15\u202f%C/u);
+    // The CLI's words: the same message, the figure in physics units.
+    expect(warningMessage(en, lower)).toBe('Lower the boost potential to 1.15 %C or less.');
   });
 });
 

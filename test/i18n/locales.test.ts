@@ -5,8 +5,13 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { LANGUAGES, RESOURCES } from '../../src/i18n/i18n';
-import { CASE_CRITERION_IDS, ERROR_CODES, WARNING_CODES } from '../../src/physics';
-import { UNIT_WARNINGS } from '../../src/app/ui/warningText';
+import {
+  CASE_CRITERION_IDS,
+  ERROR_CODES,
+  ERROR_PARAM_UNITS,
+  WARNING_CODES,
+  WARNING_PARAM_UNITS,
+} from '../../src/physics';
 import { sourceFiles } from '../sourceFiles';
 import { HEADER_SCREEN, NAV_SCREENS } from '../../src/app/shell/screens';
 
@@ -74,7 +79,6 @@ describe('locales', () => {
       ['app.log.tabs.', ['list', 'summary', 'files']],
       ['app.cycleTabs.', ['cycle', 'plan']],
       ['app.plan.steps.', ['boost', 'diffuse', 'hardening']],
-      ['app.unitWarnings.', Object.keys(UNIT_WARNINGS)],
       ['app.log.fields.', ['workOrder', 'partNumber', 'furnace', 'operator', 'status', 'notes', 'gradeName']],
       ['app.log.lab.', ['ecd', 'surfaceHardness', 'coreHardness', 'surfaceCarbon', 'by', 'at']],
       ['app.models.', ['agren', 'tibbetts', 'wells-batz-mehl']],
@@ -117,20 +121,33 @@ describe('locales', () => {
       .flatMap(([prefix, values]) => values.map((v) => prefix + v))
       .filter((key) => !english.has(key));
     expect(missing).toEqual([]);
-    // A unit-aware warning takes exactly the placeholders of the physics message it replaces.
-    const placeholders = (key: string) =>
-      [...String(lookup(RESOURCES.en, key)).matchAll(/{{\s*(\w+)/g)]
-        .map((m) => m[1])
-        .sort()
-        .join();
-    const mismatched = Object.keys(UNIT_WARNINGS).filter(
-      (code) => placeholders(`app.unitWarnings.${code}`) !== placeholders(`warnings.${code}`),
-    );
-    expect(mismatched).toEqual([]);
     const notes = ['atmosphere', 'purge', 'quench', 'estimates'].flatMap((n) => [
       `app.safety.notes.${n}.title`,
       `app.safety.notes.${n}.text`,
     ]);
     expect(notes.filter((key) => !english.has(key))).toEqual([]);
   });
+
+  it.each(LANGUAGES)(
+    '%s: a message whose figures carry a unit holds no unit of its own (one wording for the CLI and the app)',
+    (lng) => {
+      const problems: string[] = [];
+      for (const [section, table] of [
+        ['errors', ERROR_PARAM_UNITS],
+        ['warnings', WARNING_PARAM_UNITS],
+      ] as const) {
+        for (const [code, units] of Object.entries(table)) {
+          const message = String(lookup(RESOURCES[lng], `${section}.${code}`));
+          for (const name of Object.keys(units)) {
+            // The unit comes with the formatted figure; a symbol after it would be doubled.
+            if (new RegExp(`\\{\\{${name}\\}\\}\\s?(°C|°F|%C|%|mm|h)(?![\\p{L}])`, 'u').test(message))
+              problems.push(`${section}.${code}: ${name}`);
+          }
+        }
+      }
+      expect(problems).toEqual([]);
+      expect(lookup(RESOURCES[lng], 'app.unitErrors')).toBeUndefined();
+      expect(lookup(RESOURCES[lng], 'app.unitWarnings')).toBeUndefined();
+    },
+  );
 });

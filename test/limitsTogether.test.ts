@@ -28,7 +28,6 @@ async function layers(changed?: (real: typeof Limits) => Record<string, unknown>
   const { addStep, DEFAULT_CYCLE_FORM } = await import('../src/app/cycle/state');
   const { field } = await import('../src/app/ui/fieldText');
   const { wordError } = await import('../src/app/ui/fieldError');
-  const { makeShow } = await import('../src/app/ui/show');
   const { createI18n } = await import('../src/i18n/i18n');
   const settings = {
     model: 'agren' as const,
@@ -47,7 +46,7 @@ async function layers(changed?: (real: typeof Limits) => Record<string, unknown>
     schemaSteps: v.safeParse(JobInputsSchema, { kind: 'cycle', recipe: nineSteps }).success,
     appCode: appError?.code,
     appWords: appError
-      ? wordError(createI18n('en').t, appError, makeShow({ temperature: 'F', depth: 'in', time: 'h' }, 'en'))
+      ? wordError(createI18n('en').t, appError, { temperature: 'F', depth: 'in', time: 'h' }, 'en')
       : undefined,
     editorSteps: cycle.steps.length,
   };
@@ -76,12 +75,12 @@ describe('a limit changed in the physics table changes every layer together', ()
     }));
     expect(lowered.cli.exitCode).toBe(1);
     expect(lowered.cli.output).toMatchObject({
-      error: { code: 'temperature.outOfRange', message: 'Temperature 1050 °C is outside 727 °C to 1000 °C.' },
+      error: { code: 'temperature.outOfRange', message: 'Temperature 1050 °C: it must be between 727 °C and 1000 °C.' },
     });
     expect(lowered.schema).toBe(false);
     expect(lowered.appCode).toBe('temperature.outOfRange');
     // In the app's words, in °F for a US user: 1000 °C is 1832 °F.
-    expect(lowered.appWords).toBe('Temperature 1,922\u202f°F is outside 1,341\u202f°F to 1,832\u202f°F.');
+    expect(lowered.appWords).toBe('Temperature 1922\u202f°F: it must be between 1340.6\u202f°F and 1832\u202f°F.');
     expect(lowered.cliSteps.output).toMatchObject({ error: { code: 'steps.tooMany', field: 'steps' } });
     expect(lowered.schemaSteps).toBe(false);
     expect(lowered.editorSteps).toBe(8);

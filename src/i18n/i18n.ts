@@ -6,15 +6,8 @@ import i18next, { type i18n, type TFunction } from 'i18next';
 import de from '../../locales/de/translation.json';
 import en from '../../locales/en/translation.json';
 import es from '../../locales/es/translation.json';
-import {
-  errorParamUnits,
-  warningParamUnits,
-  type InputError,
-  type Params,
-  type ParamUnits,
-  type ValueUnit,
-  type Warning,
-} from '../physics';
+import type { InputError, Warning } from '../physics';
+import { messageFigures, PHYSICS_MESSAGE_UNITS, wordError, wordWarning } from './wording';
 
 export const LANGUAGES = ['en', 'es', 'de'] as const;
 export type Language = (typeof LANGUAGES)[number];
@@ -39,43 +32,12 @@ export function createI18n(language: Language = 'en'): i18n {
   return instance;
 }
 
-/** A figure of a message with its unit, as the reader is shown it (the message holds no unit). */
-export type FigureFormatter = (value: number, unit: ValueUnit) => string;
-
-const PHYSICS_SYMBOLS: Record<ValueUnit, string> = {
-  C: '°C',
-  dC: '°C',
-  h: 'h',
-  mm: 'mm',
-  '%C': '%C',
-  '%': '%',
-  'm/s': 'm/s',
-  ratio: '',
-};
-
-/** A figure in the unit physics gives it (the CLI's wording): six significant digits, then the unit. */
-export const physicsFigure: FigureFormatter = (value, unit) => {
-  const text = String(Number(value.toPrecision(6)));
-  const symbol = PHYSICS_SYMBOLS[unit];
-  return symbol === '' ? text : `${text} ${symbol}`;
-};
-
-/** The params with each figure that has a unit formatted with it. */
-function withUnits(params: Params | undefined, units: ParamUnits, format: FigureFormatter): Params {
-  const out: Params = { ...params };
-  for (const [name, unit] of Object.entries(units)) {
-    const raw = params?.[name];
-    if (typeof raw === 'number' && Number.isFinite(raw)) out[name] = format(raw, unit);
-  }
-  return out;
+/** The sentence for a physics error, figures in physics' units (°C, mm, h) and the locale's notation. */
+export function errorMessage(t: TFunction, error: InputError, locale = 'en'): string {
+  return wordError(t, error, messageFigures(PHYSICS_MESSAGE_UNITS, locale));
 }
 
-/** The sentence for a physics error, in the instance's language, each figure with its unit (physics units by default). */
-export function errorMessage(t: TFunction, error: InputError, format: FigureFormatter = physicsFigure): string {
-  return t(`errors.${error.code}`, withUnits(error.params, errorParamUnits(error.code, error.field), format));
-}
-
-/** The sentence for a physics caution or finding, in the instance's language, each figure with its unit. */
-export function warningMessage(t: TFunction, warning: Warning, format: FigureFormatter = physicsFigure): string {
-  return t(`warnings.${warning.code}`, withUnits(warning.params, warningParamUnits(warning.code), format));
+/** The sentence for a physics caution, figures in physics' units and the locale's notation. */
+export function warningMessage(t: TFunction, warning: Warning, locale = 'en'): string {
+  return wordWarning(t, warning, messageFigures(PHYSICS_MESSAGE_UNITS, locale));
 }

@@ -28,7 +28,6 @@ export const FIRST_SCREEN_KEYS: readonly string[] = [
   'app.steel',
   'app.models',
   'app.depth',
-  // Cautions are worded by one function for every screen (ui/warningText.ts), so all of them.
   'app.cycle.stepCaution',
   'app.band.label',
   'app.band.models',

@@ -18,6 +18,7 @@ export {
 } from './result';
 export { UNITS, convert, convertTemperatureDifference, parseNumber, quantityOf, type TimeUnit } from './units';
 export { parseDuration } from './duration';
+export { OUTPUT_PRECISION, roundForOutput, type OutputPrecision } from './precision';
 export {
   CARBON_DEPENDENCE_POINT,
   DEFAULT_MODEL,
@@ -74,6 +75,7 @@ export {
   MAX_TOTAL_CASE_MARGIN_PCT,
   checkBeta,
   checkCarbonPct,
+  checkDepthMm,
   checkTemperatureC,
   checkTemperatureTolerance,
   checkTimeH,

@@ -5,7 +5,6 @@ import { field, readTemperatureDifferenceC, temperatureDifferenceText } from '..
 import { makeShow } from '../../src/app/ui/show';
 import { timed } from '../../src/app/ui/timing';
 import { wordWarning } from '../../src/app/ui/warningText';
-import { WARNING_PARAM_UNITS } from '../../src/physics';
 import { createI18n, warningMessage } from '../../src/i18n/i18n';
 
 describe('furnace temperature tolerance', () => {
@@ -67,19 +66,20 @@ describe('warnings in the user’s units', () => {
       'Raise the boost and diffuse temperatures by about 18\u202f°F (estimate).',
     );
     expect(wordWarning(en, { code: 'shape.throughCarburizing', params: { depthMm: 2.54, limitMm: 5.08 } }, us)).toBe(
-      'The case reaches 0.100\u202fin, more than a third of the 0.200\u202fin available: risk of through-carburizing.',
+      'The case reaches 0.1\u202fin, more than a third of the 0.2\u202fin available: risk of through-carburizing.',
     );
   });
-  it('formats figures the user’s way (decimal comma in Spanish), with the unit physics gives each', () => {
+  it('formats figures the user’s way (decimal comma in Spanish), in every message, the CLI’s way in physics units', () => {
     const show = makeShow({ temperature: 'C', depth: 'mm', time: 'h' }, 'es');
     expect(
       wordWarning(es, { code: 'plan.missedInFinalCheck', params: { ecdMm: 0.748, surfacePct: 0.905 } }, show),
-    ).toMatch(/^La comprobación final del plan da 0,75\u202fmm y 0,91\u202f%C/u);
-    const lower = { code: 'plan.lowerBoostPotential' as const, params: { potentialPct: 1.15 } };
-    expect(WARNING_PARAM_UNITS[lower.code]).toEqual({ potentialPct: '%C' });
-    expect(wordWarning(es, lower, show)).toMatch(/1,15\u202f%C/u);
-    // The CLI's words: the same message, the figure in physics units.
-    expect(warningMessage(en, lower)).toBe('Lower the boost potential to 1.15 %C or less.');
+    ).toMatch(/^La comprobación final del plan da 0,748\u202fmm y 0,905\u202f%C/u);
+    const finding = { code: 'plan.lowerBoostPotential' as const, params: { potentialPct: 1.1500000000000001 } };
+    expect(wordWarning(es, finding, show)).toMatch(/ 1,15\u202f%C\b/u);
+    // Metric units and English: the same sentence as the CLI's.
+    expect(wordWarning(en, finding, makeShow({ temperature: 'C', depth: 'mm', time: 'h' }, 'en'))).toBe(
+      warningMessage(en, finding),
+    );
   });
 });
 

@@ -2,7 +2,6 @@ import { describe, expect, it } from 'vitest';
 import { wordError } from '../../src/app/ui/fieldError';
 import { displayText, field, readField } from '../../src/app/ui/fieldText';
 import { displayUnits } from '../../src/app/ui/units';
-import { makeShow } from '../../src/app/ui/show';
 import { createI18n } from '../../src/i18n/i18n';
 
 const auto = { temperature: 'auto', depth: 'auto', time: 'auto' } as const;
@@ -44,12 +43,13 @@ describe('errors worded in the chosen units', () => {
     const message = wordError(
       t,
       { code: 'temperature.outOfRange', field: 'temperatureC', params: { value: 1200, min: 700, max: 1150 } },
-      makeShow({ temperature: 'F', depth: 'in', time: 'h' }, 'en'),
+      { temperature: 'F', depth: 'in', time: 'h' },
+      'en',
     );
-    expect(message).toBe('Temperature 2,192\u202f°F is outside 1,292\u202f°F to 2,102\u202f°F.');
+    expect(message).toBe('Temperature 2192\u202f°F: it must be between 1292\u202f°F and 2102\u202f°F.');
   });
   it('errors without unit-bearing figures use the physics message', () => {
-    expect(wordError(t, { code: 'number.empty' }, makeShow({ temperature: 'C', depth: 'mm', time: 'h' }, 'en'))).toBe(
+    expect(wordError(t, { code: 'number.empty' }, { temperature: 'C', depth: 'mm', time: 'h' }, 'en')).toBe(
       'Enter a number.',
     );
   });

@@ -12,6 +12,7 @@ import {
   WARNING_CODES,
   WARNING_PARAM_UNITS,
 } from '../../src/physics';
+import { figureKind } from '../../src/i18n/wording';
 import { sourceFiles } from '../sourceFiles';
 import { HEADER_SCREEN, NAV_SCREENS } from '../../src/app/shell/screens';
 
@@ -52,6 +53,23 @@ describe('locales', () => {
       },
     );
     expect(missing).toEqual([]);
+  });
+
+  it.each(LANGUAGES)('%s writes no unit after a figure that brings its own (errors and cautions)', (lng) => {
+    // "{{value}} mm" would print "10 mm mm": the formatter attaches the unit of depths, temperatures, times, carbon.
+    const doubled: string[] = [];
+    for (const [top, codes] of [
+      ['errors', ERROR_CODES],
+      ['warnings', WARNING_CODES],
+    ] as const) {
+      for (const code of codes) {
+        const message = String(lookup(RESOURCES[lng], `${top}.${code}`));
+        for (const match of message.matchAll(/\{\{(\w+)\}\}\s*(°C|°F|mm|h\b|%)/gu)) {
+          if (figureKind(code, match[1]!) !== 'number') doubled.push(`${top}.${code}: ${match[0]}`);
+        }
+      }
+    }
+    expect(doubled).toEqual([]);
   });
 
   it.each(LANGUAGES)('%s uses the same {{placeholders}} as en in every message', (lng) => {

@@ -19,7 +19,8 @@ import {
   type CalibrationState,
 } from '../settings/calibration';
 import { defaults, model } from '../settings/state';
-import type { Outcome } from '../ui/outcome';
+import { deferred } from '../ui/Deferred';
+import { NO_ERRORS, type Outcome } from '../ui/outcome';
 import { orDefault, placeError, readForm, type FormValues } from '../ui/readForm';
 import { shapeValues } from '../fields/shape';
 import { steelComposition } from '../fields/steel';
@@ -81,7 +82,7 @@ export function buildRecipe(
   if (Object.keys(read.errors).length > 0) return { errors: read.errors, fields: read.fields };
   const recipe = readRecipe(read.request);
   if (!recipe.ok) return { ...placeError(recipe.error, read.fields), fields: read.fields };
-  return { recipe: recipe.value, errors: {}, fields: read.fields };
+  return { recipe: recipe.value, errors: NO_ERRORS, fields: read.fields };
 }
 
 export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<CycleResult> {
@@ -98,7 +99,7 @@ export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<
   if (!recipe.ok) return placeError(recipe.error, read.fields);
   const simulation = simulateCycle(recipe.value);
   if (!simulation.ok) return placeError(simulation.error, read.fields);
-  return { errors: {}, result: { recipe: recipe.value, simulation: simulation.value, calibration } };
+  return { errors: NO_ERRORS, result: { recipe: recipe.value, simulation: simulation.value, calibration } };
 }
 
 /** The settings a cycle calculation reads, with the chosen furnace's calibration (shared by the planner). */
@@ -115,4 +116,7 @@ export const cycleDefaults = computed<CycleDefaults>(() => {
   };
 });
 
-export const cycleOutcome = computed(() => computeCycle(cycleForm.value, cycleDefaults.value));
+/** The form as the results show it: one task behind the typing (ui/Deferred.tsx). */
+export const shownCycleForm = deferred(cycleForm);
+
+export const cycleOutcome = computed(() => computeCycle(shownCycleForm.value, cycleDefaults.value));

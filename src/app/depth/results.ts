@@ -25,7 +25,8 @@ import {
   type CalibrationState,
 } from '../settings/calibration';
 import { defaults, model } from '../settings/state';
-import type { Outcome } from '../ui/outcome';
+import { deferred } from '../ui/Deferred';
+import { NO_ERRORS, type Outcome } from '../ui/outcome';
 import { orDefault, placeError, readForm, required, type FormValues } from '../ui/readForm';
 import { steelComposition } from '../fields/steel';
 import { depthForm, type DepthForm, type SolveFor } from './state';
@@ -122,13 +123,16 @@ export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<
   if (!calculated.ok) return placeError(calculated.error, read.fields);
   const limit = settings.ecdHardnessLimit ? { ecdHardnessLimit: settings.ecdHardnessLimit } : {};
   return {
-    errors: {},
+    errors: NO_ERRORS,
     result: { solveFor: mode, figures: calculated.value, request, calibration, ...limit } as DepthResult,
   };
 }
 
+/** The form as the results show it: one task behind the typing (ui/Deferred.tsx). */
+export const shownDepthForm = deferred(depthForm);
+
 export const depthOutcome = computed(() =>
-  computeDepth(depthForm.value, {
+  computeDepth(shownDepthForm.value, {
     model: model.value,
     ecdThresholdPct: defaults.value.ecdThresholdPct,
     totalCaseMarginPct: defaults.value.totalCaseMarginPct,

@@ -14,7 +14,8 @@ import {
 } from '../../physics';
 import { baseValues, cycleDefaults, type CycleDefaults } from '../cycle/results';
 import { factorOf, type CalibrationState } from '../settings/calibration';
-import type { Outcome } from '../ui/outcome';
+import { deferred } from '../ui/Deferred';
+import { NO_ERRORS, type Outcome } from '../ui/outcome';
 import { orDefault, placeError, readForm, type FormValues } from '../ui/readForm';
 import { latestRun } from '../worker/client';
 import { planForm, type PlanForm, type PotentialStepForm } from './state';
@@ -53,7 +54,7 @@ export function buildPlanRequest(
   const read = readForm(PLAN_REQUEST, planValues(form, settings));
   return Object.keys(read.errors).length > 0
     ? { errors: read.errors, fields: read.fields }
-    : { request: read.request, errors: {}, fields: read.fields };
+    : { request: read.request, errors: NO_ERRORS, fields: read.fields };
 }
 
 export interface PlanRequest {
@@ -71,7 +72,7 @@ export function planRequestOf(form: PlanForm, settings: CycleDefaults): Outcome<
   const calibration: CalibrationState = settings.calibrationFor?.(model) ?? { kind: 'none' };
   const factor = factorOf(calibration);
   const request = factor === 1 ? built.request : { ...built.request, diffusivityFactor: factor };
-  return { errors: {}, result: { request, calibration, fields: built.fields } };
+  return { errors: NO_ERRORS, result: { request, calibration, fields: built.fields } };
 }
 
 /** What the screen shows for a planned request: the plan, or its error placed on the field that caused it. */
@@ -80,7 +81,7 @@ export function planOutcomeOf(
   plan: Result<PlanResult>,
 ): Outcome<PlanOutcome> {
   if (!plan.ok) return placeError(plan.error, fields);
-  return { errors: {}, result: { request, plan: plan.value, calibration } };
+  return { errors: NO_ERRORS, result: { request, plan: plan.value, calibration } };
 }
 
 /** Plans the form here and now (the tests; the screen plans in the worker). */
@@ -89,8 +90,11 @@ export function computePlan(form: PlanForm, settings: CycleDefaults): Outcome<Pl
   return asked.result ? planOutcomeOf(asked.result, planTwoStepCycle(asked.result.request)) : { errors: asked.errors };
 }
 
+/** The form as the plan shows it: one task behind the typing (ui/Deferred.tsx). */
+export const shownPlanForm = deferred(planForm);
+
 /** The request of the form as typed (cheap: reading and checking fields). */
-export const planRequest = computed(() => planRequestOf(planForm.value, cycleDefaults.value));
+export const planRequest = computed(() => planRequestOf(shownPlanForm.value, cycleDefaults.value));
 
 const planner = latestRun('plan');
 // Every new request goes to the worker; the newest one wins.
@@ -105,7 +109,7 @@ export const planOutcome = computed((): Outcome<PlanOutcome> & { updating: boole
   if (!asked.result) return { errors: asked.errors, updating: false };
   const answer = planner.answer.value;
   const updating = planner.updating.value;
-  if (!answer || 'failed' in answer) return { errors: {}, updating };
+  if (!answer || 'failed' in answer) return { errors: NO_ERRORS, updating };
   const { calibration, fields } = asked.result;
   return { ...planOutcomeOf({ request: answer.input, calibration, fields }, answer.output), updating };
 });

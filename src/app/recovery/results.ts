@@ -7,7 +7,8 @@ import {
   type EquivalentTimeResult,
 } from '../../physics';
 import { model } from '../settings/state';
-import type { Outcome } from '../ui/outcome';
+import { deferred } from '../ui/Deferred';
+import { NO_ERRORS, type Outcome } from '../ui/outcome';
 import { placeError, readForm, required } from '../ui/readForm';
 import { recoveryForm, type RecoveryForm } from './state';
 
@@ -21,7 +22,10 @@ export function computeRecovery(form: RecoveryForm, modelId: DiffusivityModelId)
   });
   if (Object.keys(read.errors).length > 0) return { errors: read.errors };
   const result = equivalentTime(read.request);
-  return result.ok ? { errors: {}, result: result.value } : placeError(result.error, read.fields);
+  return result.ok ? { errors: NO_ERRORS, result: result.value } : placeError(result.error, read.fields);
 }
 
-export const recoveryOutcome = computed(() => computeRecovery(recoveryForm.value, model.value));
+/** The form as the results show it: one task behind the typing (ui/Deferred.tsx). */
+export const shownRecoveryForm = deferred(recoveryForm);
+
+export const recoveryOutcome = computed(() => computeRecovery(shownRecoveryForm.value, model.value));

@@ -21,8 +21,14 @@ export function useScreenContext(): ScreenContext {
   const t = useT();
   const locale = language.value;
   const current = units.value;
-  return useMemo(() => {
-    const show = makeShow(current, locale);
-    return { t, locale, units: current, show, word: (error) => (error ? wordError(t, error, show) : undefined) };
-  }, [t, locale, current]);
+  return useMemo(
+    () => ({
+      t,
+      locale,
+      units: current,
+      show: makeShow(current, locale),
+      word: (error) => (error ? wordError(t, error, current, locale) : undefined),
+    }),
+    [t, locale, current],
+  );
 }

@@ -1,10 +1,9 @@
-/** Words a physics error for the screen: its figures in the units the user has chosen, in the locale's format. */
+/** Words a physics error for the screen: every figure in the units the user has chosen, in the locale's notation. */
 import type { TFunction } from 'i18next';
-import { errorMessage } from '../../i18n/i18n';
+import { messageFigures, wordError as wordPhysicsError } from '../../i18n/wording';
 import type { InputError } from '../../physics';
-import type { Show } from './show';
+import type { DisplayUnits } from './units';
 
-/** The sentence for an error, with every figure that has a unit in the chosen units. */
-export function wordError(t: TFunction, error: InputError, show: Show): string {
-  return errorMessage(t, error, show.figure);
+export function wordError(t: TFunction, error: InputError, units: DisplayUnits, locale: string): string {
+  return wordPhysicsError(t, error, messageFigures(units, locale));
 }

@@ -21,7 +21,7 @@ import {
   type ValueUnit,
 } from '../../physics';
 import { readField, type FieldText } from './fieldText';
-import type { Outcome } from './outcome';
+import { NO_ERRORS, type Outcome } from './outcome';
 
 /** An input's text, and what a blank one stands for (a default from the settings) if not left out. */
 export interface FormText extends FieldText {
@@ -164,5 +164,5 @@ export function readForm(spec: FieldsSpec, values: FormValues): FormRead {
 /** A physics error placed: on its input when it has one on the form, otherwise as the general error. */
 export function placeError<T>(error: InputError, fields: ReadonlySet<string>): Outcome<T> {
   const path = error.field ?? '';
-  return fields.has(path) ? { errors: { [path]: error } } : { errors: {}, general: error };
+  return fields.has(path) ? { errors: { [path]: error } } : { errors: NO_ERRORS, general: error };
 }

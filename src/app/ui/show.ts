@@ -2,8 +2,9 @@
  * Physics values (°C, mm, h, %C, m²/s) shown in the user's units and locale.
  * Every figure on a screen goes through here, so every figure has its unit.
  */
-import { convert, convertTemperatureDifference, hrcToHv, type Hardness, type ValueUnit } from '../../physics';
+import { convert, convertTemperatureDifference, hrcToHv, type Hardness } from '../../physics';
 import { formatHoursMinutes, formatNumber, formatQuantity, formatRange, formatScientific, NO_VALUE } from './format';
+import { messageFigures, type Figures } from '../../i18n/wording';
 import type { DisplayUnits } from './units';
 
 export interface Show {
@@ -26,8 +27,8 @@ export interface Show {
   /** A hardness in its own scale (whole numbers unless `digits` says otherwise). */
   hardness(h: Hardness, digits?: number): string;
   number(value: number, digits: number): string;
-  /** A figure of a message in the unit physics gives it (°C, °C difference, h, mm, %C, %, m/s, ratio). */
-  figure: (value: number, unit: ValueUnit) => string;
+  /** Figures inside sentences (errors, cautions): the unit's precision without trailing zeros. */
+  figures: Figures;
 }
 
 function to(value: number, from: string, unit: string): number {
@@ -39,26 +40,6 @@ export function makeShow(units: DisplayUnits, locale: string): Show {
   const depth = (mm: number) => to(mm, 'mm', units.depth);
   const temp = (c: number) => to(c, 'C', units.temperature);
   const time = (h: number) => to(h, 'h', units.time);
-  const figure = (value: number, unit: ValueUnit): string => {
-    switch (unit) {
-      case 'C':
-        return formatQuantity(temp(value), units.temperature, locale);
-      case 'dC':
-        return formatQuantity(convertTemperatureDifference(value, 'C', units.temperature), units.temperature, locale);
-      case 'h':
-        return formatQuantity(time(value), units.time, locale);
-      case 'mm':
-        return formatQuantity(depth(value), units.depth, locale);
-      case '%C':
-        return formatQuantity(value, 'pctC', locale);
-      case '%':
-        return formatQuantity(value, 'pct', locale);
-      case 'm/s':
-        return formatScientific(value, 'm/s', locale);
-      case 'ratio':
-        return formatNumber(value, locale, { digits: 2 });
-    }
-  };
   return {
     depth: (mm) => formatQuantity(depth(mm), units.depth, locale),
     depthRange: (a, b) => formatRange(depth(a), depth(b), units.depth, locale),
@@ -80,6 +61,6 @@ export function makeShow(units: DisplayUnits, locale: string): Show {
     hardnessHv: (hrc) => formatQuantity(hrcToHv(hrc) ?? Number.NaN, 'HV', locale),
     hardness: (h, digits) => formatQuantity(h.value, h.unit, locale, digits),
     number: (value, digits) => formatNumber(value, locale, { digits }),
-    figure: (value, unit) => figure(value, unit),
+    figures: messageFigures(units, locale),
   };
 }

@@ -1,12 +1,11 @@
-/** Words a physics caution or planner finding for the screen, figures in the user's units (physics `WARNING_PARAM_UNITS`). */
+/** Words a physics caution or planner finding for the screen: every figure in the user's units and locale. */
 import type { TFunction } from 'i18next';
-import { warningMessage } from '../../i18n/i18n';
+import { wordWarning as wordPhysicsWarning } from '../../i18n/wording';
 import type { Warning } from '../../physics';
 import type { Show } from './show';
 
-/** The sentence for a warning, every figure that has a unit in the user's units and locale. */
 export function wordWarning(t: TFunction, warning: Warning, show: Show): string {
-  return warningMessage(t, warning, show.figure);
+  return wordPhysicsWarning(t, warning, show.figures);
 }
 
 /** A cycle's cautions, each prefixed with its step when it concerns one. */

@@ -1,0 +1,126 @@
+/**
+ * Physics errors and cautions in words, for the app and the CLI alike. Every figure of a message
+ * goes through the one formatter with the unit physics gives it (physics `paramUnits.ts`) and its precision, so no raw float, no
+ * point-decimal in a German sentence and no unit missing from a figure: the messages in the
+ * locales hold no units next to their placeholders, the formatted figure brings its own.
+ */
+import type { TFunction } from 'i18next';
+import {
+  convert,
+  convertTemperatureDifference,
+  ERROR_CODES,
+  errorParamUnits,
+  warningParamUnits,
+  type ErrorCode,
+  type InputError,
+  type Params,
+  type ValueUnit,
+  type Warning,
+  type WarningCode,
+} from '../physics';
+import { formatMessageNumber, formatMessageQuantity, NO_VALUE, unitSymbol } from './format';
+
+/** What a figure in a message is; it decides the unit it is shown in and its precision. */
+export type FigureKind = 'depth' | 'temperature' | 'temperatureChange' | 'time' | 'carbon' | 'alloy' | 'number';
+
+/** The units figures are shown in (the user's, or physics' own for the CLI). */
+export interface MessageUnits {
+  temperature: 'C' | 'F';
+  depth: 'mm' | 'in';
+  time: 'h' | 'min';
+}
+
+/** The units physics works in: the CLI words its messages in them. */
+export const PHYSICS_MESSAGE_UNITS: MessageUnits = { temperature: 'C', depth: 'mm', time: 'h' };
+
+/** Formats one figure of a message by its kind (physics units in: °C, mm, h, %C). */
+export type Figures = (kind: FigureKind, value: number) => string;
+
+export function messageFigures(units: MessageUnits, locale: string): Figures {
+  const quantity = (value: number, from: string, to: string) => {
+    const converted = convert(value, from, to);
+    return converted.ok ? formatMessageQuantity(converted.value, to, locale) : NO_VALUE;
+  };
+  return (kind, value) => {
+    switch (kind) {
+      case 'depth':
+        return quantity(value, 'mm', units.depth);
+      case 'temperature':
+        return quantity(value, 'C', units.temperature);
+      case 'temperatureChange':
+        return formatMessageQuantity(
+          convertTemperatureDifference(value, 'C', units.temperature),
+          units.temperature,
+          locale,
+        );
+      case 'time':
+        return quantity(value, 'h', units.time);
+      case 'carbon':
+        return formatMessageQuantity(value, 'pctC', locale);
+      case 'alloy':
+        return formatMessageQuantity(value, 'pct', locale);
+      case 'number':
+        return formatMessageNumber(value, locale);
+    }
+  };
+}
+
+/** The kind of figure each unit physics gives a param is shown as. */
+const KIND_OF_UNIT: Record<ValueUnit, FigureKind> = {
+  C: 'temperature',
+  dC: 'temperatureChange',
+  h: 'time',
+  mm: 'depth',
+  '%C': 'carbon',
+  '%': 'alloy',
+  'm/s': 'number',
+  ratio: 'number',
+};
+
+const isErrorCode = (code: ErrorCode | WarningCode): code is ErrorCode =>
+  (ERROR_CODES as readonly string[]).includes(code);
+
+/**
+ * The kind of a figure: by the unit physics gives that param of that code (physics
+ * `ERROR_PARAM_UNITS` / `WARNING_PARAM_UNITS`, range errors from the limits' own units); a param
+ * physics gives no unit is a plain number (a count, a hardness in its own scale, a factor).
+ */
+export function figureKind(code: ErrorCode | WarningCode, name: string, field?: string): FigureKind {
+  const units = isErrorCode(code) ? errorParamUnits(code, field) : warningParamUnits(code);
+  const unit = units[name];
+  return unit === undefined ? 'number' : KIND_OF_UNIT[unit];
+}
+
+/** Text params that hold a unit code ("C", "HV"): shown as its symbol. */
+const UNIT_PARAMS = new Set(['unit', 'otherUnit', 'limitUnit', 'from', 'to']);
+
+/**
+ * Every param ready for the message: figures formatted by kind, unit codes as symbols. `count`
+ * stays a number, since i18next picks the plural form from it (counts are whole numbers).
+ */
+export function wordParams(
+  code: ErrorCode | WarningCode,
+  params: Params | undefined,
+  figures: Figures,
+  field?: string,
+): Record<string, string | number> {
+  const out: Record<string, string | number> = {};
+  for (const [name, raw] of Object.entries(params ?? {})) {
+    if (typeof raw === 'number') {
+      out[name] = name === 'count' && Number.isInteger(raw) ? raw : figures(figureKind(code, name, field), raw);
+    } else {
+      out[name] = UNIT_PARAMS.has(name) ? unitSymbol(raw) : raw;
+    }
+  }
+  return out;
+}
+
+/** The sentence for a physics error. */
+export function wordError(t: TFunction, error: InputError, figures: Figures): string {
+  return t(`errors.${error.code}`, wordParams(error.code, error.params, figures, error.field));
+}
+
+/** The sentence for a physics caution or planner finding. */
+export function wordWarning(t: TFunction, warning: Warning, figures: Figures): string {
+  return t(`warnings.${warning.code}`, wordParams(warning.code, warning.params, figures));
+}

@@ -168,4 +168,24 @@ describe('locales', () => {
       expect(lookup(RESOURCES[lng], 'app.unitWarnings')).toBeUndefined();
     },
   );
+
+  it('every figure a message names with a unit in its name (depthMm, limitPct, tempC, totalH) has that unit in physics’ table', () => {
+    const missing: string[] = [];
+    for (const [section, table] of [
+      ['errors', ERROR_PARAM_UNITS],
+      ['warnings', WARNING_PARAM_UNITS],
+    ] as const) {
+      for (const key of english) {
+        if (!key.startsWith(`${section}.`)) continue;
+        const units: Readonly<Record<string, string>> | undefined = (
+          table as Readonly<Record<string, Readonly<Record<string, string>> | undefined>>
+        )[key.slice(section.length + 1)];
+        for (const match of String(lookup(RESOURCES.en, key)).matchAll(/\{\{(\w+)\}\}/gu)) {
+          const name = match[1]!;
+          if (/(Mm|Pct|[a-z0-9]C|[a-z]H)$/u.test(name) && units?.[name] === undefined) missing.push(`${key}: ${name}`);
+        }
+      }
+    }
+    expect(missing).toEqual([]);
+  });
 });

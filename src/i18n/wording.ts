@@ -8,9 +8,7 @@ import type { TFunction } from 'i18next';
 import {
   convert,
   convertTemperatureDifference,
-  ERROR_CODES,
-  errorParamUnits,
-  warningParamUnits,
+  paramUnit,
   type ErrorCode,
   type InputError,
   type Params,
@@ -77,17 +75,12 @@ const KIND_OF_UNIT: Record<ValueUnit, FigureKind> = {
   ratio: 'number',
 };
 
-const isErrorCode = (code: ErrorCode | WarningCode): code is ErrorCode =>
-  (ERROR_CODES as readonly string[]).includes(code);
-
 /**
- * The kind of a figure: by the unit physics gives that param of that code (physics
- * `ERROR_PARAM_UNITS` / `WARNING_PARAM_UNITS`, range errors from the limits' own units); a param
- * physics gives no unit is a plain number (a count, a hardness in its own scale, a factor).
+ * The kind of a figure, by the unit physics gives it (physics `paramUnit`: a limit's unit for a
+ * range error, else the unit its name says); a figure of no unit is a plain number.
  */
 export function figureKind(code: ErrorCode | WarningCode, name: string, field?: string): FigureKind {
-  const units = isErrorCode(code) ? errorParamUnits(code, field) : warningParamUnits(code);
-  const unit = units[name];
+  const unit = paramUnit(code, name, field);
   return unit === undefined ? 'number' : KIND_OF_UNIT[unit];
 }
 

@@ -5,13 +5,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { LANGUAGES, RESOURCES } from '../../src/i18n/i18n';
-import {
-  CASE_CRITERION_IDS,
-  ERROR_CODES,
-  ERROR_PARAM_UNITS,
-  WARNING_CODES,
-  WARNING_PARAM_UNITS,
-} from '../../src/physics';
+import { CASE_CRITERION_IDS, ERROR_CODES, WARNING_CODES } from '../../src/physics';
 import { figureKind } from '../../src/i18n/wording';
 import { sourceFiles } from '../sourceFiles';
 import { HEADER_SCREEN, NAV_SCREENS } from '../../src/app/shell/screens';
@@ -144,48 +138,5 @@ describe('locales', () => {
       `app.safety.notes.${n}.text`,
     ]);
     expect(notes.filter((key) => !english.has(key))).toEqual([]);
-  });
-
-  it.each(LANGUAGES)(
-    '%s: a message whose figures carry a unit holds no unit of its own (one wording for the CLI and the app)',
-    (lng) => {
-      const problems: string[] = [];
-      for (const [section, table] of [
-        ['errors', ERROR_PARAM_UNITS],
-        ['warnings', WARNING_PARAM_UNITS],
-      ] as const) {
-        for (const [code, units] of Object.entries(table)) {
-          const message = String(lookup(RESOURCES[lng], `${section}.${code}`));
-          for (const name of Object.keys(units)) {
-            // The unit comes with the formatted figure; a symbol after it would be doubled.
-            if (new RegExp(`\\{\\{${name}\\}\\}\\s?(°C|°F|%C|%|mm|h)(?![\\p{L}])`, 'u').test(message))
-              problems.push(`${section}.${code}: ${name}`);
-          }
-        }
-      }
-      expect(problems).toEqual([]);
-      expect(lookup(RESOURCES[lng], 'app.unitErrors')).toBeUndefined();
-      expect(lookup(RESOURCES[lng], 'app.unitWarnings')).toBeUndefined();
-    },
-  );
-
-  it('every figure a message names with a unit in its name (depthMm, limitPct, tempC, totalH) has that unit in physics’ table', () => {
-    const missing: string[] = [];
-    for (const [section, table] of [
-      ['errors', ERROR_PARAM_UNITS],
-      ['warnings', WARNING_PARAM_UNITS],
-    ] as const) {
-      for (const key of english) {
-        if (!key.startsWith(`${section}.`)) continue;
-        const units: Readonly<Record<string, string>> | undefined = (
-          table as Readonly<Record<string, Readonly<Record<string, string>> | undefined>>
-        )[key.slice(section.length + 1)];
-        for (const match of String(lookup(RESOURCES.en, key)).matchAll(/\{\{(\w+)\}\}/gu)) {
-          const name = match[1]!;
-          if (/(Mm|Pct|[a-z0-9]C|[a-z]H)$/u.test(name) && units?.[name] === undefined) missing.push(`${key}: ${name}`);
-        }
-      }
-    }
-    expect(missing).toEqual([]);
   });
 });

@@ -12,4 +12,6 @@ export * from './backup';
 export * from './csv';
 export * from './transfer';
 export * from './calibration';
-export { INDEX, JOBS_STORE, LATEST_DB_VERSION } from './migrations';
+export { JOBS_STORE, LATEST_DB_VERSION } from './migrations';
+export type { Alternative } from './documents';
+export type { LogDatabase, PouchFactory } from './pouch';

@@ -13,6 +13,8 @@ export interface ProfileChartData {
   /** The case criterion in HRC, drawn across the hardness scale: the hardness curve meets it at the ECD. */
   limitHrc: number;
   ecd: number;
+  /** A tick's figure in the user's language (the chart module imports nothing of the app's, so it stays out of the first screen's chunks). */
+  formatTick: (value: number, digits: number) => string;
   /** Legend names in full; axes carry only the unit symbols so they fit a phone. */
   labels: {
     depth: string;
@@ -24,6 +26,17 @@ export interface ProfileChartData {
     carbonAxis: string;
     hardnessAxis: string;
   };
+}
+
+/**
+ * Tick labels in the app's language, with as many decimals as the tick spacing needs (uPlot's
+ * own would use the browser's language, and its number format costs a long task to make).
+ */
+function tickLabels(splits: number[], formatTick: ProfileChartData['formatTick']): string[] {
+  const spacing = splits.length > 1 ? Math.abs(splits[1]! - splits[0]!) : 1;
+  // The decimals of the spacing (0.25 → 2, 5 → 0), read off its text to ten places.
+  const digits = Math.min(6, spacing.toFixed(10).replace(/0+$/, '').split('.')[1]?.length ?? 0);
+  return splits.map((v) => formatTick(v, digits));
 }
 
 const cssVar = (name: string) => getComputedStyle(document.documentElement).getPropertyValue(name).trim() || '#888';
@@ -44,6 +57,7 @@ function options(shown: () => ProfileChartData, width: number): uPlot.Options {
     ticks: { stroke: grid },
     font: '13px system-ui, sans-serif',
     labelFont: '600 13px system-ui, sans-serif',
+    values: (_u: uPlot, splits: number[]) => tickLabels(splits, shown().formatTick),
     // eslint-disable-next-line @typescript-eslint/no-unsafe-enum-assignment -- uPlot's Side is an ambient const enum, which isolated modules cannot name; its values are 0–3.
     ...(side === undefined ? {} : { side }),
   });

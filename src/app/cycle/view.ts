@@ -85,6 +85,7 @@ export function cycleView(
       thresholdPct: threshold,
       limitHrc: basis.limitHrc,
       ecd: toUnit(simulation.effectiveCaseDepthMm, units.depth),
+      formatTick: (value, digits) => show.number(value, digits),
       labels: {
         depth: t('app.cycle.chartDepth', { unit: units.depth }),
         carbon: t('app.cycle.chartCarbon'),

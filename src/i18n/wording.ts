@@ -1,6 +1,6 @@
 /**
  * Physics errors and cautions in words, for the app and the CLI alike. Every figure of a message
- * goes through the one formatter with its quantity's unit and precision, so no raw float, no
+ * goes through the one formatter with the unit physics gives it (physics `paramUnits.ts`) and its precision, so no raw float, no
  * point-decimal in a German sentence and no unit missing from a figure: the messages in the
  * locales hold no units next to their placeholders, the formatted figure brings its own.
  */
@@ -8,9 +8,11 @@ import type { TFunction } from 'i18next';
 import {
   convert,
   convertTemperatureDifference,
+  paramUnit,
   type ErrorCode,
   type InputError,
   type Params,
+  type ValueUnit,
   type Warning,
   type WarningCode,
 } from '../physics';
@@ -61,66 +63,25 @@ export function messageFigures(units: MessageUnits, locale: string): Figures {
   };
 }
 
-/** Params named for no unit (`value`, `min`, …) take the kind their message is about. */
-const UNNAMED = new Set(['value', 'min', 'max', 'previous']);
-
-/** The kind of the unnamed params of a code, where neither their name nor the field says it. */
-const CODE_KINDS: Partial<Record<ErrorCode | WarningCode, FigureKind>> = {
-  'time.notPositive': 'time',
-  'time.tooLong': 'time',
-  'time.limitTooShort': 'time',
-  'temperature.outOfRange': 'temperature',
-  'temperature.noAustenite': 'temperature',
-  'carbon.negative': 'carbon',
-  'carbon.aboveMax': 'carbon',
-  'depth.notPositive': 'depth',
-  'depth.tooDeep': 'depth',
-  'composition.outOfRange': 'alloy',
-  'totalCaseMargin.outOfRange': 'carbon',
-  'temperatureTolerance.outOfRange': 'temperatureChange',
-  'shape.sizeOutOfRange': 'depth',
-  'history.notIncreasing': 'time',
-  'history.temperatureTooHigh': 'temperature',
-  'traverse.depthNegative': 'depth',
-  'traverse.depthRepeated': 'depth',
-  'traverse.depthNotIncreasing': 'depth',
-  // Typed in its own unit, named by a `unit` param: a plain figure.
-  'temperature.belowAbsoluteZero': 'number',
-  'hardness.outOfTable': 'number',
-  'hardness.outsideScale': 'number',
-  'hardness.outsideScaleOtherUnit': 'number',
-  'diffusivityFactor.outOfRange': 'number',
-  'calibration.factorOutOfRange': 'number',
-  'calibration.tooFewJobs': 'number',
-  'history.tooShort': 'number',
-  'steps.tooMany': 'number',
-  'traverse.tooFewPoints': 'number',
-  'traverse.tooManyPoints': 'number',
+/** The kind of figure each unit physics gives a param is shown as. */
+const KIND_OF_UNIT: Record<ValueUnit, FigureKind> = {
+  C: 'temperature',
+  dC: 'temperatureChange',
+  h: 'time',
+  mm: 'depth',
+  '%C': 'carbon',
+  '%': 'alloy',
+  'm/s': 'number',
+  ratio: 'number',
 };
 
-/** The kind a name's unit suffix says (`depthMm`, `limitPct`, `tempC`, `totalH`, `deltaC`). */
-function kindOfName(name: string): FigureKind | undefined {
-  if (name === 'deltaC') return 'temperatureChange';
-  if (name.endsWith('Mm')) return 'depth';
-  if (name.endsWith('Pct')) return 'carbon';
-  if (/[a-z0-9]C$/u.test(name)) return 'temperature';
-  if (/[a-z]H$/u.test(name)) return 'time';
-  return undefined;
-}
-
-/** The kind of a request field (`steps.2.timeH`, `targetEcdMm`): its deepest part that names a unit. */
-function kindOfField(field: string | undefined): FigureKind | undefined {
-  if (field === undefined) return undefined;
-  for (const part of field.split('.').reverse()) {
-    const kind = kindOfName(part);
-    if (kind) return kind;
-  }
-  return undefined;
-}
-
+/**
+ * The kind of a figure, by the unit physics gives it (physics `paramUnit`: a limit's unit for a
+ * range error, else the unit its name says); a figure of no unit is a plain number.
+ */
 export function figureKind(code: ErrorCode | WarningCode, name: string, field?: string): FigureKind {
-  if (UNNAMED.has(name)) return CODE_KINDS[code] ?? kindOfField(field) ?? 'number';
-  return kindOfName(name) ?? 'number';
+  const unit = paramUnit(code, name, field);
+  return unit === undefined ? 'number' : KIND_OF_UNIT[unit];
 }
 
 /** Text params that hold a unit code ("C", "HV"): shown as its symbol. */

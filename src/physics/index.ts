@@ -113,6 +113,7 @@ export {
 } from './cycle/recipe';
 export { readRecipe } from './cycle/readRecipe';
 export { LIMITS, MAX_STEPS, TEXT_LENGTH_LIMITS, checkLimit, withinLimit, type Limit, type ValueUnit } from './limits';
+export { ERROR_PARAM_UNITS, paramUnit, unitOfName, type ParamUnits } from './paramUnits';
 export {
   readRequest,
   specAt,
@@ -126,12 +127,11 @@ export {
   CONVERT_REQUEST,
   DEPTH_REQUEST,
   EQUIVALENT_TIME_REQUEST,
-  PLAN_REQUEST,
-  RECIPE_REQUEST,
-  REQUESTS,
   TEMPERATURE_REQUEST,
   TIME_REQUEST,
 } from './requestTables';
+export { PLAN_REQUEST, RECIPE_REQUEST } from './cycle/requestTables';
+export { REQUESTS } from './requests';
 export { runCycle, simulateCycle } from './cycle/simulate';
 export { cycleDepthBand, type CycleBand, type CycleBandOptions } from './cycle/band';
 /** Reproducible pseudo-random numbers, for synthetic data (the demo log), never for anything secret. */

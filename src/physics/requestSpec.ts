@@ -6,10 +6,10 @@
  * the job record builds its schema from the same description, and the app its form reader.
  */
 import { CONVERTIBLE_RANGE, HARDNESS_SCALE_RANGE, type Hardness } from './hardness';
-import { checkLimit, type Limit } from './limits';
+import { checkLimit, LIMITS, type Limit } from './limits';
 import { readOptionalHardness } from './readHardness';
 import { fail, ok, type ErrorCode, type InputError, type Result } from './result';
-import type { Composition } from './steel';
+import { ALLOY_ELEMENTS, type Composition } from './steel';
 import { asFields, readComposition, readNumber, shownValue, type Fields } from './validate';
 
 export interface NumberSpec {
@@ -266,11 +266,17 @@ export function readRequest<F extends FieldsSpec>(spec: F, request: unknown): Re
   return fields.ok ? (readFields(spec, fields.value) as Result<ReadOf<F>>) : fields;
 }
 
+const ELEMENT: NumberSpec = { type: 'number', limit: LIMITS.alloyElement };
+
 /** The description of the field at a dotted path (`steps.2.durationH`, `boost.temperatureC`), if there is one. */
 export function specAt(spec: FieldsSpec, path: string): FieldSpec | undefined {
   let fields: FieldsSpec | undefined = spec;
   let found: FieldSpec | undefined;
   for (const part of path.split('.')) {
+    if (found?.type === 'composition') {
+      // Each element is a number within the alloy limit.
+      return (ALLOY_ELEMENTS as readonly string[]).includes(part) ? ELEMENT : undefined;
+    }
     if (found?.type === 'list') {
       if (!/^\d+$/u.test(part)) return undefined;
       found = found.item;

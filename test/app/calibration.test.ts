@@ -156,8 +156,17 @@ describe('the calculators with a calibrated furnace', () => {
       { ...DEFAULT_CYCLE_FORM, model: 'tibbetts' },
       { ...settings, calibrationFor: (m) => calibrationState([f1], 'F1', m) },
     ).result!;
+    // A factor fitted for Ågren is not applied to Tibbetts: the recipe says 1, and the result is the
+    // published model's own (run here through a replacement D, not the recipe's factor).
     expect(tibbetts.calibration.kind).toBe('otherModel');
-    expect(tibbetts.simulation.effectiveCaseDepthMm).toBeCloseTo(runCycle(tibbetts.recipe).effectiveCaseDepthMm, 12);
+    expect(tibbetts.recipe.diffusivityFactor ?? 1).toBe(1);
+    const { diffusivityFactor: _one, ...plain } = tibbetts.recipe;
+    const published = runCycle(plain, 1, { diffusivity: DIFFUSIVITY_MODELS.tibbetts.diffusivity });
+    expect(tibbetts.simulation.effectiveCaseDepthMm).toBeCloseTo(published.effectiveCaseDepthMm, 12);
+    const scaled = runCycle(plain, 1, {
+      diffusivity: (tempK, carbonPct) => 1.21 * DIFFUSIVITY_MODELS.tibbetts.diffusivity(tempK, carbonPct),
+    });
+    expect(scaled.effectiveCaseDepthMm / tibbetts.simulation.effectiveCaseDepthMm).toBeGreaterThan(1.05);
   });
 });
 

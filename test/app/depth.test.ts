@@ -47,18 +47,18 @@ describe('computeDepth', () => {
   it('places a parse error on its field, and reports every unreadable field at once', () => {
     const out = computeDepth(form({ temperature: field('9x5', 'C'), carbon: field('') }), settings);
     expect(out.result).toBeUndefined();
-    expect(out.errors.temperature?.code).toBe('number.invalid');
-    expect(out.errors.carbon?.code).toBe('number.empty');
+    expect(out.errors.temperatureC?.code).toBe('number.invalid');
+    expect(out.errors.carbonPotentialPct?.code).toBe('number.empty');
   });
 
   it('places range errors from physics on the field named by the error', () => {
-    expect(computeDepth(form({ temperature: field('1300', 'C') }), settings).errors.temperature?.code).toBe(
+    expect(computeDepth(form({ temperature: field('1300', 'C') }), settings).errors.temperatureC?.code).toBe(
       'temperature.outOfRange',
     );
-    expect(computeDepth(form({ threshold: field('0.95') }), settings).errors.threshold?.code).toBe(
+    expect(computeDepth(form({ threshold: field('0.95') }), settings).errors.thresholdCarbonPct?.code).toBe(
       'threshold.outsideProfile',
     );
-    expect(computeDepth(form({ carbon: field('0.1') }), settings).errors.carbon?.code).toBe(
+    expect(computeDepth(form({ carbon: field('0.1') }), settings).errors.carbonPotentialPct?.code).toBe(
       'carbon.surfaceNotAboveCore',
     );
     const custom = computeDepth(

@@ -1,17 +1,16 @@
-/** Converts the typed value into every unit of its quantity (hardness marked approximate). */
+/** Converts the typed value into every unit of its quantity (hardness marked approximate), read by the `convert` request's description. */
 import { computed } from '@preact/signals';
-import { convertRequest, type ConversionResult } from '../../physics';
-import { readField } from '../ui/fieldText';
-import type { Outcome } from '../ui/outcome';
+import { CONVERT_REQUEST, convertRequest, type ConversionResult } from '../../physics';
+import { NO_ERRORS, type Outcome } from '../ui/outcome';
+import { placeError, readForm, required } from '../ui/readForm';
 import { convertForm, quantityOfForm, unitOfForm, type ConvertForm } from './state';
 
 export function computeConversion(form: ConvertForm): Outcome<ConversionResult> {
   const quantity = quantityOfForm(form);
-  const from = unitOfForm(form, quantity);
-  const value = readField(form.value[quantity], 'value');
-  if (!value.ok) return { errors: { value: value.error } };
-  const result = convertRequest({ value: value.value, from });
-  return result.ok ? { errors: {}, result: result.value } : { errors: { value: result.error } };
+  const read = readForm(CONVERT_REQUEST, { value: required(form.value[quantity]), from: unitOfForm(form, quantity) });
+  if (Object.keys(read.errors).length > 0) return { errors: read.errors };
+  const result = convertRequest(read.request);
+  return result.ok ? { errors: NO_ERRORS, result: result.value } : placeError(result.error, read.fields);
 }
 
 export const conversionOutcome = computed(() => computeConversion(convertForm.value));

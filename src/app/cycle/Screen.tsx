@@ -1,5 +1,6 @@
 /** Cycle editor: steps (add, remove, reorder, duplicate), part shape, steel, model, threshold, furnace; results, range, chart and table. */
 import { useMemo } from 'preact/hooks';
+import { sizePath } from '../fields/shape';
 import { isModelId } from '../../physics';
 import { defaults, model, theme } from '../settings/state';
 import { Answer } from '../ui/Answer';
@@ -163,16 +164,23 @@ function CyclePart() {
         shape={form.shape}
         size={form.size}
         onChange={setShape}
-        error={word(errors.size)}
+        error={word(errors[sizePath(form.shape) ?? ''])}
         ctx={ctx}
       />
-      <SteelFields idPrefix="cycle-steel" steel={form.steel} onChange={setCycle('steel')} errors={errors} word={word} />
+      <SteelFields
+        idPrefix="cycle-steel"
+        steel={form.steel}
+        onChange={setCycle('steel')}
+        errors={errors}
+        path="steel."
+        word={word}
+      />
       <ModelField id="cycle-model" value={form.model} onChange={setCycle('model')} ctx={ctx} />
       <ThresholdField
         id="cycle-threshold"
         value={form.threshold}
         onInput={setCycle('threshold')}
-        error={word(errors.threshold)}
+        error={word(errors.thresholdCarbonPct)}
         show={show}
       />
       <FurnaceField id="cycle-furnace" model={isModelId(form.model) ? form.model : model.value} ctx={ctx} />

@@ -91,6 +91,7 @@ export function StepCard({
         placeholder={t('app.cycle.stepNamePlaceholder')}
         maxLength={TEXT_LENGTH_LIMITS.label}
         onInput={(v) => onChange({ label: v })}
+        error={err('label')}
       />
       <div class="field-grid field-grid-3">
         <NumberField

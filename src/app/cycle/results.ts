@@ -1,12 +1,13 @@
-/** Reads the cycle form into a Recipe (°C, h, mm, m/s) and runs it through the simulate adapter. */
+/** Reads the cycle form into a Recipe (°C, h, mm, m/s) by the recipe's request description and simulates it. */
 import { computed } from '@preact/signals';
 import {
-  ALLOY_ELEMENTS,
   type DiffusivityModelId,
   type Hardness,
+  type InputError,
   isModelId,
+  RECIPE_REQUEST,
+  readRecipe,
   type Recipe,
-  type RecipeStep,
   simulateCycle,
   type SimulationResult,
 } from '../../physics';
@@ -17,13 +18,12 @@ import {
   factorOf,
   type CalibrationState,
 } from '../settings/calibration';
-import { BETA_INPUT_SCALE, defaults, model } from '../settings/state';
-import { readField, readOptionalField } from '../ui/fieldText';
+import { defaults, model } from '../settings/state';
 import { deferred } from '../ui/Deferred';
-import { FieldReader, NO_ERRORS, placeError, type Outcome } from '../ui/outcome';
-import { readShape } from '../fields/shape';
-import { readComposition } from '../fields/steel';
-import { PHYSICS_UNITS } from '../ui/units';
+import { NO_ERRORS, type Outcome } from '../ui/outcome';
+import { orDefault, placeError, readForm, type FormValues } from '../ui/readForm';
+import { shapeValues } from '../fields/shape';
+import { steelComposition } from '../fields/steel';
 import { cycleForm, type CycleForm } from './state';
 
 export interface CycleDefaults {
@@ -43,94 +43,63 @@ export interface CycleResult {
   calibration: CalibrationState;
 }
 
-/** Recipe field names → form field names where they differ (the planner's requests share them). */
-export const CYCLE_FIELD_MAP: Readonly<Record<string, string>> = {
-  'steel.coreCarbonPct': 'coreCarbon',
-  thresholdCarbonPct: 'threshold',
-  'shape.thicknessMm': 'size',
-  'shape.diameterMm': 'size',
-  ...Object.fromEntries(ALLOY_ELEMENTS.map((e) => [`steel.composition.${e}`, `composition.${e}`])),
-};
-
-export function formFields(form: CycleForm): ReadonlySet<string> {
-  return new Set([
-    'coreCarbon',
-    'threshold',
-    'size',
-    ...ALLOY_ELEMENTS.map((e) => `composition.${e}`),
-    ...form.steps.flatMap((_, i) =>
-      ['durationH', 'startTempC', 'endTempC', 'carbonPotentialPct', 'betaMPerS'].map((f) => `steps.${i}.${f}`),
-    ),
-  ]);
-}
-
 /** The form fields a cycle and a plan share: steel, model, ECD threshold, shape. */
 export type BaseForm = Pick<CycleForm, 'steel' | 'model' | 'threshold' | 'shape' | 'size'>;
 
-/** Steel, model, threshold, case criterion and shape of a cycle or plan request (errors into `read`); undefined when a field cannot be read. */
-export function readBaseFields(
-  form: BaseForm,
-  settings: CycleDefaults,
-  read: FieldReader,
-): Omit<Recipe, 'steps' | 'name'> | undefined {
-  const coreCarbonPct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
-  const composition = read.value(readComposition(form.steel));
-  const threshold = read.value(readOptionalField(form.threshold, 'threshold'));
-  const shape = readShape(form.shape, form.size, read);
-  if (coreCarbonPct === undefined || !shape) return undefined;
+/** Steel, model, threshold, case criterion, margin and shape of a cycle or plan, laid out as the request (physics `RECIPE_REQUEST`). */
+export function baseValues(form: BaseForm, settings: CycleDefaults): FormValues {
   return {
-    steel: { grade: form.steel.grade, coreCarbonPct, ...(composition ? { composition } : {}) },
+    steel: { grade: form.steel.grade, coreCarbonPct: form.steel.coreCarbon, composition: steelComposition(form.steel) },
     model: isModelId(form.model) ? form.model : settings.model,
-    thresholdCarbonPct: threshold ?? settings.ecdThresholdPct,
+    thresholdCarbonPct: orDefault(form.threshold, settings.ecdThresholdPct),
     ...(settings.ecdHardnessLimit ? { ecdHardnessLimit: settings.ecdHardnessLimit } : {}),
     totalCaseMarginPct: settings.totalCaseMarginPct,
-    shape,
+    shape: shapeValues(form.shape, form.size),
   };
 }
 
+/** The cycle form laid out as a `simulate` request: the base and every step, β empty meaning the settings' β. */
+export function cycleValues(form: CycleForm, settings: CycleDefaults): FormValues {
+  return {
+    ...baseValues(form, settings),
+    steps: form.steps.map((s) => ({
+      durationH: s.duration,
+      startTempC: s.startTemp,
+      endTempC: s.endTemp,
+      carbonPotentialPct: s.neutral ? null : s.carbonPotential,
+      betaMPerS: orDefault(s.beta, settings.betaMPerS),
+      ...(s.label.trim() ? { label: s.label } : {}),
+    })),
+  };
+}
+
+/** The recipe of the form (°C, h, mm, m/s, defaults filled in), or the errors by request path. */
 export function buildRecipe(
   form: CycleForm,
   settings: CycleDefaults,
-): { recipe?: Recipe; errors: FieldReader['errors'] } {
-  const read = new FieldReader();
-  const steps: (RecipeStep | undefined)[] = form.steps.map((s, i) => {
-    const durationH = read.value(readField(s.duration, `steps.${i}.durationH`, PHYSICS_UNITS.time));
-    const startTempC = read.value(readField(s.startTemp, `steps.${i}.startTempC`, PHYSICS_UNITS.temperature));
-    const endTempC = read.value(readField(s.endTemp, `steps.${i}.endTempC`, PHYSICS_UNITS.temperature));
-    const carbonPotentialPct = s.neutral
-      ? null
-      : read.value(readField(s.carbonPotential, `steps.${i}.carbonPotentialPct`));
-    const betaTyped = read.value(readOptionalField(s.beta, `steps.${i}.betaMPerS`));
-    if (
-      durationH === undefined ||
-      startTempC === undefined ||
-      endTempC === undefined ||
-      carbonPotentialPct === undefined
-    )
-      return undefined;
-    return {
-      ...(s.label.trim() ? { label: s.label.trim() } : {}),
-      durationH,
-      startTempC,
-      endTempC,
-      carbonPotentialPct,
-      betaMPerS: betaTyped === undefined ? settings.betaMPerS : betaTyped * BETA_INPUT_SCALE,
-    };
-  });
-  const base = readBaseFields(form, settings, read);
-  if (read.failed || !base) return { errors: read.errors };
-  return { errors: NO_ERRORS, recipe: { ...base, steps: steps as RecipeStep[] } };
+): { recipe?: Recipe; errors: Record<string, InputError>; fields: ReadonlySet<string> } {
+  const read = readForm(RECIPE_REQUEST, cycleValues(form, settings));
+  if (Object.keys(read.errors).length > 0) return { errors: read.errors, fields: read.fields };
+  const recipe = readRecipe(read.request);
+  if (!recipe.ok) return { ...placeError(recipe.error, read.fields), fields: read.fields };
+  return { recipe: recipe.value, errors: NO_ERRORS, fields: read.fields };
 }
 
 export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<CycleResult> {
-  const { recipe, errors } = buildRecipe(form, settings);
-  if (!recipe) return { errors };
-  const calibration: CalibrationState = settings.calibrationFor?.(recipe.model ?? settings.model) ?? { kind: 'none' };
+  const calibration: CalibrationState = settings.calibrationFor?.(
+    isModelId(form.model) ? form.model : settings.model,
+  ) ?? { kind: 'none' };
   const factor = factorOf(calibration);
-  const calibrated: Recipe = factor === 1 ? recipe : { ...recipe, diffusivityFactor: factor };
-  const simulation = simulateCycle(calibrated);
-  if (!simulation.ok) return placeError(simulation.error, CYCLE_FIELD_MAP, formFields(form));
-  return { errors: NO_ERRORS, result: { recipe: calibrated, simulation: simulation.value, calibration } };
+  const read = readForm(RECIPE_REQUEST, {
+    ...cycleValues(form, settings),
+    ...(factor === 1 ? {} : { diffusivityFactor: factor }),
+  });
+  if (Object.keys(read.errors).length > 0) return { errors: read.errors };
+  const recipe = readRecipe(read.request);
+  if (!recipe.ok) return placeError(recipe.error, read.fields);
+  const simulation = simulateCycle(recipe.value);
+  if (!simulation.ok) return placeError(simulation.error, read.fields);
+  return { errors: NO_ERRORS, result: { recipe: recipe.value, simulation: simulation.value, calibration } };
 }
 
 /** The settings a cycle calculation reads, with the chosen furnace's calibration (shared by the planner). */

@@ -15,7 +15,7 @@ import { SteelFields } from '../fields/SteelFields';
 import { useScreenContext } from '../settings/screenContext';
 import { LogSaveButton } from '../log/save/LogActions';
 import { depthLogEntry } from './logEntry';
-import { depthOutcome, shownDepthForm, solveFor, usesField } from './results';
+import { carbonPath, depthOutcome, shownDepthForm, solveFor, usesField } from './results';
 import { depthView } from './rows';
 import { CARBON_SOURCES, depthForm, SOLVE_FOR } from './state';
 import './screen.css';
@@ -89,7 +89,7 @@ function DepthInputs() {
               unit={units.temperature}
               value={form.temperature}
               onInput={setDepth('temperature')}
-              error={word(errors.temperature)}
+              error={word(errors.temperatureC)}
             />
           )}
           {usesField(mode, 'time') && (
@@ -99,7 +99,7 @@ function DepthInputs() {
               unit={units.time}
               value={form.time}
               onInput={setDepth('time')}
-              error={word(errors.time)}
+              error={word(errors.timeH)}
             />
           )}
           {usesField(mode, 'targetDepth') && (
@@ -109,7 +109,7 @@ function DepthInputs() {
               unit={units.depth}
               value={form.targetDepth}
               onInput={setDepth('targetDepth')}
-              error={word(errors.targetDepth)}
+              error={word(errors.targetDepthMm)}
             />
           )}
         </div>
@@ -127,13 +127,13 @@ function DepthInputs() {
             unitLabel={UNIT_SYMBOLS.pctC}
             value={form.carbon}
             onInput={setDepth('carbon')}
-            error={word(errors.carbon)}
+            error={word(errors[carbonPath(form)])}
           />
           <ThresholdField
             id="depth-threshold"
             value={form.threshold}
             onInput={setDepth('threshold')}
-            error={word(errors.threshold)}
+            error={word(errors.thresholdCarbonPct)}
             show={show}
           />
         </div>
@@ -142,6 +142,7 @@ function DepthInputs() {
           steel={form.steel}
           onChange={setDepth('steel')}
           errors={errors}
+          path=""
           word={word}
         />
         <FurnaceField id="depth-furnace" model={model.value} ctx={ctx} />

@@ -7,22 +7,8 @@ import type { DepthResult } from './results';
 
 export function depthLogEntry(result: DepthResult, gradeId: string): LogEntry {
   const { figures: f, request } = result;
-  const common = {
-    ...(request.carbonPotentialPct === undefined ? {} : { carbonPotentialPct: request.carbonPotentialPct }),
-    ...(request.surfaceCarbonPct === undefined ? {} : { surfaceCarbonPct: request.surfaceCarbonPct }),
-    coreCarbonPct: request.coreCarbonPct,
-    thresholdCarbonPct: request.thresholdCarbonPct,
-    model: request.model,
-    composition: request.composition,
-    ...(request.diffusivityFactor === undefined ? {} : { diffusivityFactor: request.diffusivityFactor }),
-    temperatureToleranceC: request.temperatureToleranceC,
-  };
-  const inputs: JobInputs =
-    result.solveFor === 'time'
-      ? { kind: 'time', temperatureC: f.temperatureC, targetDepthMm: result.figures.targetDepthMm, ...common }
-      : result.solveFor === 'temperature'
-        ? { kind: 'temperature', timeH: f.timeH, targetDepthMm: result.figures.targetDepthMm, ...common }
-        : { kind: 'depth', temperatureC: f.temperatureC, timeH: f.timeH, ...common };
+  // The request exactly as physics ran it, under the calculator it went to.
+  const inputs = { kind: result.solveFor, ...request } as JobInputs;
   const grade = findGrade(gradeId);
   return {
     ...(result.calibration.kind === 'none' ? {} : { furnace: result.calibration.furnace }),

@@ -4,8 +4,10 @@
  */
 import { computed } from '@preact/signals';
 import {
-  ALLOY_ELEMENTS,
   caseDepth,
+  DEPTH_REQUEST,
+  TEMPERATURE_REQUEST,
+  TIME_REQUEST,
   temperatureForCaseDepth,
   timeForCaseDepth,
   type CaseDepthResult,
@@ -23,14 +25,13 @@ import {
   type CalibrationState,
 } from '../settings/calibration';
 import { defaults, model } from '../settings/state';
-import { readField, readOptionalField } from '../ui/fieldText';
 import { deferred } from '../ui/Deferred';
-import { FieldReader, NO_ERRORS, placeError, type Outcome } from '../ui/outcome';
-import { readComposition } from '../fields/steel';
-import { PHYSICS_UNITS } from '../ui/units';
+import { NO_ERRORS, type Outcome } from '../ui/outcome';
+import { orDefault, placeError, readForm, required, type FormValues } from '../ui/readForm';
+import { steelComposition } from '../fields/steel';
 import { depthForm, type DepthForm, type SolveFor } from './state';
 
-/** The request sent to physics (°C, h, mm, %C): what a saved job records as its inputs. */
+/** The request sent to physics (°C, h, mm, %C): what a saved job records as its inputs (physics `DEPTH_REQUEST` and its kin). */
 export interface DepthRequest {
   temperatureC?: number;
   timeH?: number;
@@ -70,27 +71,6 @@ export interface DepthDefaults {
   calibration?: CalibrationState;
 }
 
-/** Physics request fields → form fields. */
-const FIELD_MAP: Record<string, string> = {
-  temperatureC: 'temperature',
-  timeH: 'time',
-  targetDepthMm: 'targetDepth',
-  carbonPotentialPct: 'carbon',
-  surfaceCarbonPct: 'carbon',
-  coreCarbonPct: 'coreCarbon',
-  thresholdCarbonPct: 'threshold',
-};
-
-const FORM_FIELDS = new Set([
-  'temperature',
-  'time',
-  'targetDepth',
-  'carbon',
-  'coreCarbon',
-  'threshold',
-  ...ALLOY_ELEMENTS.map((e) => `composition.${e}`),
-]);
-
 export function solveFor(form: DepthForm): SolveFor {
   return form.solveFor === 'time' || form.solveFor === 'temperature' ? form.solveFor : 'depth';
 }
@@ -102,45 +82,45 @@ export function usesField(mode: SolveFor, name: 'temperature' | 'time' | 'target
   return mode !== 'depth';
 }
 
-export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<DepthResult> {
-  const mode = solveFor(form);
-  const read = new FieldReader();
-  const temperatureC = usesField(mode, 'temperature')
-    ? read.value(readField(form.temperature, 'temperature', PHYSICS_UNITS.temperature))
-    : undefined;
-  const timeH = usesField(mode, 'time') ? read.value(readField(form.time, 'time', PHYSICS_UNITS.time)) : undefined;
-  const targetDepthMm = usesField(mode, 'targetDepth')
-    ? read.value(readField(form.targetDepth, 'targetDepth', PHYSICS_UNITS.depth))
-    : undefined;
-  const carbonPct = read.value(readField(form.carbon, 'carbon'));
-  const corePct = read.value(readField(form.steel.coreCarbon, 'coreCarbon'));
-  const thresholdPct = read.value(readOptionalField(form.threshold, 'threshold'));
-  const composition = read.value(readComposition(form.steel));
-  if (read.failed || corePct === undefined || carbonPct === undefined || composition === undefined)
-    return { errors: read.errors };
+const REQUEST_OF_MODE = { depth: DEPTH_REQUEST, time: TIME_REQUEST, temperature: TEMPERATURE_REQUEST } as const;
 
-  const calibration = settings.calibration ?? { kind: 'none' };
-  const factor = factorOf(calibration);
-  const request: DepthRequest = {
-    ...(temperatureC === undefined ? {} : { temperatureC }),
-    ...(timeH === undefined ? {} : { timeH }),
-    ...(targetDepthMm === undefined ? {} : { targetDepthMm }),
-    [form.carbonSource === 'surface' ? 'surfaceCarbonPct' : 'carbonPotentialPct']: carbonPct,
-    coreCarbonPct: corePct,
-    thresholdCarbonPct: thresholdPct ?? settings.ecdThresholdPct,
+/** The request path of the carbon input: a surface carbon or a carbon potential, as the form says. */
+export const carbonPath = (form: DepthForm) =>
+  form.carbonSource === 'surface' ? 'surfaceCarbonPct' : 'carbonPotentialPct';
+
+/** The form laid out as the request of its mode, with the settings for what the form does not hold. */
+function depthValues(form: DepthForm, settings: DepthDefaults, factor: number): FormValues {
+  const mode = solveFor(form);
+  return {
+    ...(usesField(mode, 'temperature') ? { temperatureC: form.temperature } : {}),
+    ...(usesField(mode, 'time') ? { timeH: form.time } : {}),
+    ...(usesField(mode, 'targetDepth') ? { targetDepthMm: form.targetDepth } : {}),
     model: settings.model,
-    composition,
+    composition: steelComposition(form.steel),
+    coreCarbonPct: form.steel.coreCarbon,
+    // The request takes one of the two; the screen asks for the one its toggle names.
+    [carbonPath(form)]: required(form.carbon),
+    thresholdCarbonPct: orDefault(form.threshold, settings.ecdThresholdPct),
     ...(factor === 1 ? {} : { diffusivityFactor: factor }),
     temperatureToleranceC: settings.temperatureToleranceC,
     totalCaseMarginPct: settings.totalCaseMarginPct,
   };
+}
+
+export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<DepthResult> {
+  const mode = solveFor(form);
+  const calibration = settings.calibration ?? { kind: 'none' };
+  const read = readForm(REQUEST_OF_MODE[mode], depthValues(form, settings, factorOf(calibration)));
+  if (Object.keys(read.errors).length > 0) return { errors: read.errors };
+  // Laid out from the request's description and read by it: physics checks the rest.
+  const request = read.request as unknown as DepthRequest;
   const calculated =
     mode === 'time'
       ? timeForCaseDepth(request)
       : mode === 'temperature'
         ? temperatureForCaseDepth(request)
         : caseDepth(request);
-  if (!calculated.ok) return placeError(calculated.error, FIELD_MAP, FORM_FIELDS);
+  if (!calculated.ok) return placeError(calculated.error, read.fields);
   const limit = settings.ecdHardnessLimit ? { ecdHardnessLimit: settings.ecdHardnessLimit } : {};
   return {
     errors: NO_ERRORS,

@@ -10,11 +10,14 @@ export interface SteelFieldsProps {
   idPrefix: string;
   steel: SteelForm;
   onChange: (next: SteelForm) => void;
+  /** Errors by request path. */
   errors: Record<string, InputError>;
+  /** Where the steel's fields sit in the request: '' (closed-form requests) or 'steel.' (cycles and plans). */
+  path: '' | 'steel.';
   word: (error: InputError | undefined) => string | undefined;
 }
 
-export function SteelFields({ idPrefix, steel, onChange, errors, word }: SteelFieldsProps) {
+export function SteelFields({ idPrefix, steel, onChange, errors, path, word }: SteelFieldsProps) {
   const t = useT();
   const grade = findGrade(steel.grade);
   const choices = [
@@ -46,7 +49,7 @@ export function SteelFields({ idPrefix, steel, onChange, errors, word }: SteelFi
               unitLabel={UNIT_SYMBOLS.pct}
               value={steel.composition[element]}
               onInput={(v) => onChange({ ...steel, composition: { ...steel.composition, [element]: v } })}
-              error={word(errors[`composition.${element}`])}
+              error={word(errors[`${path}composition.${element}`])}
             />
           ))}
         </div>
@@ -57,7 +60,7 @@ export function SteelFields({ idPrefix, steel, onChange, errors, word }: SteelFi
         unitLabel={UNIT_SYMBOLS.pctC}
         value={steel.coreCarbon}
         onInput={(v) => onChange({ ...steel, coreCarbon: v })}
-        error={word(errors.coreCarbon)}
+        error={word(errors[`${path}coreCarbonPct`])}
       />
     </div>
   );

@@ -1,20 +1,22 @@
 /** The part's shape in a cycle form (cycle editor and planner): the kind, and a plate's thickness or a bar's diameter. */
-import { fail, type PartShape } from '../../physics';
-import { readField, type FieldText } from '../ui/fieldText';
-import type { FieldReader } from '../ui/outcome';
-import { PHYSICS_UNITS } from '../ui/units';
+import type { FieldText } from '../ui/fieldText';
 
 export const SHAPES = ['semi-infinite', 'plate', 'bar'] as const;
 export type ShapeKind = (typeof SHAPES)[number];
 
-/** The shape to send to physics (size errors on the form field `size`); undefined when the size cannot be read. */
-export function readShape(kind: string, size: FieldText, read: FieldReader): PartShape | undefined {
-  if (kind !== 'plate' && kind !== 'bar') return { kind: 'semi-infinite' };
-  const sizeMm = read.value(readField(size, 'size', PHYSICS_UNITS.depth));
-  if (sizeMm === undefined) return undefined;
-  if (!(sizeMm > 0)) {
-    read.value(fail('depth.notPositive', 'size', { value: sizeMm }));
-    return undefined;
-  }
-  return kind === 'plate' ? { kind: 'plate', thicknessMm: sizeMm } : { kind: 'bar', diameterMm: sizeMm };
+/** The shape laid out as the request's: a plate's thickness or a bar's diameter from the one size input. */
+export function shapeValues(
+  kind: string,
+  size: FieldText,
+): { kind: string; thicknessMm?: FieldText; diameterMm?: FieldText } {
+  if (kind === 'plate') return { kind, thicknessMm: size };
+  if (kind === 'bar') return { kind, diameterMm: size };
+  return { kind: 'semi-infinite' };
+}
+
+/** The request path of the size input, for its error. */
+export function sizePath(kind: string): string | undefined {
+  if (kind === 'plate') return 'shape.thicknessMm';
+  if (kind === 'bar') return 'shape.diameterMm';
+  return undefined;
 }

@@ -2,8 +2,8 @@
  * The steel part of a form, shared by the depth and cycle screens: a listed grade
  * (nominal composition) or a custom composition, and core carbon.
  */
-import { ALLOY_ELEMENTS, findGrade, fail, ok, type Composition, type Result } from '../../physics';
-import { field, readField, type FieldText } from '../ui/fieldText';
+import { ALLOY_ELEMENTS, findGrade, type Composition } from '../../physics';
+import { field, type FieldText } from '../ui/fieldText';
 
 export const CUSTOM_STEEL = 'custom';
 
@@ -32,20 +32,7 @@ export function chooseGrade(steel: SteelForm, gradeId: string): SteelForm {
   return { ...defaultSteel(gradeId), grade: gradeId };
 }
 
-/** The composition to send to physics: the grade's nominal one, or the custom entries (field names `composition.X`). */
-export function readComposition(steel: SteelForm): Result<Composition> {
-  const grade = findGrade(steel.grade);
-  if (grade) return ok(grade.composition);
-  const out: Partial<Composition> = {};
-  for (const element of ALLOY_ELEMENTS) {
-    const text = steel.composition[element];
-    if (text.text.trim() === '') {
-      out[element] = 0;
-      continue;
-    }
-    const value = readField(text, `composition.${element}`);
-    if (!value.ok) return value;
-    out[element] = value.value;
-  }
-  return out.Si === undefined ? fail('field.missing', 'composition') : ok(out as Composition);
+/** The composition for a request: the grade's nominal one, or the custom entries as typed (read by the request's description). */
+export function steelComposition(steel: SteelForm): Composition | SteelForm['composition'] {
+  return findGrade(steel.grade)?.composition ?? steel.composition;
 }

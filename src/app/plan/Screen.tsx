@@ -4,6 +4,7 @@
  * plan opened in the cycle editor or saved to the log.
  */
 import { useMemo } from 'preact/hooks';
+import { sizePath } from '../fields/shape';
 import { isModelId } from '../../physics';
 import { cycleFormOfRecipe } from '../cycle/fromRecipe';
 import { CycleTabs } from '../cycle/CycleTabs';
@@ -183,7 +184,7 @@ function PlanTargets() {
         id="plan-threshold"
         value={form.threshold}
         onInput={setPlan('threshold')}
-        error={word(errors.threshold)}
+        error={word(errors.thresholdCarbonPct)}
         show={show}
       />
     </section>
@@ -261,10 +262,17 @@ function PlanPart() {
         shape={form.shape}
         size={form.size}
         onChange={patchPlan}
-        error={word(errors.size)}
+        error={word(errors[sizePath(form.shape) ?? ''])}
         ctx={ctx}
       />
-      <SteelFields idPrefix="plan-steel" steel={form.steel} onChange={setPlan('steel')} errors={errors} word={word} />
+      <SteelFields
+        idPrefix="plan-steel"
+        steel={form.steel}
+        onChange={setPlan('steel')}
+        errors={errors}
+        path="steel."
+        word={word}
+      />
       <ModelField id="plan-model" value={form.model} onChange={setPlan('model')} ctx={ctx} />
       <FurnaceField id="plan-furnace" model={formModel} ctx={ctx} />
     </section>

@@ -4,14 +4,19 @@
  * you type; the screen keeps the last plan, marked updating, until the newest request is answered.
  */
 import { computed, effect } from '@preact/signals';
-import { ALLOY_ELEMENTS, isModelId, planTwoStepCycle, type PlanResult, type Result } from '../../physics';
-import { CYCLE_FIELD_MAP, cycleDefaults, readBaseFields, type CycleDefaults } from '../cycle/results';
+import {
+  type InputError,
+  isModelId,
+  PLAN_REQUEST,
+  planTwoStepCycle,
+  type PlanResult,
+  type Result,
+} from '../../physics';
+import { baseValues, cycleDefaults, type CycleDefaults } from '../cycle/results';
 import { factorOf, type CalibrationState } from '../settings/calibration';
-import { BETA_INPUT_SCALE } from '../settings/state';
-import { readField, readOptionalField } from '../ui/fieldText';
 import { deferred } from '../ui/Deferred';
-import { FieldReader, NO_ERRORS, placeError, type Outcome } from '../ui/outcome';
-import { PHYSICS_UNITS } from '../ui/units';
+import { NO_ERRORS, type Outcome } from '../ui/outcome';
+import { orDefault, placeError, readForm, type FormValues } from '../ui/readForm';
 import { latestRun } from '../worker/client';
 import { planForm, type PlanForm, type PotentialStepForm } from './state';
 
@@ -21,77 +26,42 @@ export interface PlanOutcome {
   calibration: CalibrationState;
 }
 
-/** Request field paths → form fields where they differ (other errors sit on the field of the same path). */
-const FIELD_MAP: Record<string, string> = {
-  ...CYCLE_FIELD_MAP,
-  targetEcdMm: 'targetEcdMm.max',
-  targetSurfaceCarbonPct: 'targetSurfaceCarbonPct.max',
-};
-
-const STEP_FIELDS = ['temperatureC', 'carbonPotentialPct', 'betaMPerS'];
-
-export const PLAN_FORM_FIELDS: ReadonlySet<string> = new Set([
-  'coreCarbon',
-  'threshold',
-  'size',
-  ...ALLOY_ELEMENTS.map((e) => `composition.${e}`),
-  ...['boost', 'diffuse'].flatMap((step) => STEP_FIELDS.map((f) => `${step}.${f}`)),
-  'hardening.temperatureC',
-  'hardening.timeH',
-  ...['targetEcdMm', 'targetSurfaceCarbonPct'].flatMap((range) => [`${range}.min`, `${range}.max`]),
-]);
-
-function readStep(step: PotentialStepForm, name: string, read: FieldReader, defaultBetaMPerS: number) {
-  const temperatureC = read.value(readField(step.temperature, `${name}.temperatureC`, PHYSICS_UNITS.temperature));
-  const carbonPotentialPct = read.value(readField(step.carbonPotential, `${name}.carbonPotentialPct`));
-  const beta = read.value(readOptionalField(step.beta, `${name}.betaMPerS`));
+function stepValues(step: PotentialStepForm, defaultBetaMPerS: number): FormValues {
   return {
-    temperatureC,
-    carbonPotentialPct,
-    betaMPerS: beta === undefined ? defaultBetaMPerS : beta * BETA_INPUT_SCALE,
+    temperatureC: step.temperature,
+    carbonPotentialPct: step.carbonPotential,
+    betaMPerS: orDefault(step.beta, defaultBetaMPerS),
   };
 }
 
-/** The `plan` request of the form (numbers still unchecked: physics checks ranges), or the fields it cannot read. */
+/** The planner's form laid out as a `plan` request (physics `PLAN_REQUEST`). */
+export function planValues(form: PlanForm, settings: CycleDefaults): FormValues {
+  return {
+    ...baseValues(form, settings),
+    boost: stepValues(form.boost, settings.betaMPerS),
+    diffuse: stepValues(form.diffuse, settings.betaMPerS),
+    ...(form.hardening ? { hardening: { temperatureC: form.hardeningTemp, timeH: form.hardeningTime } } : {}),
+    targetEcdMm: { min: form.ecdMin, max: form.ecdMax },
+    targetSurfaceCarbonPct: { min: form.surfaceMin, max: form.surfaceMax },
+  };
+}
+
+/** The `plan` request of the form (each number read and checked against its limit; physics checks the rest), or the fields it cannot read. */
 export function buildPlanRequest(
   form: PlanForm,
   settings: CycleDefaults,
-): { request?: Record<string, unknown>; errors: FieldReader['errors'] } {
-  const read = new FieldReader();
-  const base = readBaseFields(form, settings, read);
-  const boost = readStep(form.boost, 'boost', read, settings.betaMPerS);
-  const diffuse = readStep(form.diffuse, 'diffuse', read, settings.betaMPerS);
-  const hardening = form.hardening
-    ? {
-        temperatureC: read.value(readField(form.hardeningTemp, 'hardening.temperatureC', PHYSICS_UNITS.temperature)),
-        timeH: read.value(readField(form.hardeningTime, 'hardening.timeH', PHYSICS_UNITS.time)),
-      }
-    : undefined;
-  const targetEcdMm = {
-    min: read.value(readField(form.ecdMin, 'targetEcdMm.min', PHYSICS_UNITS.depth)),
-    max: read.value(readField(form.ecdMax, 'targetEcdMm.max', PHYSICS_UNITS.depth)),
-  };
-  const targetSurfaceCarbonPct = {
-    min: read.value(readField(form.surfaceMin, 'targetSurfaceCarbonPct.min')),
-    max: read.value(readField(form.surfaceMax, 'targetSurfaceCarbonPct.max')),
-  };
-  if (read.failed || !base) return { errors: read.errors };
-  return {
-    errors: NO_ERRORS,
-    request: {
-      ...base,
-      boost,
-      diffuse,
-      ...(hardening ? { hardening } : {}),
-      targetEcdMm,
-      targetSurfaceCarbonPct,
-    },
-  };
+): { request?: Record<string, unknown>; errors: Record<string, InputError>; fields: ReadonlySet<string> } {
+  const read = readForm(PLAN_REQUEST, planValues(form, settings));
+  return Object.keys(read.errors).length > 0
+    ? { errors: read.errors, fields: read.fields }
+    : { request: read.request, errors: NO_ERRORS, fields: read.fields };
 }
 
 export interface PlanRequest {
   request: Record<string, unknown>;
   calibration: CalibrationState;
+  /** The request paths that are inputs, where an error of the plan is placed. */
+  fields: ReadonlySet<string>;
 }
 
 /** The form read into a `plan` request with the chosen furnace's calibration, or the fields it cannot read. */
@@ -102,12 +72,15 @@ export function planRequestOf(form: PlanForm, settings: CycleDefaults): Outcome<
   const calibration: CalibrationState = settings.calibrationFor?.(model) ?? { kind: 'none' };
   const factor = factorOf(calibration);
   const request = factor === 1 ? built.request : { ...built.request, diffusivityFactor: factor };
-  return { errors: NO_ERRORS, result: { request, calibration } };
+  return { errors: NO_ERRORS, result: { request, calibration, fields: built.fields } };
 }
 
 /** What the screen shows for a planned request: the plan, or its error placed on the field that caused it. */
-export function planOutcomeOf({ request, calibration }: PlanRequest, plan: Result<PlanResult>): Outcome<PlanOutcome> {
-  if (!plan.ok) return placeError(plan.error, FIELD_MAP, PLAN_FORM_FIELDS);
+export function planOutcomeOf(
+  { request, calibration, fields }: PlanRequest,
+  plan: Result<PlanResult>,
+): Outcome<PlanOutcome> {
+  if (!plan.ok) return placeError(plan.error, fields);
   return { errors: NO_ERRORS, result: { request, plan: plan.value, calibration } };
 }
 
@@ -137,6 +110,6 @@ export const planOutcome = computed((): Outcome<PlanOutcome> & { updating: boole
   const answer = planner.answer.value;
   const updating = planner.updating.value;
   if (!answer || 'failed' in answer) return { errors: NO_ERRORS, updating };
-  const calibration = asked.result.calibration;
-  return { ...planOutcomeOf({ request: answer.input, calibration }, answer.output), updating };
+  const { calibration, fields } = asked.result;
+  return { ...planOutcomeOf({ request: answer.input, calibration, fields }, answer.output), updating };
 });

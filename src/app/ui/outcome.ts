@@ -1,6 +1,6 @@
 /**
  * The outcome of reading a form and calling physics: a result, or errors placed
- * beside the fields that caused them (by the physics error's `field`).
+ * beside the fields that caused them (by the physics error's `field`, readForm.ts).
  */
 import type { InputError, Result } from '../../physics';
 
@@ -29,18 +29,4 @@ export class FieldReader {
   get failed(): boolean {
     return Object.keys(this.errors).length > 0;
   }
-}
-
-/**
- * Places a physics error: on the form field its `field` maps to (through `fieldMap`,
- * or as is when the form has a field of that name), otherwise as a general error.
- */
-export function placeError<T>(
-  error: InputError,
-  fieldMap: Record<string, string>,
-  formFields: ReadonlySet<string>,
-): Outcome<T> {
-  const raw = error.field ?? '';
-  const mapped = fieldMap[raw] ?? raw;
-  return formFields.has(mapped) ? { errors: { [mapped]: error } } : { errors: NO_ERRORS, general: error };
 }

@@ -7,7 +7,7 @@
 import { checkCoreBelowLimit } from '../indicativeHardness';
 import { checkLimit, LIMITS } from '../limits';
 import { readRequest, type ReadOf, type RequestOf } from '../requestSpec';
-import { RECIPE_REQUEST } from '../requestTables';
+import { RECIPE_REQUEST } from './requestTables';
 import { fail, ok, type Result } from '../result';
 import type { Recipe } from './recipe';
 

@@ -6,10 +6,10 @@
 import { checkCycleBase, type CycleBase } from '../cycle/readRecipe';
 import type { PartShape } from '../cycle/recipe';
 import { readRequest, type ReadOf } from '../requestSpec';
-import { PLAN_REQUEST } from '../requestTables';
+import { PLAN_REQUEST } from '../cycle/requestTables';
 import { fail, ok, type Result } from '../result';
 
-export { DEFAULT_MAX_TOTAL_H } from '../requestTables';
+export { DEFAULT_MAX_TOTAL_H } from '../cycle/requestTables';
 
 /** Shortest boost + diffuse time the planner considers, h (6 min). */
 export const MIN_CARBURIZE_H = 0.1;

@@ -1,7 +1,7 @@
 /** Wild `plan` requests: nothing throws, errors carry known codes, results hold only finite numbers and known codes. */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { planTwoStepCycle } from '../../../src/physics/planner/planner';
+import { MAX_BOOST_SHARE, planTwoStepCycle, TIME_ROUNDING_H } from '../../../src/physics/planner/planner';
 import { ERROR_CODES, WARNING_CODES } from '../../../src/physics/result';
 import { allFinite } from '../allFinite';
 import { expectPossible } from './fixtures';
@@ -125,8 +125,17 @@ describe('planTwoStepCycle on wild input', () => {
         }
         const v = result.value;
         expect(allFinite(v)).toBe(true);
-        expect(v.boostH).toBeGreaterThanOrEqual(0);
-        expect(v.diffuseH).toBeGreaterThan(0);
+        // The times are what the recipe runs: on the 0.001 h grid, summing to the total, the diffuse
+        // step at least a tenth of the carburizing time (less the two roundings, and the step back
+        // to stay within the limit), the whole within the limit.
+        const onGrid = (h: number) => Math.abs(h / TIME_ROUNDING_H - Math.round(h / TIME_ROUNDING_H)) < 1e-6;
+        expect(onGrid(v.boostH) && onGrid(v.diffuseH)).toBe(true);
+        expect(v.diffuseH).toBeGreaterThanOrEqual(
+          (1 - MAX_BOOST_SHARE) * (v.boostH + v.diffuseH) - 3 * TIME_ROUNDING_H,
+        );
+        expect(v.totalH).toBeCloseTo(v.boostH + v.diffuseH + v.hardeningH, 9);
+        const stepH = (label: string) => v.recipe.steps.find((step) => step.label === label)?.durationH ?? 0;
+        expect([stepH('boost'), stepH('diffuse')]).toEqual([v.boostH, v.diffuseH]);
         expect(v.totalH).toBeLessThanOrEqual(request.maxTotalH + 1e-9);
         for (const w of [...v.warnings, ...v.suggestions, ...(v.binding ? [v.binding] : [])])
           expect(WARNING_CODES).toContain(w.code);

@@ -13,3 +13,5 @@ export * from './csv';
 export * from './transfer';
 export * from './calibration';
 export { INDEX, JOBS_STORE, LATEST_DB_VERSION } from './migrations';
+export { storageFailure } from './storageErrors';
+export { newJobId } from './ids';

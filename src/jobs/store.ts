@@ -3,6 +3,7 @@
  * (a full disk included) leaves the log as it was; every record read is validated, so a
  * damaged record is reported beside the list instead of breaking it.
  */
+import { newJobId } from './ids';
 import { openDB, type IDBPDatabase, type IDBPObjectStore } from 'idb';
 import * as v from 'valibot';
 import { issuesOf } from './issues';
@@ -181,7 +182,7 @@ export class JobStore {
     const stamp = now.toISOString();
     const job = v.safeParse(JobSchema, {
       ...parsed.output,
-      id: crypto.randomUUID(),
+      id: newJobId(),
       createdAt: stamp,
       updatedAt: stamp,
       shift: parsed.output.shift ?? slot.shift,

@@ -8,6 +8,7 @@ import {
   openJobStore,
   persistentStorageStatus,
   requestPersistentStorage,
+  storageFailure,
   type JobsResult,
   type JobStore,
   type PersistOutcome,
@@ -43,7 +44,13 @@ export async function jobStore(): Promise<JobsResult<JobStore>> {
 export async function writeToLog<T>(work: (store: JobStore) => Promise<JobsResult<T>>): Promise<JobsResult<T>> {
   const store = await jobStore();
   if (!store.ok) return store;
-  const result = await work(store.value);
+  let result: JobsResult<T>;
+  try {
+    result = await work(store.value);
+  } catch (error) {
+    // Whatever the browser throws, the form gets a sentence and its button back.
+    return storageFailure(error);
+  }
   if (result.ok) announceChange();
   return result;
 }

@@ -2,16 +2,14 @@
  * Furnace calibration from the job log. Each job of one furnace that has a lab ECD and the
  * inputs it was planned with becomes a calibration sample whose prediction re-runs that
  * calculation with D × k: a closed-form request with `diffusivityFactor: k` at the time and
- * temperature it ran, or the recorded cycle with the model's D scaled by k. Physics fits k.
+ * temperature it ran, or the recorded cycle with `diffusivityFactor: k`. Physics fits k.
  * k is relative to one diffusivity model: `model` re-runs every job with it (the app passes the
  * model it calculates with), otherwise each job keeps its own.
  */
 import {
   type CalibrationFit,
   type CalibrationSample,
-  DEFAULT_MODEL,
   depthFigures,
-  DIFFUSIVITY_MODELS,
   type DiffusivityModelId,
   fitDiffusivityFactor,
   readCaseSpec,
@@ -20,7 +18,6 @@ import {
   readRecipe,
   type Result,
   runCycle,
-  scaledDiffusivity,
 } from '../physics';
 import { physicsRequestOf } from './inputs';
 import { compareNewestFirst } from './query';
@@ -80,15 +77,13 @@ function closedFormPredictor(job: Job, model: DiffusivityModelId | undefined): P
     depthFigures({ ...spec.value, diffusivityFactor: factor }, temperatureC, timeH).effectiveCaseDepthMm;
 }
 
-/** A cycle job: the recorded recipe through the simulator with D × k. */
+/** A cycle job: the recorded recipe through the simulator with D × k (k replaces the factor it was planned with). */
 function cyclePredictor(job: Job, model: DiffusivityModelId | undefined): Predictor | SkipReason {
   const inputs = job.inputs!;
   if (inputs.kind !== 'cycle') return 'invalidInputs';
   const recipe = readRecipe(model ? { ...inputs.recipe, model } : inputs.recipe);
   if (!recipe.ok) return 'invalidInputs';
-  const diffusivity = DIFFUSIVITY_MODELS[recipe.value.model ?? DEFAULT_MODEL].diffusivity;
-  return (factor) =>
-    runCycle(recipe.value, 1, { diffusivity: scaledDiffusivity(diffusivity, factor) }).effectiveCaseDepthMm;
+  return (factor) => runCycle({ ...recipe.value, diffusivityFactor: factor }).effectiveCaseDepthMm;
 }
 
 /**

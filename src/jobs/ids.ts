@@ -13,7 +13,9 @@ export function uuidFromBytes(bytes: Uint8Array): string {
   return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`;
 }
 
-export function newJobId(source: Pick<Crypto, 'getRandomValues'> & Partial<Pick<Crypto, 'randomUUID'>> = crypto): string {
+export function newJobId(
+  source: Pick<Crypto, 'getRandomValues'> & Partial<Pick<Crypto, 'randomUUID'>> = crypto,
+): string {
   if (typeof source.randomUUID === 'function') return source.randomUUID();
   return uuidFromBytes(source.getRandomValues(new Uint8Array(16)));
 }

@@ -10,7 +10,9 @@ import {
   MAX_CARBON_PCT,
   MAX_TEMPERATURE_TOLERANCE_C,
   MAX_TOTAL_CASE_MARGIN_PCT,
+  MAX_STEPS,
   MODEL_IDS,
+  TEXT_LENGTH_LIMITS,
   HARDNESS_UNITS,
   type Recipe,
 } from '../physics';
@@ -73,7 +75,7 @@ export const TemperatureInputSchema = v.strictObject({
 });
 
 const RecipeStepSchema = v.strictObject({
-  label: v.optional(textUpTo(80)),
+  label: v.optional(textUpTo(TEXT_LENGTH_LIMITS.label)),
   durationH: positiveNumber(),
   startTempC: finiteNumber(),
   endTempC: finiteNumber(),
@@ -91,9 +93,9 @@ const PartShapeSchema = v.variant('kind', [
 const RecipeHardnessSchema = v.strictObject({ value: finiteNumber(), unit: v.picklist(HARDNESS_UNITS) });
 
 export const RecipeSchema = v.strictObject({
-  name: v.optional(textUpTo(120)),
+  name: v.optional(textUpTo(TEXT_LENGTH_LIMITS.name)),
   steel: v.strictObject({
-    grade: v.optional(textUpTo(60)),
+    grade: v.optional(textUpTo(TEXT_LENGTH_LIMITS.grade)),
     coreCarbonPct: CarbonPctSchema,
     composition: v.optional(CompositionSchema),
     coreHardness: v.optional(RecipeHardnessSchema),
@@ -102,8 +104,10 @@ export const RecipeSchema = v.strictObject({
   thresholdCarbonPct: v.optional(CarbonPctSchema),
   ecdHardnessLimit: v.optional(RecipeHardnessSchema),
   totalCaseMarginPct: v.optional(TotalCaseMarginSchema),
+  /** The furnace's calibration factor on D the cycle was predicted with (absent: 1). */
+  diffusivityFactor: v.optional(numberBetween(DIFFUSIVITY_FACTOR_LIMITS.min, DIFFUSIVITY_FACTOR_LIMITS.max)),
   shape: v.optional(PartShapeSchema),
-  steps: v.pipe(v.array(RecipeStepSchema), v.minLength(1), v.maxLength(50)),
+  steps: v.pipe(v.array(RecipeStepSchema), v.minLength(1), v.maxLength(MAX_STEPS)),
 });
 
 export const CycleInputSchema = v.strictObject({ kind: v.literal('cycle'), recipe: RecipeSchema });

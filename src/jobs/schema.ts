@@ -14,6 +14,7 @@ import {
   positiveNumber,
   textUpTo,
 } from './inputs';
+import { FURNACE_NAME_MAX, NOTES_MAX, SHORT_TEXT_MAX } from './limits';
 import { SHIFT_IDS } from './shift';
 
 /** Version of the record shape; also the IndexedDB version and the backup `version`. */
@@ -31,7 +32,7 @@ export type HardnessUnit = (typeof HARDNESS_UNITS)[number];
 /** Plausible bounds, to catch slips (a depth typed as hardness), not to judge parts. */
 export const HARDNESS_LIMITS = { HRC: { min: 0, max: 80 }, HV: { min: 1, max: 2000 } } as const;
 
-export const TEXT_LIMITS = { short: 40, notes: 4000 } as const;
+export const TEXT_LIMITS = { short: SHORT_TEXT_MAX, notes: NOTES_MAX } as const;
 
 /**
  * Whether `text` parses to an instant that Date.toISOString writes as `expected` (so 30 February
@@ -111,7 +112,7 @@ export const LabResultSchema = v.strictObject({
 /** What a person enters or edits; the store adds id, timestamps and (by default) the shift. */
 const editableEntries = {
   operator: InitialsSchema,
-  furnace: requiredText(TEXT_LIMITS.short),
+  furnace: requiredText(FURNACE_NAME_MAX),
   workOrder: textUpTo(TEXT_LIMITS.short),
   partNumber: requiredText(TEXT_LIMITS.short),
   steel: SteelSchema,

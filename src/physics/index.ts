@@ -28,7 +28,6 @@ export {
   carbonDependence,
   isModelId,
   modelSpread,
-  scaledDiffusivity,
   type DiffusivityModelId,
 } from './diffusivity';
 export {
@@ -59,7 +58,8 @@ export {
 export { checkHardness } from './readHardness';
 export { type IndicativeHardnessBasis } from './indicativeHardness';
 export { readTraverse, type TraversePoint, type TraverseRequest } from './traverse/readTraverse';
-export { analyseTraverse, traverse, type TraverseResult } from './traverse/traverse';
+export { CORE_RULE, analyseTraverse, traverse, type TraverseResult } from './traverse/traverse';
+export { CASE_END_FRACTION, caseEndDepthMm } from './traverse/caseEnd';
 export {
   APPROXIMATIONS,
   type Approximation,
@@ -78,6 +78,7 @@ export {
   checkTemperatureC,
   checkTemperatureTolerance,
   checkTimeH,
+  checkTotalCaseMargin,
 } from './validate';
 export {
   caseDepth,
@@ -93,6 +94,13 @@ export { equivalentTime, type EquivalentTimeResult } from './equivalentTime';
 export { convertRequest, type ConversionResult } from './conversions';
 export { DEFAULT_BETA_RANGE_M_PER_S, DEFAULT_TEMPERATURE_TOLERANCE_C, type DepthBand, type Range } from './uncertainty';
 export { fitDiffusivityFactor, type CalibrationFit, type CalibrationSample } from './calibration';
+export {
+  MIN_THRESHOLD_LOADS,
+  fitPlantThreshold,
+  type PlantThresholdFit,
+  type ThresholdResidual,
+  type ThresholdSample,
+} from './plantThreshold';
 export { planTwoStepCycle, type PlanResult } from './planner/planner';
 export {
   DEFAULT_BETA_M_PER_S,
@@ -103,6 +111,7 @@ export {
   type SimulationResult,
 } from './cycle/recipe';
 export { readRecipe } from './cycle/readRecipe';
+export { LIMITS, MAX_STEPS, TEXT_LENGTH_LIMITS, checkLimit, withinLimit, type Limit, type ValueUnit } from './limits';
 export { runCycle, simulateCycle } from './cycle/simulate';
 export { cycleDepthBand, type CycleBand, type CycleBandOptions } from './cycle/band';
 /** Reproducible pseudo-random numbers, for synthetic data (the demo log), never for anything secret. */

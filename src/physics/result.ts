@@ -56,6 +56,10 @@ export const ERROR_CODES = [
   'calibration.tooFewJobs',
   'calibration.noSensitivity',
   'calibration.factorOutOfRange',
+  'plantThreshold.tooFewLoads',
+  'plantThreshold.notIdentifiable',
+  'plantThreshold.factorOutOfRange',
+  'plantThreshold.outOfRange',
   'steps.empty',
   'steps.tooMany',
   'shape.unknown',
@@ -64,6 +68,7 @@ export const ERROR_CODES = [
   'range.minAboveMax',
   'carbon.boostNotAboveDiffuse',
   'time.limitTooShort',
+  'text.tooLong',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -19,7 +19,7 @@ import {
 } from '../../src/app/settings/calibration';
 import { makeShow } from '../../src/app/ui/show';
 import { createI18n } from '../../src/i18n/i18n';
-import { caseDepth, DIFFUSIVITY_MODELS, runCycle, scaledDiffusivity } from '../../src/physics';
+import { caseDepth, DIFFUSIVITY_MODELS, runCycle } from '../../src/physics';
 import type { Job } from '../../src/jobs/schema';
 import { pinionDraft } from '../jobs/helpers';
 
@@ -94,15 +94,16 @@ describe('the calculators with a calibrated furnace', () => {
     const view = depthView(out, t, show, 0.05);
     expect(view.rows[0]).toMatchObject({
       key: 'calibration',
-      value: 'Calibrated for F1: D × 1.21 (95 %: 1.10–1.33, 5 jobs)',
+      value:
+        'Depth correction for F1 from lab results: diffusion speed × 1.21 (1.00 = published model; 95 %: 1.10–1.33, 5 jobs)',
     });
-    expect(view.answerNote).toBe('Calibrated for F1: D × 1.21');
+    expect(view.answerNote).toBe('Corrected for F1: diffusion speed × 1.21 (1.00 = published model)');
     const entry = depthLogEntry(out, 'sae-8620');
     expect(entry.furnace).toBe('F1');
     expect(entry.inputs).toMatchObject({ kind: 'depth', diffusivityFactor: 1.21, temperatureToleranceC: 8 });
     // The saved job shows the factor it was predicted with.
     expect(planRows(entry.steel, entry.inputs, { t, show, locale: 'en' }).find((r) => r.key === 'factor')?.value).toBe(
-      'D × 1.21',
+      'diffusion speed × 1.21 (1.00 = published model)',
     );
   });
 
@@ -114,7 +115,9 @@ describe('the calculators with a calibrated furnace', () => {
     }).result!;
     expect(off.figures).toEqual(plain.figures);
     expect(off.request).not.toHaveProperty('diffusivityFactor');
-    expect(depthView(off, t, show, 0.05).rows[0]?.value).toMatch(/^F1 has a calibration, but it is off/u);
+    expect(depthView(off, t, show, 0.05).rows[0]?.value).toMatch(
+      /^F1 has a depth correction from lab results, but it is off/u,
+    );
     expect(depthView(plain, t, show, 0.05).rows.some((r) => r.key === 'calibration')).toBe(false);
     expect(depthLogEntry(plain, 'sae-8620')).not.toHaveProperty('furnace');
   });
@@ -136,14 +139,16 @@ describe('the calculators with a calibrated furnace', () => {
     expect(direct.ok && direct.value.uncertaintyMm).toEqual(narrow.figures.uncertaintyMm);
   });
 
-  it('cycle: the simulation runs with the model’s D × k, for the form’s own model', () => {
+  it('cycle: the recipe carries k and the simulation runs with the model’s D × k, for the form’s own model', () => {
     const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: 0.05, betaMPerS: 1.5e-7 };
     const out = computeCycle(DEFAULT_CYCLE_FORM, {
       ...settings,
       calibrationFor: (m) => calibrationState([f1], 'F1', m),
     }).result!;
-    const direct = runCycle(out.recipe, 1, {
-      diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS.agren.diffusivity, 1.21),
+    expect(out.recipe.diffusivityFactor).toBe(1.21);
+    const { diffusivityFactor: _k, ...uncalibrated } = out.recipe;
+    const direct = runCycle(uncalibrated, 1, {
+      diffusivity: (tempK, carbonPct) => 1.21 * DIFFUSIVITY_MODELS.agren.diffusivity(tempK, carbonPct),
     });
     expect(out.simulation.effectiveCaseDepthMm).toBeCloseTo(direct.effectiveCaseDepthMm, 12);
     expect(out.calibration.kind).toBe('applied');

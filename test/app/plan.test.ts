@@ -117,8 +117,10 @@ describe('the planner’s words', () => {
     expect(row('boost')?.value).toMatch(/^\d+\s?min$/u);
     expect(row('total')?.main).toBe(true);
     expect(row('surfaceRange')?.value).toMatch(/^0\.\d\d–0\.\d\d\s?%C$/u);
-    expect(row('calibration')?.value).toBe('Calibrated for F1: D × 1.20 (95 %: 1.10–1.30, 7 jobs)');
-    expect(view.answerNote).toBe('Calibrated for F1: D × 1.20');
+    expect(row('calibration')?.value).toBe(
+      'Depth correction for F1 from lab results: diffusion speed × 1.20 (1.00 = published model; 95 %: 1.10–1.30, 7 jobs)',
+    );
+    expect(view.answerNote).toBe('Corrected for F1: diffusion speed × 1.20 (1.00 = published model)');
   });
 
   it('targets out of reach: what binds and what would help, worded in the user’s units', () => {

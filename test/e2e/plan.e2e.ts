@@ -203,7 +203,7 @@ function labResultsOnF1(now = new Date()): Job[] {
   });
 }
 
-describe('furnace calibration', () => {
+describe('depth correction from lab results', () => {
   for (const [language, locale] of [
     ['en', 'en-US'],
     ['es', 'es-ES'],
@@ -227,7 +227,9 @@ describe('furnace calibration', () => {
       await card.waitFor();
       assert.equal(
         await card.locator('[data-result="factor"] .result-value').textContent(),
-        language === 'en' ? 'D × 1.21' : 'D × 1,21',
+        language === 'en'
+          ? 'diffusion speed × 1.21 (1.00 = published model)'
+          : 'velocidad de difusión × 1,21 (1,00 = modelo publicado)',
       );
       assert.equal(await card.locator('[data-result="jobs"] .result-value').textContent(), '3');
       const toggle = card.locator('input[type="checkbox"]');
@@ -246,7 +248,10 @@ describe('furnace calibration', () => {
       await page.goto(`${BASE_URL}#/depth`);
       await page.waitForSelector('#depth-furnace');
       await page.selectOption('#depth-furnace', 'F1');
-      const note = language === 'en' ? 'Calibrated for F1: D × 1.21' : 'Calibrado para F1: D × 1,21';
+      const note =
+        language === 'en'
+          ? 'Corrected for F1: diffusion speed × 1.21 (1.00 = published model)'
+          : 'Corregido para F1: velocidad de difusión × 1,21 (1,00 = modelo publicado)';
       await page.waitForSelector(`.answer-note:has-text("${note}")`);
       const after = await answer(page).textContent();
       const mm = (text: string | null) => Number((text ?? '').replace(',', '.').replace(/[^\d.]/gu, ''));
@@ -255,8 +260,8 @@ describe('furnace calibration', () => {
       assert.match(
         (await rowValue(page, 'calibration')) ?? '',
         language === 'en'
-          ? /^Calibrated for F1: D × 1\.21 \(95 %: 1\.\d\d–1\.\d\d, 3 jobs\)$/u
-          : /^Calibrado para F1: D × 1,21 \(95 %: /u,
+          ? /^Depth correction for F1 from lab results: diffusion speed × 1\.21 \(1\.00 = published model; 95 %: 1\.\d\d–1\.\d\d, 3 jobs\)$/u
+          : /^Corrección de profundidad de F1 según el laboratorio: velocidad de difusión × 1,21 \(1,00 = modelo publicado; 95 %: /u,
       );
       lines.push(await expectNoAxeProblems(page, `${language} depth calibrated`));
       await page.screenshot({ path: `test-results/${language}-depth-calibrated.png` });
@@ -269,7 +274,8 @@ describe('furnace calibration', () => {
         await page.goto(`${BASE_URL}#/${id}`);
         await page.waitForSelector(`#${id}-furnace`);
         assert.equal(await page.inputValue(`#${id}-furnace`), 'F1', 'one furnace choice for every calculator');
-        await page.waitForSelector(`[data-result="calibration"]:has-text("${note}")`);
+        const speed = language === 'en' ? 'diffusion speed × 1.21' : 'velocidad de difusión × 1,21';
+        await page.waitForSelector(`[data-result="calibration"]:has-text("${speed}")`);
         assert.equal(await page.textContent('.answer-note'), note);
       }
       await page.screenshot({ path: `test-results/${language}-plan-calibrated.png` });

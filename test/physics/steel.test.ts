@@ -36,6 +36,41 @@ describe('saturation of austenite (Acm)', () => {
 // The alloy factor once had its sign inverted (chromium lowering the surface carbon); these check
 // values are computed by hand from log10(%C_plain / %C_alloy) = 0.055·Si − 0.013·Mn − 0.040·Cr +
 // 0.014·Ni − 0.013·Mo (Gunnarson 1963, from memory), not taken from the code.
+// The grade list is nominal data recalled from the standards' ranges; these checks catch a slipped
+// digit by what carburizing grades must be: low-carbon, austenitic above 850 °C, modestly alloyed.
+describe('the steel-grade list', () => {
+  it('holds the common carburizing grades, each once', () => {
+    const names = STEEL_GRADES.map((g) => g.name);
+    for (const name of [
+      'SAE 1018',
+      'SAE 1020',
+      'SAE 4118',
+      'SAE 4320',
+      'SAE 4620',
+      'SAE 8620',
+      'SAE 8822',
+      'SAE 9310',
+      '16MnCr5',
+      '20MnCr5',
+      '18CrNiMo7-6',
+      '20NiCrMo2-2',
+    ])
+      expect(names).toContain(name);
+    expect(new Set(STEEL_GRADES.map((g) => g.id)).size).toBe(STEEL_GRADES.length);
+  });
+  it.each(STEEL_GRADES.map((g) => [g.name, g] as const))('%s is a carburizing grade', (_name, g) => {
+    expect(g.coreCarbonPct).toBeGreaterThanOrEqual(0.08);
+    expect(g.coreCarbonPct).toBeLessThanOrEqual(0.25);
+    // Its core is all austenite at the usual carburizing temperatures.
+    expect(ac3TempC(g.coreCarbonPct, g.composition)).toBeLessThan(850);
+    const f = alloyFactor(g.composition);
+    expect(f).toBeGreaterThan(0.9);
+    expect(f).toBeLessThan(1.25);
+    expect(g.typicalCoreHardnessHrc).toBeGreaterThanOrEqual(20);
+    expect(g.typicalCoreHardnessHrc).toBeLessThanOrEqual(45);
+  });
+});
+
 describe('alloy factor (Gunnarson 1963, from memory): the formula’s own check values', () => {
   const none = { Si: 0, Mn: 0, Cr: 0, Ni: 0, Mo: 0 };
   const factor = (id: string) => alloyFactor(STEEL_GRADES.find((g) => g.id === id)!.composition);

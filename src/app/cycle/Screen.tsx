@@ -1,7 +1,6 @@
 /** Cycle editor: steps (add, remove, reorder, duplicate), part shape, steel, model, threshold, furnace; results, range, chart and table. */
 import { useMemo } from 'preact/hooks';
 import { isModelId } from '../../physics';
-import { factorOf } from '../settings/calibration';
 import { defaults, model, theme } from '../settings/state';
 import { Answer } from '../ui/Answer';
 import { CycleBand } from '../range/CycleBand';
@@ -99,12 +98,7 @@ export default function CycleScreen() {
       </section>
 
       <ResultsCard id="cycle-results" error={word(outcome.general)} view={view}>
-        <CycleBand
-          id="cycle-band"
-          recipe={result?.recipe}
-          diffusivityFactor={result ? factorOf(result.calibration) : 1}
-          ctx={ctx}
-        />
+        <CycleBand id="cycle-band" recipe={result?.recipe} ctx={ctx} />
         {view && <ProfileChart data={view.chart} label={t('app.cycle.chartLabel')} theme={theme.value} />}
         {view && <p class="note">{view.hardnessMethod}</p>}
         {result && <ProfileTable profile={result.simulation.profile} ctx={ctx} />}

@@ -7,6 +7,7 @@ import {
   isModelId,
   type Recipe,
   type RecipeStep,
+  simulateCycle,
   type SimulationResult,
 } from '../../physics';
 import {
@@ -22,7 +23,6 @@ import { FieldReader, placeError, type Outcome } from '../ui/outcome';
 import { readShape } from '../fields/shape';
 import { readComposition } from '../fields/steel';
 import { PHYSICS_UNITS } from '../ui/units';
-import { simulate } from './simulate';
 import { cycleForm, type CycleForm } from './state';
 
 export interface CycleDefaults {
@@ -125,9 +125,11 @@ export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<
   const { recipe, errors } = buildRecipe(form, settings);
   if (!recipe) return { errors };
   const calibration: CalibrationState = settings.calibrationFor?.(recipe.model ?? settings.model) ?? { kind: 'none' };
-  const simulation = simulate(recipe, factorOf(calibration));
+  const factor = factorOf(calibration);
+  const calibrated: Recipe = factor === 1 ? recipe : { ...recipe, diffusivityFactor: factor };
+  const simulation = simulateCycle(calibrated);
   if (!simulation.ok) return placeError(simulation.error, CYCLE_FIELD_MAP, formFields(form));
-  return { errors: {}, result: { recipe, simulation: simulation.value, calibration } };
+  return { errors: {}, result: { recipe: calibrated, simulation: simulation.value, calibration } };
 }
 
 /** The settings a cycle calculation reads, with the chosen furnace's calibration (shared by the planner). */

@@ -1,14 +1,20 @@
-/** A furnace's calibration in words, for every result it touches and for the furnace choice. */
+/** A furnace's depth correction from lab results in words, for every result it touches and for the furnace choice. */
 import type { TFunction } from 'i18next';
 import type { CalibrationState } from '../settings/calibration';
 import type { Show } from '../ui/show';
 
 export interface CalibrationWords {
-  /** The whole sentence ("Calibrated for F1: D × 1.08 (95 %: 1.02–1.15, 7 jobs)"). */
+  /** The whole sentence ("Depth correction for F1 from lab results: diffusion speed × 1.08 (1.00 = published model; …)"). */
   sentence: string;
   /** The short form beside a main answer (only when the factor is applied). */
   short?: string;
 }
+
+/** The placeholders of a diffusion-speed factor: the factor and the 1.00 of the published model, both in the user's locale. */
+export const speedParams = (show: Show, factor: number) => ({
+  factor: show.number(factor, 2),
+  neutral: show.number(1, 2),
+});
 
 export function calibrationWords(state: CalibrationState, t: TFunction, show: Show): CalibrationWords | undefined {
   if (state.kind === 'none') return undefined;
@@ -18,15 +24,15 @@ export function calibrationWords(state: CalibrationState, t: TFunction, show: Sh
   if (state.kind === 'off') return { sentence: t('app.calibration.off', { furnace }) };
   if (state.kind === 'otherModel')
     return { sentence: t('app.calibration.otherModel', { furnace, model: t(`app.models.${c.model}`) }) };
-  const factor = show.number(c.factor, 2);
+  const speed = speedParams(show, c.factor);
   return {
     sentence: t('app.calibration.applied', {
       furnace,
-      factor,
+      ...speed,
       low: show.number(c.low, 2),
       high: show.number(c.high, 2),
       count: c.jobCount,
     }),
-    short: t('app.calibration.short', { furnace, factor }),
+    short: t('app.calibration.short', { furnace, ...speed }),
   };
 }

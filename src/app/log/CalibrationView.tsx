@@ -14,6 +14,7 @@ import { ErrorNote } from '../ui/Notices';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { useScreenContext, type ScreenContext } from '../settings/screenContext';
 import { CheckField } from '../ui/TextField';
+import { speedParams } from '../fields/calibrationWords';
 import { calibrationFurnaces, cardsOf, measuredJobs, type FurnaceCard } from './calibration';
 import { latestRun } from '../worker/client';
 import type { CalibrationInput } from '../worker/tasks';
@@ -49,7 +50,11 @@ export function CalibrationView() {
     <>
       <h1 tabIndex={-1}>{t('app.calibration.title')}</h1>
       <p class="note">
-        {t('app.calibration.intro', { count: DEFAULT_CALIBRATION_JOBS, model: t(`app.models.${current}`) })}
+        {t('app.calibration.intro', {
+          count: DEFAULT_CALIBRATION_JOBS,
+          model: t(`app.models.${current}`),
+          neutral: ctx.show.number(1, 2),
+        })}
       </p>
       {list.state === 'failed' && <ErrorNote message={describeJobsError(t, list.error)} />}
       {updating && (
@@ -83,7 +88,7 @@ function FurnaceCalibrationCard({
         {
           key: 'factor',
           label: t('app.calibration.factor'),
-          value: t('app.calibration.factorValue', { factor: show.number(fit.value.factor, 2) }),
+          value: t('app.calibration.factorValue', speedParams(show, fit.value.factor)),
           detail: t('app.calibration.interval', {
             low: show.number(fit.value.interval95.low, 2),
             high: show.number(fit.value.interval95.high, 2),

@@ -9,6 +9,7 @@ import {
   type Prediction,
   type Steel,
 } from '../../jobs';
+import { speedParams } from '../fields/calibrationWords';
 import { formatQuantity } from '../ui/format';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
@@ -69,13 +70,13 @@ export function planRows(
     rows.push(row('surfaceSet', t('app.fields.surfaceCarbon'), show.carbon(inputs.surfaceCarbonPct)));
   if (inputs.thresholdCarbonPct !== undefined)
     rows.push(row('threshold', t('app.fields.threshold'), show.carbon(inputs.thresholdCarbonPct)));
-  // Predicted with a furnace's calibration: the record says so.
+  // Predicted with a furnace's depth correction: the record says so.
   if (inputs.diffusivityFactor !== undefined && inputs.diffusivityFactor !== 1) {
     rows.push(
       row(
         'factor',
         t('app.calibration.factor'),
-        t('app.calibration.factorValue', { factor: show.number(inputs.diffusivityFactor, 2) }),
+        t('app.calibration.factorValue', speedParams(show, inputs.diffusivityFactor)),
       ),
     );
   }

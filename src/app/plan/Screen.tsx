@@ -10,7 +10,6 @@ import { CycleTabs } from '../cycle/CycleTabs';
 import { cycleLogEntry } from '../cycle/logEntry';
 import { cycleForm } from '../cycle/state';
 import { LogSaveButton } from '../log/save/LogActions';
-import { factorOf } from '../settings/calibration';
 import { defaults, model } from '../settings/state';
 import { hrefFor } from '../shell/route';
 import { Answer } from '../ui/Answer';
@@ -217,12 +216,7 @@ export default function PlanScreen() {
       )}
 
       <ResultsCard id="plan-results" error={word(outcome.general)} view={view}>
-        <CycleBand
-          id="plan-band"
-          recipe={result?.plan.recipe}
-          diffusivityFactor={result ? factorOf(result.calibration) : 1}
-          ctx={ctx}
-        />
+        <CycleBand id="plan-band" recipe={result?.plan.recipe} ctx={ctx} />
       </ResultsCard>
       <div class="plan-actions">
         <button

@@ -5,6 +5,7 @@ import { language } from '../../i18n/useT';
 import { CASE_CRITERION_IDS, MODEL_IDS } from '../../physics';
 import { ChoiceField } from '../ui/ChoiceField';
 import { modelSpreadHint, wellsBatzMehlNote } from '../fields/modelNotes';
+import { speedParams } from '../fields/calibrationWords';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
@@ -41,8 +42,7 @@ export default function SettingsScreen() {
   const beta = readBeta(s.beta);
   const threshold = readThreshold(s.ecdThreshold);
   const margin = readMargin(s.totalCaseMargin);
-  const marginError =
-    margin === 'notPositive' ? t('app.settings.marginNotPositive') : margin.ok ? undefined : word(margin.error);
+  const marginError = margin.ok ? undefined : word(margin.error);
   const unitChoices = (q: DisplayQuantity) => [
     { value: 'auto', label: t('app.settings.followSystem') },
     ...UNIT_CHOICES[q].map((u) => ({ value: u, label: UNIT_SYMBOLS[u] ?? u })),
@@ -172,7 +172,7 @@ export default function SettingsScreen() {
             {calibrations.value.map((c) => (
               <li key={c.furnace}>
                 {t('app.calibration.furnaceHeading', { furnace: c.furnace })}:{' '}
-                {t('app.calibration.factorValue', { factor: show.number(c.factor, 2) })} ·{' '}
+                {t('app.calibration.factorValue', speedParams(show, c.factor))} ·{' '}
                 {c.apply ? t('app.settings.calibrationOn') : t('app.settings.calibrationOff')}
               </li>
             ))}

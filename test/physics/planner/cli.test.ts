@@ -55,7 +55,7 @@ describe('CLI `plan`', () => {
     expect(output).toEqual({
       error: {
         code: 'range.minAboveMax',
-        field: 'targetEcdMm',
+        field: 'targetEcdMm.max',
         message: 'The lower limit 1 mm is above the upper limit 0.75 mm.',
       },
     });

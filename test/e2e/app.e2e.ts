@@ -92,7 +92,7 @@ describe('cycle editor', () => {
     assert.equal(await steps.count(), 5);
     await page.click('[aria-label="Duplicate step 1"]');
     assert.equal(await steps.count(), 6);
-    await page.fill('li.step >> nth=0 >> input[id$="-label"]', 'boost');
+    await page.fill('li.step >> nth=0 >> textarea[id$="-label"]', 'boost');
     await page.click('[aria-label="Move step 1 down"]');
     assert.match((await steps.nth(1).locator('h3').textContent()) ?? '', /boost/);
     await page.click('[aria-label="Remove step 6"]');

@@ -22,8 +22,8 @@ describe('job ids without crypto.randomUUID (a plain-http LAN address)', () => {
     expect(v.is(idField, [...ids][0])).toBe(true);
   });
   it('uses randomUUID where the browser has it', () => {
-    expect(newJobId({ randomUUID: () => '0b7f3c1e-2a4d-4e5f-8a9b-1c2d3e4f5a6b', getRandomValues: () => new Uint8Array(16) })).toBe(
-      '0b7f3c1e-2a4d-4e5f-8a9b-1c2d3e4f5a6b',
-    );
+    expect(
+      newJobId({ randomUUID: () => '0b7f3c1e-2a4d-4e5f-8a9b-1c2d3e4f5a6b', getRandomValues: () => new Uint8Array(16) }),
+    ).toBe('0b7f3c1e-2a4d-4e5f-8a9b-1c2d3e4f5a6b');
   });
 });

@@ -92,16 +92,15 @@ export function StepCard({
         maxLength={TEXT_LENGTH_LIMITS.label}
         onInput={(v) => onChange({ label: v })}
       />
-      <div class="field-grid field-grid-3">
-        <NumberField
-          compact
-          id={`${id}-duration`}
-          label={t('app.cycle.duration')}
-          unit={units.time}
-          value={step.duration}
-          onInput={(v) => onChange({ duration: v })}
-          error={err('durationH')}
-        />
+      <NumberField
+        id={`${id}-duration`}
+        label={t('app.cycle.duration')}
+        unit={units.time}
+        value={step.duration}
+        onInput={(v) => onChange({ duration: v })}
+        error={err('durationH')}
+      />
+      <div class="field-grid field-grid-2">
         <NumberField
           compact
           id={`${id}-start`}

@@ -90,16 +90,19 @@ export function FilesView() {
         <button type="button" class="button button-primary" disabled={busy} onClick={() => void download('json')}>
           {t('app.log.files.backup')}
         </button>
-        <Segmented
-          name="files-decimal"
-          legend={t('app.log.files.decimalMark')}
-          value={decimalMark}
-          choices={[
-            { value: '.', label: t('app.log.files.point') },
-            { value: ',', label: t('app.log.files.comma') },
-          ]}
-          onChange={(v) => setDecimalMark(v as DecimalMark)}
-        />
+        {/* The two notations shown as they are, whatever the language. */}
+        <div data-literal>
+          <Segmented
+            name="files-decimal"
+            legend={t('app.log.files.decimalMark')}
+            value={decimalMark}
+            choices={[
+              { value: '.', label: t('app.log.files.point') },
+              { value: ',', label: t('app.log.files.comma') },
+            ]}
+            onChange={(v) => setDecimalMark(v as DecimalMark)}
+          />
+        </div>
         <button type="button" class="button" disabled={busy} onClick={() => void download('csv')}>
           {t('app.log.files.csv')}
         </button>

@@ -1,8 +1,9 @@
 /**
  * The full backup: our own plain JSON format,
- * `{ format: "casefront-job-log", version, exportedAt, appVersion, jobs: [...] }`,
- * where `version` is the job record version. Import checks the whole file first and
- * changes nothing unless every record is valid.
+ * `{ format: "casefront-job-log", version, exportedAt, appVersion, jobs: [...], device? }`,
+ * where `version` is the job record version and `device` what this device was set to (settings,
+ * depth corrections and their switches, the chosen furnace), each checked by the app when it is
+ * used. Import checks the whole file first and changes nothing unless every record is valid.
  */
 import * as v from 'valibot';
 import { issuesOf } from './issues';
@@ -18,17 +19,28 @@ export const BackupSchema = v.strictObject({
   exportedAt: TimestampSchema,
   appVersion: v.pipe(v.string(), v.minLength(1), v.maxLength(40)),
   jobs: v.array(JobSchema),
+  /** The device's own state, by name; the app checks each part against its own shape before using it. */
+  device: v.optional(v.record(v.pipe(v.string(), v.maxLength(40)), v.unknown())),
 });
+
+/** What a device keeps besides the log: restored only when a person asks for it. */
+export type DeviceState = Record<string, unknown>;
 
 export type Backup = v.InferOutput<typeof BackupSchema>;
 
-export function createBackup(jobs: readonly Job[], appVersion: string, now: Date = new Date()): Backup {
+export function createBackup(
+  jobs: readonly Job[],
+  appVersion: string,
+  now: Date = new Date(),
+  device?: DeviceState,
+): Backup {
   return {
     format: BACKUP_FORMAT,
     version: JOB_RECORD_VERSION,
     exportedAt: now.toISOString(),
     appVersion,
     jobs: [...jobs].sort(compareNewestFirst).reverse(),
+    ...(device ? { device } : {}),
   };
 }
 

@@ -3,7 +3,7 @@
  * and the CSV for spreadsheets. The screens turn the text into a download; nothing here
  * sends anything anywhere.
  */
-import { backupToJson, createBackup, parseBackup } from './backup';
+import { backupToJson, createBackup, parseBackup, type DeviceState } from './backup';
 import { jobsToCsv, type CsvOptions } from './csv';
 import type { ImportReport } from './merge';
 import { succeed, type JobsResult } from './result';
@@ -17,23 +17,32 @@ export interface ExportFile {
   skipped: CorruptRecord[];
 }
 
-/** The whole log as a backup file's text. */
+/** The whole log as a backup file's text, with the device's own state when given. */
 export async function exportBackup(
   store: JobStore,
   appVersion: string,
   now: Date = new Date(),
+  device?: DeviceState,
 ): Promise<JobsResult<ExportFile>> {
   const all = await store.readAll();
   if (!all.ok) return all;
-  const text = backupToJson(createBackup(all.value.jobs, appVersion, now));
+  const text = backupToJson(createBackup(all.value.jobs, appVersion, now, device));
   return succeed({ text, jobCount: all.value.jobs.length, skipped: all.value.corrupt });
 }
 
-/** Checks the whole file, then merges it into the log in one transaction (newest `updatedAt` wins). */
-export async function importBackup(store: JobStore, text: string): Promise<JobsResult<ImportReport>> {
+/**
+ * Checks the whole file, then merges it into the log in one transaction (newest `updatedAt` wins).
+ * The device state the file carries comes back beside the report, for the person to apply or not.
+ */
+export async function importBackup(
+  store: JobStore,
+  text: string,
+): Promise<JobsResult<ImportReport & { device?: DeviceState }>> {
   const backup = parseBackup(text);
   if (!backup.ok) return backup;
-  return store.merge(backup.value.jobs);
+  const merged = await store.merge(backup.value.jobs);
+  if (!merged.ok || !backup.value.device) return merged;
+  return succeed({ ...merged.value, device: backup.value.device });
 }
 
 /** The whole log, oldest first, as CSV. */

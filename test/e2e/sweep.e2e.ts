@@ -11,7 +11,7 @@ import { mkdirSync } from 'node:fs';
 import { after, before, describe, it } from 'node:test';
 import type { Browser, Page } from 'playwright-core';
 import { movedTo, backupText, demoLog, importFile } from './logData';
-import { BASE_URL, closeBrowser, launch, phoneContext } from './browser';
+import { BASE_URL, closeBrowser, launch, PHONE, phoneContext } from './browser';
 import { sweepPage, type SweepReport } from './sweepCheck';
 import type { Job } from '../../src/jobs/schema';
 
@@ -84,6 +84,38 @@ function longLog(): Job[] {
           notes: `Tür 2 min offen bei 3 h 10 min; Probe nachgemessen. ${'Randhärte geprüft. '.repeat(6)}`,
         }
       : job,
+  );
+}
+
+/**
+ * Waits until the page has stopped changing for 400 ms (results from the worker, fits, lazily loaded
+ * charts), at most 8 s: the checks must see what a person sees once it is all there.
+ */
+async function settled(page: Page): Promise<void> {
+  // Work in progress says so (an "updating" mark, a busy region, "Opening…"): wait for it to end.
+  await page
+    .waitForFunction(
+      () => document.querySelector('[data-updating], [aria-busy="true"], .screen-loading') === null,
+      undefined,
+      { timeout: 8000 },
+    )
+    .catch(() => undefined); // what is still busy after 8 s is checked as it stands
+  await page.evaluate(
+    () =>
+      new Promise<void>((resolve) => {
+        let timer = setTimeout(done, 400);
+        const observer = new MutationObserver(() => {
+          clearTimeout(timer);
+          timer = setTimeout(done, 400);
+        });
+        const limit = setTimeout(done, 8000);
+        observer.observe(document.body, { subtree: true, childList: true, characterData: true, attributes: true });
+        function done() {
+          observer.disconnect();
+          clearTimeout(limit);
+          resolve();
+        }
+      }),
   );
 }
 
@@ -178,9 +210,8 @@ describe('the sweep', () => {
           await page.waitForSelector('main h1');
           await page.waitForLoadState('networkidle');
           if (state.act) await state.act(page);
-          // Results computed in the worker, lazily loaded charts: let them land.
-          await page.waitForTimeout(state.name.startsWith('cycle') || state.name === 'plan' ? 600 : 150);
-          const result: SweepReport = await page.evaluate(sweepPage, { language });
+          await settled(page);
+          const result: SweepReport = await page.evaluate(sweepPage, { language, width: PHONE.width });
           totals.elements += result.elements;
           totals.screens += 1;
           problems.push(...result.problems.map((p) => `${language} ${theme} ${state.name}: ${p}`));

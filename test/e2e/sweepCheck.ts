@@ -10,10 +10,12 @@ export interface SweepReport {
 
 export interface SweepOptions {
   language: 'en' | 'es' | 'de';
+  /** The phone's width in CSS px. Not `innerWidth`: a mobile browser widens its layout viewport to content that overflows. */
+  width: number;
 }
 
 /** Runs in the browser: text that overflows or is clipped, the wrong decimal mark, long floats, raw keys. */
-export function sweepPage({ language }: SweepOptions): SweepReport {
+export function sweepPage({ language, width }: SweepOptions): SweepReport {
   const problems: string[] = [];
   const canvas = document.createElement('canvas').getContext('2d')!;
   const describe = (el: Element, text: string) =>
@@ -53,7 +55,20 @@ export function sweepPage({ language }: SweepOptions): SweepReport {
     if (el instanceof SVGElement || el.tagName === 'SCRIPT' || el.tagName === 'STYLE' || !visible(el)) continue;
     elements++;
     const own = ownText(el);
-    if (own.trim() !== '') texts.push({ el, text: own });
+    if (own.trim() !== '') {
+      texts.push({ el, text: own });
+      // Text past the screen's edge, whatever clips or scrolls around it.
+      for (const node of el.childNodes) {
+        if (node.nodeType !== Node.TEXT_NODE || !node.textContent?.trim()) continue;
+        const range = document.createRange();
+        range.selectNodeContents(node);
+        const box = range.getBoundingClientRect();
+        if (box.width > 0 && (box.right > width + 1 || box.left < -1))
+          problems.push(
+            `text past the screen edge ${describe(el, own)}: ${Math.round(box.left)}–${Math.round(box.right)} px`,
+          );
+      }
+    }
     for (const attribute of ['aria-label', 'title', 'placeholder']) {
       const value = el.getAttribute(attribute);
       if (value) texts.push({ el, text: value });
@@ -134,7 +149,7 @@ export function sweepPage({ language }: SweepOptions): SweepReport {
     }
   }
 
-  const pageOverflow = document.documentElement.scrollWidth - window.innerWidth;
+  const pageOverflow = Math.max(document.documentElement.scrollWidth, window.innerWidth) - width;
   if (pageOverflow > 0) problems.push(`page ${pageOverflow} px wider than the screen`);
   return { elements, problems };
 }

@@ -18,7 +18,18 @@ import { ProfileTable } from './ProfileTable';
 import { LogSaveButton } from '../log/save/LogActions';
 import { cycleLogEntry } from './logEntry';
 import { cycleOutcome } from './results';
-import { addStep, cycleForm, duplicateStep, MAX_STEPS, moveStep, removeStep, updateStep } from './state';
+import {
+  addStep,
+  cycleForm,
+  duplicateStep,
+  keepCycleReplace,
+  MAX_STEPS,
+  moveStep,
+  removeStep,
+  replacedCycle,
+  undoCycleReplace,
+  updateStep,
+} from './state';
 import { StepCard } from './StepCard';
 import { cycleView } from './view';
 import './screen.css';
@@ -43,6 +54,20 @@ export default function CycleScreen() {
         value={view?.answer}
         note={view?.answerNote}
       />
+
+      {replacedCycle.value.active && (
+        <div class="card replaced-note" role="status">
+          <p>{t('app.cycle.replaced.text', { count: replacedCycle.value.form.steps.length })}</p>
+          <div class="button-row">
+            <button type="button" class="button" onClick={undoCycleReplace}>
+              {t('app.cycle.replaced.undo')}
+            </button>
+            <button type="button" class="button" onClick={keepCycleReplace}>
+              {t('app.cycle.replaced.keep')}
+            </button>
+          </div>
+        </div>
+      )}
 
       <section aria-labelledby="cycle-steps">
         <h2 id="cycle-steps">{t('app.cycle.stepsHeading')}</h2>

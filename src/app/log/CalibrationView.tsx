@@ -95,6 +95,7 @@ function FurnaceCalibrationCard({
             high: show.number(fit.value.interval95.high, 2),
           }),
           main: true,
+          text: true,
         },
         { key: 'jobs', label: t('app.calibration.jobs'), value: String(fit.value.jobCount) },
         { key: 'rms', label: t('app.calibration.rms'), value: show.depth(fit.value.rmsResidualMm) },

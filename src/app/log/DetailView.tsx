@@ -180,9 +180,11 @@ function JobEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void
   const [form, setForm] = useState<JobForm>(() => formOfJob(job));
   const [placed, setPlaced] = useState<PlacedErrors | undefined>(undefined);
   const [busy, setBusy] = useState(false);
+  // Only a steel of the calculator's own composition needs naming; a listed grade has its name.
+  const askGradeName = job.steel.gradeId === undefined;
   const save = async (event: Event) => {
     event.preventDefault();
-    const missing = missingFields(form, true);
+    const missing = missingFields(form, askGradeName);
     if (missing.length > 0) {
       setPlaced(placeMissing(t, missing));
       return;
@@ -204,7 +206,7 @@ function JobEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void
         form={form}
         onChange={(changes) => setForm({ ...form, ...changes })}
         errors={placed?.fields ?? {}}
-        askGradeName
+        askGradeName={askGradeName}
         withStatus={false}
       />
       <FormActions

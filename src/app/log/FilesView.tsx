@@ -10,6 +10,7 @@ import {
   exportCsv,
   exportFileName,
   importBackup,
+  type DeviceState,
   type ExportFile,
   type JobsResult,
 } from '../../jobs';
@@ -17,6 +18,7 @@ import { language } from '../../i18n/useT';
 import { ErrorNote } from '../ui/Notices';
 import { Segmented } from '../ui/Segmented';
 import { useScreenContext } from '../settings/screenContext';
+import { applyDeviceState, currentDeviceState } from '../settings/deviceState';
 import { APP_VERSION } from '../version';
 import { jobStore, writeToLog } from './db';
 import { DemoData } from './DemoData';
@@ -38,6 +40,8 @@ export function FilesView() {
   const [exported, setExported] = useState<Outcome | undefined>(undefined);
   const [imported, setImported] = useState<Outcome | undefined>(undefined);
   const [busy, setBusy] = useState(false);
+  /** The settings an imported file carries, until they are applied or another file is picked. */
+  const [fileDevice, setFileDevice] = useState<DeviceState | undefined>(undefined);
 
   const download = async (kind: 'csv' | 'json') => {
     setBusy(true);
@@ -47,7 +51,7 @@ export function FilesView() {
       ? store
       : kind === 'csv'
         ? await exportCsv(store.value, { decimalMark })
-        : await exportBackup(store.value, APP_VERSION);
+        : await exportBackup(store.value, APP_VERSION, new Date(), currentDeviceState());
     setBusy(false);
     if (!file.ok) {
       setExported({ ok: false, text: describeJobsError(t, file.error) });
@@ -79,6 +83,7 @@ export function FilesView() {
         ? { ok: true, text: t('jobs.importReport', { ...result.value }) }
         : { ok: false, text: describeJobsError(t, result.error) },
     );
+    setFileDevice(result.ok ? result.value.device : undefined);
   };
 
   return (
@@ -128,6 +133,22 @@ export function FilesView() {
         <div aria-live="polite">
           {imported && (imported.ok ? <p class="log-saved">{imported.text}</p> : <ErrorNote message={imported.text} />)}
         </div>
+        {fileDevice && (
+          <div class="files-device">
+            <p class="note">{t('app.log.files.deviceOffer')}</p>
+            <button
+              type="button"
+              class="button"
+              onClick={() => {
+                applyDeviceState(fileDevice);
+                setFileDevice(undefined);
+                setImported({ ok: true, text: t('app.log.files.deviceApplied') });
+              }}
+            >
+              {t('app.log.files.deviceApply')}
+            </button>
+          </div>
+        )}
       </section>
 
       <DemoData />

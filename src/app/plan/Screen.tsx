@@ -8,7 +8,7 @@ import { isModelId } from '../../physics';
 import { cycleFormOfRecipe } from '../cycle/fromRecipe';
 import { CycleTabs } from '../cycle/CycleTabs';
 import { cycleLogEntry } from '../cycle/logEntry';
-import { cycleForm } from '../cycle/state';
+import { replaceCycleForm } from '../cycle/state';
 import { LogSaveButton } from '../log/save/LogActions';
 import { defaults, model } from '../settings/state';
 import { hrefFor } from '../shell/route';
@@ -54,15 +54,18 @@ export default function PlanScreen() {
   const betaPlaceholder = show.number(defaults.value.betaMPerS / 1e-7, 2);
   const openInEditor = () => {
     if (!result) return;
-    cycleForm.value = cycleFormOfRecipe(result.plan.recipe, {
-      steel: form.steel,
-      model: form.model,
-      threshold: form.threshold,
-      size: form.size,
-      defaultBetaMPerS: defaults.value.betaMPerS,
-      labelOf: (label) =>
-        label === 'boost' || label === 'diffuse' || label === 'hardening' ? t(`app.plan.steps.${label}`) : label,
-    });
+    // What the engineer had in the editor stays at hand: the cycle screen offers to bring it back.
+    replaceCycleForm(
+      cycleFormOfRecipe(result.plan.recipe, {
+        steel: form.steel,
+        model: form.model,
+        threshold: form.threshold,
+        size: form.size,
+        defaultBetaMPerS: defaults.value.betaMPerS,
+        labelOf: (label) =>
+          label === 'boost' || label === 'diffuse' || label === 'hardening' ? t(`app.plan.steps.${label}`) : label,
+      }),
+    );
     location.hash = hrefFor('cycle');
   };
 

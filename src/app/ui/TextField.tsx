@@ -175,10 +175,12 @@ function useGrowingBox(value: string, placeholder?: string) {
   return boxRef;
 }
 
+/** As many rows as the text takes (rows, not an inline height: the markup carries no style attributes). */
 function fitHeight(box: HTMLTextAreaElement | null): void {
   if (!box) return;
-  box.style.height = 'auto';
-  box.style.height = `${box.scrollHeight}px`;
+  const least = box.classList.contains('field-lines') ? 3 : 1;
+  box.rows = least;
+  while (box.scrollHeight > box.clientHeight + 1 && box.rows < 40) box.rows += 1;
 }
 
 /** A large checkbox with its label. */

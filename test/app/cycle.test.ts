@@ -143,3 +143,10 @@ describe('the cycle screen runs the cycle solver', () => {
     expect(warnings.some((w) => w.code === 'saturation.potentialAboveAcm' && w.stepIndex === 0)).toBe(true);
   });
 });
+
+describe('chart ticks', () => {
+  it('carry as many decimals as their step needs: 0.5 mm → 1, 0.25 → 2, 1 → 0, 20 HRC → 0', async () => {
+    const { tickDigits } = await import('../../src/app/cycle/chartData');
+    expect([0.5, 0.25, 1, 20, 0.1, 0.05, 0].map(tickDigits)).toEqual([1, 2, 0, 0, 1, 2, 0]);
+  });
+});

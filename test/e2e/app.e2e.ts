@@ -106,7 +106,9 @@ describe('cycle editor', () => {
       recorder.requests.some((u) => /\/chart-[\w-]+\.js$/.test(u)),
       'chart chunk loaded on demand',
     );
-    assert.equal(await page.locator('table.numbers tbody tr').count(), 11);
+    // The profile's table (11 depths), then the surface carbon's (11 times).
+    assert.equal(await page.locator('table.numbers').first().locator('tbody tr').count(), 11);
+    assert.equal(await page.locator('table.numbers').nth(1).locator('tbody tr').count(), 11);
     // A duration field takes 1:20 or 80 min besides a number, and says so when the text is neither.
     await page.fill('li.step >> nth=2 >> input[id$="-duration"]', 'zwei');
     assert.match((await page.locator('li.step >> nth=2 >> .field-error').textContent()) ?? '', /“zwei” is not a time/);
@@ -130,7 +132,7 @@ describe('languages', () => {
     await page.waitForSelector('.answer-value');
     assert.equal(await page.textContent('main h1'), 'Profundidad de capa');
     assert.equal(await answer(page).textContent(), expectedEcd(925, 6, 0.9).replace('.', ','));
-    assert.match((await page.textContent('.bottom-nav')) ?? '', /Ciclo.*Recuperar.*Convertir.*Ajustes/);
+    assert.match((await page.textContent('.bottom-nav')) ?? '', /Ciclo.*Desvío.*Convertir.*Ajustes/);
     await close();
   });
 });

@@ -1,7 +1,7 @@
 /** Cycle editor: steps (add, remove, reorder, duplicate), part shape, steel, model, threshold, furnace; results, range, chart and table. */
 import { useMemo } from 'preact/hooks';
 import { isModelId } from '../../physics';
-import { defaults, model, theme } from '../settings/state';
+import { defaults, model } from '../settings/state';
 import { Answer } from '../ui/Answer';
 import { CycleBand } from '../range/CycleBand';
 import { FurnaceField } from '../fields/FurnaceField';
@@ -13,8 +13,7 @@ import { useScreenContext } from '../settings/screenContext';
 import { ShapeFields } from '../fields/ShapeFields';
 import { SteelFields } from '../fields/SteelFields';
 import { CycleTabs } from './CycleTabs';
-import { ProfileChart } from './ProfileChart';
-import { ProfileTable } from './ProfileTable';
+import { CycleCharts } from './CycleCharts';
 import { LogSaveButton } from '../log/save/LogActions';
 import { cycleLogEntry } from './logEntry';
 import { cycleOutcome } from './results';
@@ -124,9 +123,15 @@ export default function CycleScreen() {
 
       <ResultsCard id="cycle-results" error={word(outcome.general)} view={view}>
         <CycleBand id="cycle-band" recipe={result?.recipe} ctx={ctx} />
-        {view && <ProfileChart data={view.chart} label={t('app.cycle.chartLabel')} theme={theme.value} />}
-        {view && <p class="note">{view.hardnessMethod}</p>}
-        {result && <ProfileTable profile={result.simulation.profile} ctx={ctx} />}
+        {view && result && (
+          <CycleCharts
+            simulation={result.simulation}
+            profile={view.chart}
+            history={view.history}
+            hardnessMethod={view.hardnessMethod}
+            ctx={ctx}
+          />
+        )}
       </ResultsCard>
       <LogSaveButton entry={logEntry} />
     </div>

@@ -1,11 +1,21 @@
 /**
- * The carbon and hardness profile chart, drawn with uPlot. This module is loaded
- * lazily (with uPlot and its CSS) the first time a chart is shown.
+ * The cycle's charts, drawn with uPlot: the carbon and hardness profile against depth, and the
+ * surface carbon over time. This module is loaded lazily (with uPlot and its CSS) the first time a
+ * chart is shown. Ticks are written in the page's notation, placed close enough to read a value off
+ * the axis; a tap (or a pointer) on the plot reports the values there through `onPoint`.
  */
 import uPlot from 'uplot';
 import 'uplot/dist/uPlot.min.css';
 
-export interface ProfileChartData {
+/** What every chart is given besides its series. */
+interface ChartWords {
+  /** A tick in the locale's notation; `step` is the distance between two ticks. */
+  tick: (value: number, step: number) => string;
+  /** The values at point `index`, in words, for the line under the chart. */
+  readout: (index: number) => string;
+}
+
+export interface ProfileChartData extends ChartWords {
   depth: number[];
   carbonPct: number[];
   hardnessHrc: number[];
@@ -26,15 +36,22 @@ export interface ProfileChartData {
   };
 }
 
+export interface HistoryChartData extends ChartWords {
+  time: number[];
+  carbonPct: number[];
+  labels: { time: string; carbon: string; carbonAxis: string };
+}
+
 const cssVar = (name: string) => getComputedStyle(document.documentElement).getPropertyValue(name).trim() || '#888';
 
-function options(data: ProfileChartData, width: number): uPlot.Options {
+/** Pixels between ticks at least: a depth tick every 0.5 mm or closer on a phone, each still readable. */
+const TICK_SPACE_X = 30;
+const TICK_SPACE_Y = 28;
+
+function axis(label: string, scale: string, words: ChartWords, side?: 0 | 1 | 2 | 3): uPlot.Axis {
   const text = cssVar('--text');
   const grid = cssVar('--line');
-  const carbon = cssVar('--chart-carbon');
-  const hardness = cssVar('--chart-hardness');
-  const mark = cssVar('--chart-mark');
-  const axis = (label: string, scale: string, side?: 0 | 1 | 2 | 3): uPlot.Axis => ({
+  return {
     scale,
     label,
     stroke: text,
@@ -42,19 +59,45 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
     ticks: { stroke: grid },
     font: '13px system-ui, sans-serif',
     labelFont: '600 13px system-ui, sans-serif',
+    space: scale === 'x' ? TICK_SPACE_X : TICK_SPACE_Y,
+    values: (_u, splits) => {
+      const step = splits.length > 1 ? Math.abs(splits[1]! - splits[0]!) : 1;
+      return splits.map((v) => words.tick(v, step));
+    },
     // eslint-disable-next-line @typescript-eslint/no-unsafe-enum-assignment -- uPlot's Side is an ambient const enum, which isolated modules cannot name; its values are 0–3.
     ...(side === undefined ? {} : { side }),
-  });
+  };
+}
+
+/** The frame every chart shares: size, legend without live values (the line under the chart has them), cursor. */
+function frame(width: number, onPoint: (index: number | null) => void): Omit<uPlot.Options, 'series' | 'axes'> {
   return {
     width,
     height: Math.round(Math.min(340, Math.max(240, width * 0.8))),
     legend: { show: true, live: false },
-    cursor: { drag: { x: false, y: false } },
+    cursor: { drag: { x: false, y: false }, points: { size: 10 } },
+    hooks: {
+      setCursor: [
+        (u) => {
+          onPoint(u.cursor.idx ?? null);
+        },
+      ],
+    },
+  };
+}
+
+function profileOptions(data: ProfileChartData, width: number, onPoint: (index: number | null) => void): uPlot.Options {
+  const carbon = cssVar('--chart-carbon');
+  const hardness = cssVar('--chart-hardness');
+  const mark = cssVar('--chart-mark');
+  const base = frame(width, onPoint);
+  return {
+    ...base,
     scales: { x: { time: false }, c: { auto: true }, hrc: { auto: false, range: [15, 70] } },
     axes: [
-      axis(data.labels.depth, 'x'),
-      { ...axis(data.labels.carbonAxis, 'c'), size: 46 },
-      { ...axis(data.labels.hardnessAxis, 'hrc', 1), size: 44, grid: { show: false } },
+      axis(data.labels.depth, 'x', data),
+      { ...axis(data.labels.carbonAxis, 'c', data), size: 50 },
+      { ...axis(data.labels.hardnessAxis, 'hrc', data, 1), size: 44, grid: { show: false } },
     ],
     series: [
       {},
@@ -64,6 +107,7 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
       { label: data.labels.limit, scale: 'hrc', stroke: hardness, width: 1.5, dash: [2, 3], points: { show: false } },
     ],
     hooks: {
+      ...base.hooks,
       draw: [
         (u) => {
           const x = u.valToPos(data.ecd, 'x', true);
@@ -87,7 +131,7 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
   };
 }
 
-function series(data: ProfileChartData): uPlot.AlignedData {
+function profileSeries(data: ProfileChartData): uPlot.AlignedData {
   return [
     data.depth,
     data.carbonPct,
@@ -97,15 +141,48 @@ function series(data: ProfileChartData): uPlot.AlignedData {
   ];
 }
 
-/** Draws the chart into `el`; returns a function that redraws with new data or removes it. */
-export function mountProfileChart(el: HTMLElement, data: ProfileChartData) {
-  let current = data;
-  let plot = new uPlot(options(current, el.clientWidth || 320), series(current), el);
+function historyOptions(data: HistoryChartData, width: number, onPoint: (index: number | null) => void): uPlot.Options {
   return {
-    update(next: ProfileChartData) {
-      current = next;
+    ...frame(width, onPoint),
+    scales: { x: { time: false }, c: { auto: true } },
+    axes: [axis(data.labels.time, 'x', data), { ...axis(data.labels.carbonAxis, 'c', data), size: 50 }],
+    series: [{}, { label: data.labels.carbon, scale: 'c', stroke: cssVar('--chart-carbon'), width: 3 }],
+  };
+}
+
+const historySeries = (data: HistoryChartData): uPlot.AlignedData => [data.time, data.carbonPct];
+
+export type ChartKind = 'profile' | 'history';
+export type ChartData<K extends ChartKind> = K extends 'profile' ? ProfileChartData : HistoryChartData;
+
+export interface MountedChart<K extends ChartKind> {
+  update(next: ChartData<K>): void;
+  resize(): void;
+  destroy(): void;
+}
+
+/** Draws a chart into `el`; what it returns redraws it with new data, resizes or removes it. */
+export function mountChart<K extends ChartKind>(
+  kind: K,
+  el: HTMLElement,
+  data: ChartData<K>,
+  onPoint: (index: number | null) => void,
+): MountedChart<K> {
+  const build = (next: ChartData<K>) => {
+    const width = el.clientWidth || 320;
+    return kind === 'profile'
+      ? new uPlot(profileOptions(next as ProfileChartData, width, onPoint), profileSeries(next as ProfileChartData), el)
+      : new uPlot(
+          historyOptions(next as HistoryChartData, width, onPoint),
+          historySeries(next as HistoryChartData),
+          el,
+        );
+  };
+  let plot = build(data);
+  return {
+    update(next: ChartData<K>) {
       plot.destroy();
-      plot = new uPlot(options(current, el.clientWidth || 320), series(current), el);
+      plot = build(next);
     },
     resize() {
       plot.setSize({ width: el.clientWidth || 320, height: plot.height });

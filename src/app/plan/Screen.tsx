@@ -4,8 +4,11 @@
  * plan opened in the cycle editor or saved to the log.
  */
 import { useMemo } from 'preact/hooks';
-import { isModelId } from '../../physics';
+import { isModelId, simulateCycle } from '../../physics';
+import { historyChartData, profileChartData } from '../cycle/chartData';
+import { CycleCharts } from '../cycle/CycleCharts';
 import { cycleFormOfRecipe } from '../cycle/fromRecipe';
+import { hardnessMethodText } from '../cycle/view';
 import { CycleTabs } from '../cycle/CycleTabs';
 import { cycleLogEntry } from '../cycle/logEntry';
 import { replaceCycleForm } from '../cycle/state';
@@ -50,6 +53,19 @@ export default function PlanScreen() {
         : undefined,
     [result],
   );
+  // The planned cycle run once more here, for its charts (a fraction of a millisecond; the search itself runs in the worker).
+  const charts = useMemo(() => {
+    if (!result) return undefined;
+    const run = simulateCycle(result.plan.recipe);
+    if (!run.ok) return undefined;
+    const recipe = result.plan.recipe;
+    return {
+      simulation: run.value,
+      profile: profileChartData(run.value, recipe, t, show, units),
+      history: historyChartData(run.value, t, show, units),
+      method: hardnessMethodText(run.value.hardnessBasis, recipe.steel.grade, t, show),
+    };
+  }, [result, t, show, units]);
   const formModel = isModelId(form.model) ? form.model : model.value;
   const betaPlaceholder = show.number(defaults.value.betaMPerS / 1e-7, 2);
   const openInEditor = () => {
@@ -220,6 +236,15 @@ export default function PlanScreen() {
 
       <ResultsCard id="plan-results" error={word(outcome.general)} view={view}>
         <CycleBand id="plan-band" recipe={result?.plan.recipe} ctx={ctx} />
+        {charts && (
+          <CycleCharts
+            simulation={charts.simulation}
+            profile={charts.profile}
+            history={charts.history}
+            hardnessMethod={charts.method}
+            ctx={ctx}
+          />
+        )}
       </ResultsCard>
       <div class="plan-actions">
         <button

@@ -15,11 +15,13 @@ const NAV_PX = 72;
 function useFieldsClearOf(answerRef: { current: HTMLElement | null }) {
   useEffect(() => {
     const answer = answerRef.current;
-    if (!answer || typeof ResizeObserver === 'undefined') return;
-    const root = document.documentElement;
+    if (!answer || typeof ResizeObserver === 'undefined' || !('adoptedStyleSheets' in document)) return;
     const covered = () =>
       getComputedStyle(answer).position === 'sticky' ? HEADER_PX + answer.offsetHeight + 8 : HEADER_PX;
-    const observer = new ResizeObserver(() => root.style.setProperty('--covered-top', `${covered()}px`));
+    // A constructed style sheet, not a style attribute: the markup carries none (CSP and its test).
+    const sheet = new CSSStyleSheet();
+    document.adoptedStyleSheets = [...document.adoptedStyleSheets, sheet];
+    const observer = new ResizeObserver(() => sheet.replaceSync(`:root { --covered-top: ${covered()}px; }`));
     observer.observe(answer);
     const onFocus = (event: FocusEvent) => {
       const field = event.target;
@@ -39,7 +41,7 @@ function useFieldsClearOf(answerRef: { current: HTMLElement | null }) {
     return () => {
       observer.disconnect();
       document.removeEventListener('focusin', onFocus);
-      root.style.removeProperty('--covered-top');
+      document.adoptedStyleSheets = document.adoptedStyleSheets.filter((s) => s !== sheet);
     };
   }, [answerRef]);
 }

@@ -8,7 +8,7 @@ import { jobsToCsv, type CsvOptions } from './csv';
 import type { ImportReport } from './merge';
 import { succeed, type JobsResult } from './result';
 import { localIsoDate } from './shift';
-import type { CorruptRecord, JobStore } from './store';
+import type { CorruptRecord, ImportOptions, JobStore } from './store';
 
 export interface ExportFile {
   text: string;
@@ -26,21 +26,27 @@ export async function exportBackup(
 ): Promise<JobsResult<ExportFile>> {
   const all = await store.readAll();
   if (!all.ok) return all;
-  const text = backupToJson(createBackup(all.value.jobs, appVersion, now, device));
+  const history = await store.history();
+  if (!history.ok) return history;
+  const text = backupToJson(createBackup(all.value.jobs, appVersion, now, history.value, device));
   return succeed({ text, jobCount: all.value.jobs.length, skipped: all.value.corrupt });
 }
 
 /**
- * Checks the whole file, then merges it into the log in one transaction (newest `updatedAt` wins).
- * The device state the file carries comes back beside the report, for the person to apply or not.
+ * Checks the whole file, then merges it into the log field by field (`JobStore.merge`). The device
+ * state the file carries comes back beside the report, for the person to apply or not.
  */
 export async function importBackup(
   store: JobStore,
   text: string,
+  options: Omit<ImportOptions, 'history'> = {},
 ): Promise<JobsResult<ImportReport & { device?: DeviceState }>> {
   const backup = parseBackup(text);
   if (!backup.ok) return backup;
-  const merged = await store.merge(backup.value.jobs);
+  const merged = await store.merge(backup.value.jobs, {
+    ...options,
+    ...(backup.value.history ? { history: backup.value.history } : {}),
+  });
   if (!merged.ok || !backup.value.device) return merged;
   return succeed({ ...merged.value, device: backup.value.device });
 }

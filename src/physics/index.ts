@@ -44,6 +44,7 @@ export {
   CASE_CRITERIA,
   CASE_CRITERION_IDS,
   DEFAULT_CASE_CRITERION,
+  CONVERTIBLE_RANGE as CONVERTIBLE_HARDNESS_RANGE,
   HARDNESS_SCALE_RANGE,
   HARDNESS_UNITS,
   hardnessIn,
@@ -112,6 +113,25 @@ export {
 } from './cycle/recipe';
 export { readRecipe } from './cycle/readRecipe';
 export { LIMITS, MAX_STEPS, TEXT_LENGTH_LIMITS, checkLimit, withinLimit, type Limit, type ValueUnit } from './limits';
+export {
+  readRequest,
+  specAt,
+  type FieldSpec,
+  type FieldsSpec,
+  type NumberSpec,
+  type ReadOf,
+  type RequestOf,
+} from './requestSpec';
+export {
+  CONVERT_REQUEST,
+  DEPTH_REQUEST,
+  EQUIVALENT_TIME_REQUEST,
+  PLAN_REQUEST,
+  RECIPE_REQUEST,
+  REQUESTS,
+  TEMPERATURE_REQUEST,
+  TIME_REQUEST,
+} from './requestTables';
 export { runCycle, simulateCycle } from './cycle/simulate';
 export { cycleDepthBand, type CycleBand, type CycleBandOptions } from './cycle/band';
 /** Reproducible pseudo-random numbers, for synthetic data (the demo log), never for anything secret. */

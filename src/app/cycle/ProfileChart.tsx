@@ -26,8 +26,8 @@ function Chart<K extends ChartKind>({
     let cancelled = false;
     void import('./chart').then(({ mountChart }) => {
       if (cancelled || !box.current) return;
-      if (chart.current) chart.current.update(data);
-      else chart.current = mountChart(kind, box.current, data, setPoint);
+      if (chart.current) chart.current.update(data, theme);
+      else chart.current = mountChart(kind, box.current, data, setPoint, theme);
     });
     return () => {
       cancelled = true;

@@ -48,7 +48,7 @@ const cssVar = (name: string) => getComputedStyle(document.documentElement).getP
 const TICK_SPACE_X = 30;
 const TICK_SPACE_Y = 28;
 
-function axis(label: string, scale: string, words: ChartWords, side?: 0 | 1 | 2 | 3): uPlot.Axis {
+function axis(label: string, scale: string, words: () => ChartWords, side?: 0 | 1 | 2 | 3): uPlot.Axis {
   const text = cssVar('--text');
   const grid = cssVar('--line');
   return {
@@ -62,7 +62,8 @@ function axis(label: string, scale: string, words: ChartWords, side?: 0 | 1 | 2 
     space: scale === 'x' ? TICK_SPACE_X : TICK_SPACE_Y,
     values: (_u, splits) => {
       const step = splits.length > 1 ? Math.abs(splits[1]! - splits[0]!) : 1;
-      return splits.map((v) => words.tick(v, step));
+      const { tick } = words();
+      return splits.map((v) => tick(v, step));
     },
     // eslint-disable-next-line @typescript-eslint/no-unsafe-enum-assignment -- uPlot's Side is an ambient const enum, which isolated modules cannot name; its values are 0–3.
     ...(side === undefined ? {} : { side }),
@@ -86,7 +87,13 @@ function frame(width: number, onPoint: (index: number | null) => void): Omit<uPl
   };
 }
 
-function profileOptions(data: ProfileChartData, width: number, onPoint: (index: number | null) => void): uPlot.Options {
+/** `shown()` is the data drawn now: ticks and the ECD mark read it on every draw, so new figures need no new chart. */
+function profileOptions(
+  shown: () => ProfileChartData,
+  width: number,
+  onPoint: (index: number | null) => void,
+): uPlot.Options {
+  const data = shown();
   const carbon = cssVar('--chart-carbon');
   const hardness = cssVar('--chart-hardness');
   const mark = cssVar('--chart-mark');
@@ -95,9 +102,9 @@ function profileOptions(data: ProfileChartData, width: number, onPoint: (index: 
     ...base,
     scales: { x: { time: false }, c: { auto: true }, hrc: { auto: false, range: [15, 70] } },
     axes: [
-      axis(data.labels.depth, 'x', data),
-      { ...axis(data.labels.carbonAxis, 'c', data), size: 50 },
-      { ...axis(data.labels.hardnessAxis, 'hrc', data, 1), size: 44, grid: { show: false } },
+      axis(data.labels.depth, 'x', shown),
+      { ...axis(data.labels.carbonAxis, 'c', shown), size: 50 },
+      { ...axis(data.labels.hardnessAxis, 'hrc', shown, 1), size: 44, grid: { show: false } },
     ],
     series: [
       {},
@@ -110,7 +117,8 @@ function profileOptions(data: ProfileChartData, width: number, onPoint: (index: 
       ...base.hooks,
       draw: [
         (u) => {
-          const x = u.valToPos(data.ecd, 'x', true);
+          const { ecd, labels } = shown();
+          const x = u.valToPos(ecd, 'x', true);
           if (!Number.isFinite(x)) return;
           const ctx = u.ctx;
           ctx.save();
@@ -123,7 +131,7 @@ function profileOptions(data: ProfileChartData, width: number, onPoint: (index: 
           ctx.stroke();
           ctx.fillStyle = mark;
           ctx.font = `600 ${12 * devicePixelRatio}px system-ui, sans-serif`;
-          ctx.fillText(data.labels.ecd, x + 4 * devicePixelRatio, u.bbox.top + 14 * devicePixelRatio);
+          ctx.fillText(labels.ecd, x + 4 * devicePixelRatio, u.bbox.top + 14 * devicePixelRatio);
           ctx.restore();
         },
       ],
@@ -141,11 +149,16 @@ function profileSeries(data: ProfileChartData): uPlot.AlignedData {
   ];
 }
 
-function historyOptions(data: HistoryChartData, width: number, onPoint: (index: number | null) => void): uPlot.Options {
+function historyOptions(
+  shown: () => HistoryChartData,
+  width: number,
+  onPoint: (index: number | null) => void,
+): uPlot.Options {
+  const data = shown();
   return {
     ...frame(width, onPoint),
     scales: { x: { time: false }, c: { auto: true } },
-    axes: [axis(data.labels.time, 'x', data), { ...axis(data.labels.carbonAxis, 'c', data), size: 50 }],
+    axes: [axis(data.labels.time, 'x', shown), { ...axis(data.labels.carbonAxis, 'c', shown), size: 50 }],
     series: [{}, { label: data.labels.carbon, scale: 'c', stroke: cssVar('--chart-carbon'), width: 3 }],
   };
 }
@@ -156,7 +169,8 @@ export type ChartKind = 'profile' | 'history';
 export type ChartData<K extends ChartKind> = K extends 'profile' ? ProfileChartData : HistoryChartData;
 
 export interface MountedChart<K extends ChartKind> {
-  update(next: ChartData<K>): void;
+  /** New figures are drawn into the same chart; new words or another theme (`look`) make a new one. */
+  update(next: ChartData<K>, look?: string): void;
   resize(): void;
   destroy(): void;
 }
@@ -167,22 +181,32 @@ export function mountChart<K extends ChartKind>(
   el: HTMLElement,
   data: ChartData<K>,
   onPoint: (index: number | null) => void,
+  look = '',
 ): MountedChart<K> {
-  const build = (next: ChartData<K>) => {
+  let current = data;
+  let drawnLook = look;
+  const seriesOf = (next: ChartData<K>) =>
+    kind === 'profile' ? profileSeries(next as ProfileChartData) : historySeries(next as HistoryChartData);
+  const make = () => {
     const width = el.clientWidth || 320;
-    return kind === 'profile'
-      ? new uPlot(profileOptions(next as ProfileChartData, width, onPoint), profileSeries(next as ProfileChartData), el)
-      : new uPlot(
-          historyOptions(next as HistoryChartData, width, onPoint),
-          historySeries(next as HistoryChartData),
-          el,
-        );
+    const options =
+      kind === 'profile'
+        ? profileOptions(() => current as ProfileChartData, width, onPoint)
+        : historyOptions(() => current as HistoryChartData, width, onPoint);
+    return new uPlot(options, seriesOf(current), el);
   };
-  let plot = build(data);
+  let plot = make();
   return {
-    update(next: ChartData<K>) {
+    update(next, nextLook = drawnLook) {
+      const sameWords = JSON.stringify(next.labels) === JSON.stringify(current.labels);
+      current = next;
+      if (sameWords && nextLook === drawnLook) {
+        plot.setData(seriesOf(current));
+        return;
+      }
+      drawnLook = nextLook;
       plot.destroy();
-      plot = build(next);
+      plot = make();
     },
     resize() {
       plot.setSize({ width: el.clientWidth || 320, height: plot.height });

@@ -11,8 +11,10 @@ import {
   exportFileName,
   importBackup,
   type DeviceState,
+  succeed,
   type ExportFile,
   type JobsResult,
+  type JobStore,
 } from '../../jobs';
 import { language } from '../../i18n/useT';
 import { ErrorNote } from '../ui/Notices';
@@ -21,7 +23,9 @@ import { useScreenContext } from '../settings/screenContext';
 import { applyDeviceState, currentDeviceState } from '../settings/deviceState';
 import { APP_VERSION } from '../version';
 import { jobStore, writeToLog } from './db';
+import { formatMoment } from './dates';
 import { DemoData } from './DemoData';
+import { useLogRead } from './useLog';
 import { downloadText } from './download';
 
 type DecimalMark = '.' | ',';
@@ -42,6 +46,8 @@ export function FilesView() {
   const [busy, setBusy] = useState(false);
   /** The settings an imported file carries, until they are applied or another file is picked. */
   const [fileDevice, setFileDevice] = useState<DeviceState | undefined>(undefined);
+  const [progress, setProgress] = useState<{ done: number; total: number } | undefined>(undefined);
+  const { locale } = useScreenContext();
 
   const download = async (kind: 'csv' | 'json') => {
     setBusy(true);
@@ -76,8 +82,11 @@ export function FilesView() {
     setBusy(true);
     setImported(undefined);
     const text = await file.text();
-    const result = await writeToLog((store) => importBackup(store, text));
+    const result = await writeToLog((store) =>
+      importBackup(store, text, { onProgress: (done, total) => setProgress({ done, total }) }),
+    );
     setBusy(false);
+    setProgress(undefined);
     setImported(
       result.ok
         ? { ok: true, text: t('jobs.importReport', { ...result.value }) }
@@ -130,6 +139,12 @@ export function FilesView() {
             onChange={(e) => void pick(e.currentTarget)}
           />
         </label>
+        {progress && (
+          <p class="note import-progress">
+            <progress max={progress.total} value={progress.done} />{' '}
+            {t('app.log.files.importProgress', { done: progress.done, total: progress.total })}
+          </p>
+        )}
         <div aria-live="polite">
           {imported && (imported.ok ? <p class="log-saved">{imported.text}</p> : <ErrorNote message={imported.text} />)}
         </div>
@@ -150,8 +165,28 @@ export function FilesView() {
           </div>
         )}
       </section>
+      <MigrationNote locale={locale} />
 
       <DemoData />
     </>
+  );
+}
+
+const readMigration = (store: JobStore) => Promise.resolve(succeed(store.migration));
+
+/** What the one-time move from the earlier log on this device found, once it has run. */
+function MigrationNote({ locale }: { locale: string }) {
+  const { t } = useScreenContext();
+  const loaded = useLogRead(null, readMigration);
+  if (loaded.state !== 'ready' || !loaded.value || loaded.value.total === 0) return null;
+  const report = loaded.value;
+  return (
+    <p class="note migration-note">
+      {t('app.log.files.migrated', {
+        moved: report.moved,
+        damaged: report.damaged,
+        date: formatMoment(report.at, locale),
+      })}
+    </p>
   );
 }

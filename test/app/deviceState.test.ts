@@ -10,7 +10,9 @@ describe('device state in the backup', () => {
     const before = settings.value;
     settings.value = { ...DEFAULT_SETTINGS, unitSystem: 'us', theme: 'contrast' };
     chosenFurnace.value = 'F2';
-    const text = backupToJson(createBackup([], '0.1.0', new Date('2026-01-05T08:00:00Z'), undefined, currentDeviceState()));
+    const text = backupToJson(
+      createBackup([], '0.1.0', new Date('2026-01-05T08:00:00Z'), undefined, currentDeviceState()),
+    );
     const read = parseBackup(text);
     expect(read.ok).toBe(true);
     expect(read.ok && read.value.device).toMatchObject({

@@ -2,47 +2,28 @@
 import { useEffect, useRef } from 'preact/hooks';
 import { NO_VALUE } from './format';
 
-/** The header's height: the answer sticks just below it (ui.css `.answer { top }`). */
-const HEADER_PX = 60;
 /** Room the bottom navigation takes. */
 const NAV_PX = 72;
 
 /**
- * Keeps the field being edited clear of the sticky answer: the page's scroll padding is the space
- * the header and answer cover (so the browser scrolls a focused field below them), and a field that
- * gets the focus under either, or under the bottom navigation, is scrolled into the clear.
+ * Keeps the field being edited clear of the sticky answer: a field that gets the focus under the
+ * answer (or under the bottom navigation) is scrolled to the middle of what is left in view.
  */
 function useFieldsClearOf(answerRef: { current: HTMLElement | null }) {
   useEffect(() => {
-    const answer = answerRef.current;
-    if (!answer || typeof ResizeObserver === 'undefined' || !('adoptedStyleSheets' in document)) return;
-    const covered = () =>
-      getComputedStyle(answer).position === 'sticky' ? HEADER_PX + answer.offsetHeight + 8 : HEADER_PX;
-    // A constructed style sheet, not a style attribute: the markup carries none (CSP and its test).
-    const sheet = new CSSStyleSheet();
-    document.adoptedStyleSheets = [...document.adoptedStyleSheets, sheet];
-    const observer = new ResizeObserver(() => sheet.replaceSync(`:root { --covered-top: ${covered()}px; }`));
-    observer.observe(answer);
     const onFocus = (event: FocusEvent) => {
       const field = event.target;
-      if (!(
-        field instanceof HTMLInputElement ||
-        field instanceof HTMLTextAreaElement ||
-        field instanceof HTMLSelectElement
-      ))
-        return;
+      const answer = answerRef.current;
+      if (!answer || !(field instanceof HTMLElement) || !field.matches('input, textarea, select')) return;
       requestAnimationFrame(() => {
         const box = field.getBoundingClientRect();
-        const bottom = (window.visualViewport?.height ?? window.innerHeight) - NAV_PX;
-        if (box.top < covered() || box.bottom > bottom) field.scrollIntoView({ block: 'center' });
+        const covered = answer.getBoundingClientRect();
+        const under = box.top < covered.bottom && box.bottom > covered.top;
+        if (under || box.bottom > innerHeight - NAV_PX) field.scrollIntoView({ block: 'center' });
       });
     };
     document.addEventListener('focusin', onFocus);
-    return () => {
-      observer.disconnect();
-      document.removeEventListener('focusin', onFocus);
-      document.adoptedStyleSheets = document.adoptedStyleSheets.filter((s) => s !== sheet);
-    };
+    return () => document.removeEventListener('focusin', onFocus);
   }, [answerRef]);
 }
 

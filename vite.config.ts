@@ -15,6 +15,30 @@ export default defineConfig({
     preact(),
     // Each locale in two chunks: the first screen's messages and the rest (src/i18n/localeParts.ts).
     localeChunks(),
+    // uPlot makes an Intl number format and a date format when its module loads: the first Intl
+    // object of a page loads ICU's data, a 100 ms task on a 4× slowed CPU. Our axes format their
+    // own figures (src/app/cycle/chart.ts) and have no time scale, so both are made only if used.
+    {
+      name: 'casefront-uplot-lazy-intl',
+      transform(code: string, id: string) {
+        if (!id.includes('/node_modules/uplot/dist/uPlot.esm.js')) return undefined;
+        const lazy: [string, string][] = [
+          [
+            "const numFormatter = new Intl.NumberFormat(domEnv ? nav.language : 'en-US');",
+            "let madeNumFormatter; const numFormatter = { format: (v) => (madeNumFormatter ??= new Intl.NumberFormat(domEnv ? nav.language : 'en-US')).format(v) };",
+          ],
+          [
+            'const localTz = new Intl.DateTimeFormat().resolvedOptions().timeZone;',
+            'let madeLocalTz; const localTz = () => (madeLocalTz ??= new Intl.DateTimeFormat().resolvedOptions().timeZone);',
+          ],
+          ['else if (tz == localTz)', 'else if (tz == localTz())'],
+        ];
+        return lazy.reduce((text, [eager, later]) => {
+          if (!text.includes(eager)) throw new Error(`uPlot changed (${eager}): see vite.config.ts`);
+          return text.replace(eager, later);
+        }, code);
+      },
+    },
     // The dev server injects CSS as <style> tags; only there may styles be inline. The build keeps 'self'.
     {
       name: 'casefront-dev-inline-styles',

@@ -260,7 +260,11 @@ const marks = new Map<string, string>();
 export function decimalMark(locale: string): string {
   let mark = marks.get(locale);
   if (mark === undefined) {
-    mark = new Intl.NumberFormat(locale).formatToParts(1.5).find((part) => part.type === 'decimal')?.value ?? '.';
+    // The app's own languages without Intl: the first Intl object of a page is a long task (ICU's data).
+    mark =
+      SEPARATORS[locale]?.decimal ??
+      new Intl.NumberFormat(locale).formatToParts(1.5).find((part) => part.type === 'decimal')?.value ??
+      '.';
     marks.set(locale, mark);
   }
   return mark;

@@ -48,24 +48,38 @@ function expectedEcd(temperatureC: number, timeH: number, carbonPotentialPct: nu
 
 const answer = (page: Page) => page.locator('.answer-value').first();
 
+/** The answer once the results have caught up with the typing (they follow a task or two later), or whatever it shows after 2 s. */
+async function answerOnceShown(page: Page, expected: string): Promise<string | null> {
+  await page
+    .waitForFunction((text) => document.querySelector('.answer-value')?.textContent === text, expected, {
+      timeout: 2000,
+    })
+    .catch(() => undefined);
+  return answer(page).textContent();
+}
+
 describe('case depth screen', () => {
   it('computes as you type, accepts a decimal comma, and words an invalid entry beside its field', async () => {
     const { page, recorder, close } = await freshPage();
     await openScreen(page, 'depth');
     assert.equal(await answer(page).textContent(), expectedEcd(925, 6, 0.9));
     await page.fill('#depth-time', '8');
-    assert.equal(await answer(page).textContent(), expectedEcd(925, 8, 0.9));
+    assert.equal(await answerOnceShown(page, expectedEcd(925, 8, 0.9)), expectedEcd(925, 8, 0.9));
     await page.fill('#depth-carbon', '0,85');
-    assert.equal(await answer(page).textContent(), expectedEcd(925, 8, 0.85));
+    assert.equal(await answerOnceShown(page, expectedEcd(925, 8, 0.85)), expectedEcd(925, 8, 0.85));
     await page.fill('#depth-temperature', '9x5');
     const error = page.locator('#depth-temperature-error');
+    await error.waitFor();
     assert.match((await error.textContent()) ?? '', /“9x5” is not a number/);
     assert.equal(await page.getAttribute('#depth-temperature', 'aria-invalid'), 'true');
-    assert.equal(await answer(page).textContent(), '–');
+    assert.equal(await answerOnceShown(page, '–'), '–');
     await page.fill('#depth-temperature', '925');
+    await error.waitFor({ state: 'detached' });
     assert.equal(await error.count(), 0);
     await page.locator('label.segment', { hasText: 'Time' }).first().click();
+    const depthAnswer = await answer(page).textContent();
     await page.fill('#depth-target', '1.2');
+    await page.waitForFunction((shown) => document.querySelector('.answer-value')?.textContent !== shown, depthAnswer);
     assert.match((await answer(page).textContent()) ?? '', /^\d+\s?h( \d+\s?min)?$/u);
     const body = (await page.textContent('main')) ?? '';
     assert.doesNotMatch(body, /NaN|Infinity/);
@@ -99,6 +113,8 @@ describe('cycle editor', () => {
     assert.equal(await steps.count(), 5);
     const before = await answer(page).textContent();
     await page.fill('li.step >> nth=1 >> input[id$="-duration"]', '5');
+    // The results follow the typing a task or two later (ui/Deferred.tsx).
+    await page.waitForFunction((shown) => document.querySelector('.answer-value')?.textContent !== shown, before);
     assert.notEqual(await answer(page).textContent(), before);
     assert.match((await answer(page).textContent()) ?? '', /mm$/);
     await page.waitForSelector('.profile-chart canvas');
@@ -111,6 +127,7 @@ describe('cycle editor', () => {
     assert.equal(await page.locator('table.numbers').nth(1).locator('tbody tr').count(), 11);
     // A duration field takes 1:20 or 80 min besides a number, and says so when the text is neither.
     await page.fill('li.step >> nth=2 >> input[id$="-duration"]', 'zwei');
+    await page.waitForSelector('li.step >> nth=2 >> .field-error');
     assert.match((await page.locator('li.step >> nth=2 >> .field-error').textContent()) ?? '', /“zwei” is not a time/);
     assert.deepEqual(foreignRequests(recorder), []);
     assert.deepEqual(recorder.problems, []);

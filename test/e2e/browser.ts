@@ -78,10 +78,11 @@ export async function cspViolations(page: Page): Promise<string[]> {
   return page.evaluate(() => (window as unknown as { __cspViolations?: string[] }).__cspViolations ?? []);
 }
 
-/** Opens a screen by its route and waits for its heading. */
+/** Opens a screen by its route and waits for its heading and every part drawn after it (ui/Deferred.tsx). */
 export async function openScreen(page: Page, id: string): Promise<void> {
   await page.goto(`${BASE_URL}#/${id}`);
   await page.waitForSelector('main h1');
+  await page.waitForFunction(() => !document.querySelector('[data-deferred]'));
 }
 
 /** Every request stayed on the app's own origin (data: and blob: URLs are local). */

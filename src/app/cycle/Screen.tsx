@@ -40,7 +40,7 @@ import './screen.css';
 export default function CycleScreen() {
   const ctx = useScreenContext();
   const { t, units, show, word } = ctx;
-  // The form is drawn at once (CycleSteps, CyclePart); the results follow in the next task.
+  // A keystroke redraws its own step at once (CycleSteps); the results follow in the next task.
   const outcome = cycleOutcome.value;
   const result = outcome.result;
   const view = useMemo(() => (result ? cycleView(result, t, show, units) : undefined), [result, t, show, units]);
@@ -55,7 +55,9 @@ export default function CycleScreen() {
         note={view?.answerNote}
       />
       <ReplacedNote />
-      <CycleSteps />
+      <Deferred>
+        <CycleSteps />
+      </Deferred>
       <Deferred>
         <CyclePart />
       </Deferred>

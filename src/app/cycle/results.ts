@@ -150,4 +150,5 @@ export const cycleDefaults = computed<CycleDefaults>(() => {
 /** The form as the results show it: one task behind the typing (ui/Deferred.tsx). */
 export const shownCycleForm = deferred(cycleForm);
 
-export const cycleOutcome = computed(() => computeCycle(shownCycleForm.value, cycleDefaults.value));
+/** Worked out in the task after the typing and drawn in the one after that, so the simulation and the drawing never share a task. */
+export const cycleOutcome = deferred(computed(() => computeCycle(shownCycleForm.value, cycleDefaults.value)));

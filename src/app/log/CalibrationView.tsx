@@ -11,6 +11,7 @@ import type { CalibrationFit } from '../../physics';
 import { calibrations, setApplied, storeCalibration } from '../settings/calibration';
 import { model } from '../settings/state';
 import { hrefFor } from '../shell/route';
+import { Deferred } from '../ui/Deferred';
 import { ErrorNote } from '../ui/Notices';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { useScreenContext, type ScreenContext } from '../settings/screenContext';
@@ -139,7 +140,11 @@ function FurnaceCalibrationCard({
           )}
         </div>
       )}
-      {fit.ok && <ResidualsTable fit={fit.value} byId={byId} ctx={ctx} />}
+      {fit.ok && (
+        <Deferred>
+          <ResidualsTable fit={fit.value} byId={byId} ctx={ctx} />
+        </Deferred>
+      )}
     </section>
   );
 }

@@ -11,6 +11,7 @@ import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
 import { Segmented } from '../ui/Segmented';
 import { TextField } from '../ui/TextField';
+import { Deferred } from '../ui/Deferred';
 import { useScreenContext } from './screenContext';
 import { temperatureDifferenceText } from '../ui/fieldText';
 import { UNIT_CHOICES, UNIT_SYSTEMS, type DisplayQuantity, type UnitSystem } from '../ui/units';
@@ -85,134 +86,141 @@ export default function SettingsScreen() {
         ))}
         <p class="note">{t('app.settings.overrideHint')}</p>
       </section>
-      <section class="card" aria-labelledby="settings-model">
-        <h2 id="settings-model">{t('app.settings.calculationHeading')}</h2>
-        <ChoiceField
-          id="settings-model-choice"
-          label={t('app.settings.model')}
-          value={s.model}
-          choices={MODEL_IDS.map((m) => ({ value: m, label: t(`app.models.${m}`) }))}
-          onChange={(v) => patch(settings, { model: v })}
-          hint={modelSpreadHint(t, show)}
-        />
-        {s.model === 'wells-batz-mehl' && <p class="note">{wellsBatzMehlNote(t, show)}</p>}
-        <Segmented
-          name="settings-case-criterion"
-          legend={t('app.settings.caseCriterion')}
-          value={caseCriterion.value}
-          choices={CASE_CRITERION_IDS.map((c) => ({ value: c, label: t(`app.settings.caseCriteria.${c}`) }))}
-          onChange={(v) => patch(settings, { caseCriterion: v })}
-        />
-        <p class="note">{t('app.settings.caseCriterionHint')}</p>
-        <div class="field-grid">
-          <NumberField
-            id="settings-threshold"
-            label={t('app.settings.ecdThreshold')}
-            unitLabel={UNIT_SYMBOLS.pctC}
-            value={s.ecdThreshold}
-            onInput={(v) => patch(settings, { ecdThreshold: v })}
-            error={threshold.ok ? undefined : word(threshold.error)}
-            hint={t('app.settings.ecdThresholdHint')}
+      {/* Lower sections in later tasks, so opening the screen is several short tasks. */}
+      <Deferred>
+        <section class="card" aria-labelledby="settings-model">
+          <h2 id="settings-model">{t('app.settings.calculationHeading')}</h2>
+          <ChoiceField
+            id="settings-model-choice"
+            label={t('app.settings.model')}
+            value={s.model}
+            choices={MODEL_IDS.map((m) => ({ value: m, label: t(`app.models.${m}`) }))}
+            onChange={(v) => patch(settings, { model: v })}
+            hint={modelSpreadHint(t, show)}
           />
-          <NumberField
-            id="settings-margin"
-            label={t('app.settings.totalCaseMargin')}
-            unitLabel={UNIT_SYMBOLS.pctC}
-            value={s.totalCaseMargin}
-            onInput={(v) => patch(settings, { totalCaseMargin: v })}
-            error={marginError}
-            hint={t('app.settings.totalCaseMarginHint')}
+          {s.model === 'wells-batz-mehl' && <p class="note">{wellsBatzMehlNote(t, show)}</p>}
+          <Segmented
+            name="settings-case-criterion"
+            legend={t('app.settings.caseCriterion')}
+            value={caseCriterion.value}
+            choices={CASE_CRITERION_IDS.map((c) => ({ value: c, label: t(`app.settings.caseCriteria.${c}`) }))}
+            onChange={(v) => patch(settings, { caseCriterion: v })}
           />
-          <NumberField
-            id="settings-beta"
-            label={t('app.settings.beta')}
-            unitLabel={UNIT_SYMBOLS.beta7}
-            value={s.beta}
-            onInput={(v) => patch(settings, { beta: v })}
-            error={beta.ok ? undefined : word(beta.error)}
-            hint={t('app.settings.betaHint')}
-          />
-        </div>
-      </section>
-      <section class="card" aria-labelledby="settings-range">
-        <h2 id="settings-range">{t('app.settings.rangeHeading')}</h2>
-        <NumberField
-          id="settings-tolerance"
-          label={t('app.settings.tolerance')}
-          unitLabel={`±${UNIT_SYMBOLS[units.temperature]}`}
-          value={{ text: temperatureDifferenceText(s.temperatureTolerance, units.temperature, locale), unit: '' }}
-          onInput={(v) => patch(settings, { temperatureTolerance: { text: v.text, unit: units.temperature } })}
-          error={tolerance.ok ? undefined : word(tolerance.error)}
-          hint={t('app.settings.toleranceHint')}
-        />
-        <NumberField
-          id="settings-beta-min"
-          label={t('app.settings.betaRangeMin')}
-          unitLabel={UNIT_SYMBOLS.beta7}
-          value={s.betaRangeMin}
-          onInput={(v) => patch(settings, { betaRangeMin: v })}
-          error={betaRangeError('betaRangeMin')}
-        />
-        <NumberField
-          id="settings-beta-max"
-          label={t('app.settings.betaRangeMax')}
-          unitLabel={UNIT_SYMBOLS.beta7}
-          value={s.betaRangeMax}
-          onInput={(v) => patch(settings, { betaRangeMax: v })}
-          error={betaRangeError('betaRangeMax')}
-        />
-        <p class="note">{t('app.settings.betaRangeHint')}</p>
-      </section>
-      <section class="card" aria-labelledby="settings-calibration">
-        <h2 id="settings-calibration">{t('app.settings.calibrationHeading')}</h2>
-        {calibrations.value.length === 0 ? (
-          <p class="note">{t('app.settings.calibrationNone')}</p>
-        ) : (
-          <ul class="settings-calibrations">
-            {calibrations.value.map((c) => (
-              <li key={c.furnace}>
-                {t('app.calibration.furnaceHeading', { furnace: c.furnace })}:{' '}
-                {t('app.calibration.factorValue', speedParams(show, c.factor))} ·{' '}
-                {c.apply ? t('app.settings.calibrationOn') : t('app.settings.calibrationOff')}
-              </li>
-            ))}
-          </ul>
-        )}
-        <a class="button" href={hrefFor('log', 'calibration')}>
-          {t('app.settings.calibrationOpen')}
-        </a>
-      </section>
-      <section class="card" aria-labelledby="settings-shifts">
-        <h2 id="settings-shifts">{t('app.settings.shiftsHeading')}</h2>
-        <div class="field-grid shift-grid">
-          {SHIFT_IDS.map((shift) => (
-            <TextField
-              key={shift}
-              id={`settings-shift-${shift}`}
-              type="time"
-              label={t('app.settings.shiftStart', { shift: t(`jobs.shift.${shift}`) })}
-              value={s.shiftStarts[shift]}
-              onInput={(v) => patch(settings, { shiftStarts: { ...s.shiftStarts, [shift]: v } })}
+          <p class="note">{t('app.settings.caseCriterionHint')}</p>
+          <div class="field-grid">
+            <NumberField
+              id="settings-threshold"
+              label={t('app.settings.ecdThreshold')}
+              unitLabel={UNIT_SYMBOLS.pctC}
+              value={s.ecdThreshold}
+              onInput={(v) => patch(settings, { ecdThreshold: v })}
+              error={threshold.ok ? undefined : word(threshold.error)}
+              hint={t('app.settings.ecdThresholdHint')}
             />
-          ))}
-        </div>
-        {!shiftsValid && (
-          <p class="field-error" role="alert">
-            {t('jobs.errors.shiftConfig.invalid')}
-          </p>
-        )}
-        <p class="note">{t('app.settings.shiftsHint')}</p>
-      </section>
-      <section class="card" aria-labelledby="settings-theme">
-        <h2 id="settings-theme">{t('app.settings.themeHeading')}</h2>
-        <Segmented
-          name="settings-theme"
-          legend={t('app.settings.theme')}
-          value={s.theme}
-          choices={THEMES.map((th) => ({ value: th, label: t(`app.settings.themes.${th}`) }))}
-          onChange={(v) => patch(settings, { theme: v })}
-        />
-      </section>
+            <NumberField
+              id="settings-margin"
+              label={t('app.settings.totalCaseMargin')}
+              unitLabel={UNIT_SYMBOLS.pctC}
+              value={s.totalCaseMargin}
+              onInput={(v) => patch(settings, { totalCaseMargin: v })}
+              error={marginError}
+              hint={t('app.settings.totalCaseMarginHint')}
+            />
+            <NumberField
+              id="settings-beta"
+              label={t('app.settings.beta')}
+              unitLabel={UNIT_SYMBOLS.beta7}
+              value={s.beta}
+              onInput={(v) => patch(settings, { beta: v })}
+              error={beta.ok ? undefined : word(beta.error)}
+              hint={t('app.settings.betaHint')}
+            />
+          </div>
+        </section>
+      </Deferred>
+      <Deferred>
+        <section class="card" aria-labelledby="settings-range">
+          <h2 id="settings-range">{t('app.settings.rangeHeading')}</h2>
+          <NumberField
+            id="settings-tolerance"
+            label={t('app.settings.tolerance')}
+            unitLabel={`±${UNIT_SYMBOLS[units.temperature]}`}
+            value={{ text: temperatureDifferenceText(s.temperatureTolerance, units.temperature, locale), unit: '' }}
+            onInput={(v) => patch(settings, { temperatureTolerance: { text: v.text, unit: units.temperature } })}
+            error={tolerance.ok ? undefined : word(tolerance.error)}
+            hint={t('app.settings.toleranceHint')}
+          />
+          <NumberField
+            id="settings-beta-min"
+            label={t('app.settings.betaRangeMin')}
+            unitLabel={UNIT_SYMBOLS.beta7}
+            value={s.betaRangeMin}
+            onInput={(v) => patch(settings, { betaRangeMin: v })}
+            error={betaRangeError('betaRangeMin')}
+          />
+          <NumberField
+            id="settings-beta-max"
+            label={t('app.settings.betaRangeMax')}
+            unitLabel={UNIT_SYMBOLS.beta7}
+            value={s.betaRangeMax}
+            onInput={(v) => patch(settings, { betaRangeMax: v })}
+            error={betaRangeError('betaRangeMax')}
+          />
+          <p class="note">{t('app.settings.betaRangeHint')}</p>
+        </section>
+      </Deferred>
+      <Deferred>
+        <section class="card" aria-labelledby="settings-calibration">
+          <h2 id="settings-calibration">{t('app.settings.calibrationHeading')}</h2>
+          {calibrations.value.length === 0 ? (
+            <p class="note">{t('app.settings.calibrationNone')}</p>
+          ) : (
+            <ul class="settings-calibrations">
+              {calibrations.value.map((c) => (
+                <li key={c.furnace}>
+                  {t('app.calibration.furnaceHeading', { furnace: c.furnace })}:{' '}
+                  {t('app.calibration.factorValue', speedParams(show, c.factor))} ·{' '}
+                  {c.apply ? t('app.settings.calibrationOn') : t('app.settings.calibrationOff')}
+                </li>
+              ))}
+            </ul>
+          )}
+          <a class="button" href={hrefFor('log', 'calibration')}>
+            {t('app.settings.calibrationOpen')}
+          </a>
+        </section>
+        <section class="card" aria-labelledby="settings-shifts">
+          <h2 id="settings-shifts">{t('app.settings.shiftsHeading')}</h2>
+          <div class="field-grid shift-grid">
+            {SHIFT_IDS.map((shift) => (
+              <TextField
+                key={shift}
+                id={`settings-shift-${shift}`}
+                type="time"
+                label={t('app.settings.shiftStart', { shift: t(`jobs.shift.${shift}`) })}
+                value={s.shiftStarts[shift]}
+                onInput={(v) => patch(settings, { shiftStarts: { ...s.shiftStarts, [shift]: v } })}
+              />
+            ))}
+          </div>
+          {!shiftsValid && (
+            <p class="field-error" role="alert">
+              {t('jobs.errors.shiftConfig.invalid')}
+            </p>
+          )}
+          <p class="note">{t('app.settings.shiftsHint')}</p>
+        </section>
+        <section class="card" aria-labelledby="settings-theme">
+          <h2 id="settings-theme">{t('app.settings.themeHeading')}</h2>
+          <Segmented
+            name="settings-theme"
+            legend={t('app.settings.theme')}
+            value={s.theme}
+            choices={THEMES.map((th) => ({ value: th, label: t(`app.settings.themes.${th}`) }))}
+            onChange={(v) => patch(settings, { theme: v })}
+          />
+        </section>
+      </Deferred>
     </div>
   );
 }

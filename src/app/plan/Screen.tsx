@@ -64,7 +64,7 @@ export default function PlanScreen() {
       simulation: run.value,
       profile: profileChartData(run.value, recipe, t, show, units),
       history: historyChartData(run.value, t, show, units),
-      method: hardnessMethodText(run.value.hardnessBasis, recipe.steel.grade, t, show),
+      hardnessMethod: hardnessMethodText(run.value.hardnessBasis, recipe.steel.grade, t, show),
     };
   }, [result, t, show, units]);
   const openInEditor = () => {
@@ -123,15 +123,7 @@ export default function PlanScreen() {
 
         <ResultsCard id="plan-results" error={word(outcome.general)} view={view}>
           <CycleBand id="plan-band" recipe={result?.plan.recipe} ctx={ctx} />
-          {charts && (
-            <CycleCharts
-              simulation={charts.simulation}
-              profile={charts.profile}
-              history={charts.history}
-              hardnessMethod={charts.method}
-              ctx={ctx}
-            />
-          )}
+          {charts && <CycleCharts {...charts} ctx={ctx} />}
         </ResultsCard>
         <div class="plan-actions">
           <button

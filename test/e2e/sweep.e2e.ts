@@ -13,7 +13,7 @@ import type { Browser, Page } from 'playwright-core';
 import { movedTo, backupText, demoLog, importFile } from './logData';
 import { BASE_URL, closeBrowser, launch, PHONE, phoneContext } from './browser';
 import { sweepPage, type SweepReport } from './sweepCheck';
-import type { Job } from '../../src/jobs/schema';
+import { JOB_STATUSES, type Job } from '../../src/jobs/schema';
 
 let browser: Browser;
 before(async () => {
@@ -82,6 +82,8 @@ function longLog(): Job[] {
           workOrder: `WO-2025-000${i}-REWORK-AFTER-HOLD-BATCH-`.slice(0, 40),
           furnace: 'F1 Mehrzweckkammerofen Halle 3 links',
           notes: `Tür 2 min offen bei 3 h 10 min; Probe nachgemessen. ${'Randhärte geprüft. '.repeat(6)}`,
+          // Every status in the list, so each badge is seen in every theme.
+          status: JOB_STATUSES[i % JOB_STATUSES.length]!,
         }
       : job,
   );

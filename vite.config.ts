@@ -61,7 +61,8 @@ export default defineConfig({
         start_url: '.',
         scope: '.',
         display: 'standalone',
-        orientation: 'portrait',
+        // Phones turn: landscape is allowed, and the header and answer stop sticking when the height is short.
+        orientation: 'any',
         background_color: '#101418',
         theme_color: '#101418',
         icons: [

@@ -2,8 +2,10 @@
  * The full backup: our own plain JSON format,
  * `{ format: "casefront-job-log", version, exportedAt, appVersion, jobs: [...] }`,
  * where `version` is the job record version, and `history`: each job's change ids per field (and
- * the values kept from two devices), so that reading the file back merges field by field. Import
- * checks the whole file first and changes nothing unless every record is valid.
+ * the values kept from two devices), so that reading the file back merges field by field; and
+ * `device`: what this device was set to (settings, depth corrections and their switches, the chosen
+ * furnace), each part checked by the app when a person asks to use it. Import checks the whole file
+ * first and changes nothing unless every record is valid.
  */
 import * as v from 'valibot';
 import { issuesOf } from './issues';
@@ -33,7 +35,12 @@ export const BackupSchema = v.strictObject({
   appVersion: v.pipe(v.string(), v.minLength(1), v.maxLength(40)),
   jobs: v.array(JobSchema),
   history: v.optional(v.record(v.string(), JobHistorySchema)),
+  /** The device's own state, by name; the app checks each part against its own shape before using it. */
+  device: v.optional(v.record(v.pipe(v.string(), v.maxLength(40)), v.unknown())),
 });
+
+/** What a device keeps besides the log: restored only when a person asks for it. */
+export type DeviceState = Record<string, unknown>;
 
 export type Backup = v.InferOutput<typeof BackupSchema>;
 export type JobHistory = v.InferOutput<typeof JobHistorySchema>;
@@ -43,6 +50,7 @@ export function createBackup(
   appVersion: string,
   now: Date = new Date(),
   history?: Record<string, JobHistory>,
+  device?: DeviceState,
 ): Backup {
   return {
     format: BACKUP_FORMAT,
@@ -51,6 +59,7 @@ export function createBackup(
     appVersion,
     jobs: [...jobs].sort(compareNewestFirst).reverse(),
     ...(history ? { history } : {}),
+    ...(device ? { device } : {}),
   };
 }
 

@@ -5,6 +5,7 @@
  * the values kept from two devices that changed the same field (`open`), until a person picks;
  * and who wrote this revision (`changedBy`, checked by the server against its own user).
  */
+import { newJobId } from './ids';
 import { canonicalJson } from './canonical';
 import { JobSchema, type Job } from './schema';
 
@@ -43,7 +44,7 @@ export interface JobDoc {
 }
 
 export function newVersionId(): string {
-  return crypto.randomUUID().replace(/-/gu, '').slice(0, 12);
+  return newJobId().replace(/-/gu, '').slice(0, 12);
 }
 
 export function isJobDoc(doc: unknown): doc is JobDoc & Record<string, unknown> {

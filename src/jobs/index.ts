@@ -15,3 +15,5 @@ export * from './calibration';
 export { JOBS_STORE, LATEST_DB_VERSION } from './migrations';
 export type { Alternative } from './documents';
 export type { LogDatabase, PouchFactory } from './pouch';
+export { storageFailure } from './storageErrors';
+export { newJobId } from './ids';

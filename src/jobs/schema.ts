@@ -57,8 +57,8 @@ export const CalendarDateSchema = v.pipe(
   v.check((s) => sameInstantText(`${s}T00:00:00.000Z`, `${s}T00:00:00.000Z`)),
 );
 
-/** Operator initials: 1–4 letters of any alphabet (Ñ, Ö welcome), nothing else. */
-export const InitialsSchema = v.pipe(v.string(), v.regex(/^\p{L}{1,4}$/u));
+/** Who ran the load: initials, 1–4 letters of any alphabet (Ñ, Ö welcome), or a badge number of up to 8 digits; nothing else. */
+export const InitialsSchema = v.pipe(v.string(), v.regex(/^(?:\p{L}{1,4}|\p{Nd}{1,8})$/u));
 
 const requiredText = (max: number) => v.pipe(v.string(), v.minLength(1), v.maxLength(max));
 

@@ -6,6 +6,7 @@
  * on two devices are merged field by field (`fieldMerge.ts`), never by clock.
  */
 import * as v from 'valibot';
+import { newJobId } from './ids';
 import {
   docOfJob,
   editedDoc,
@@ -233,7 +234,7 @@ export class JobStore {
     const stamp = now.toISOString();
     const job = v.safeParse(JobSchema, {
       ...parsed.output,
-      id: crypto.randomUUID(),
+      id: newJobId(),
       createdAt: stamp,
       updatedAt: stamp,
       shift: parsed.output.shift ?? slot.shift,

@@ -3,7 +3,7 @@
  * and the CSV for spreadsheets. The screens turn the text into a download; nothing here
  * sends anything anywhere.
  */
-import { backupToJson, createBackup, parseBackup } from './backup';
+import { backupToJson, createBackup, parseBackup, type DeviceState } from './backup';
 import { jobsToCsv, type CsvOptions } from './csv';
 import type { ImportReport } from './merge';
 import { succeed, type JobsResult } from './result';
@@ -17,32 +17,38 @@ export interface ExportFile {
   skipped: CorruptRecord[];
 }
 
-/** The whole log as a backup file's text. */
+/** The whole log as a backup file's text, with the device's own state when given. */
 export async function exportBackup(
   store: JobStore,
   appVersion: string,
   now: Date = new Date(),
+  device?: DeviceState,
 ): Promise<JobsResult<ExportFile>> {
   const all = await store.readAll();
   if (!all.ok) return all;
   const history = await store.history();
   if (!history.ok) return history;
-  const text = backupToJson(createBackup(all.value.jobs, appVersion, now, history.value));
+  const text = backupToJson(createBackup(all.value.jobs, appVersion, now, history.value, device));
   return succeed({ text, jobCount: all.value.jobs.length, skipped: all.value.corrupt });
 }
 
-/** Checks the whole file, then merges it into the log field by field (`JobStore.merge`). */
+/**
+ * Checks the whole file, then merges it into the log field by field (`JobStore.merge`). The device
+ * state the file carries comes back beside the report, for the person to apply or not.
+ */
 export async function importBackup(
   store: JobStore,
   text: string,
   options: Omit<ImportOptions, 'history'> = {},
-): Promise<JobsResult<ImportReport>> {
+): Promise<JobsResult<ImportReport & { device?: DeviceState }>> {
   const backup = parseBackup(text);
   if (!backup.ok) return backup;
-  return store.merge(backup.value.jobs, {
+  const merged = await store.merge(backup.value.jobs, {
     ...options,
     ...(backup.value.history ? { history: backup.value.history } : {}),
   });
+  if (!merged.ok || !backup.value.device) return merged;
+  return succeed({ ...merged.value, device: backup.value.device });
 }
 
 /** The whole log, oldest first, as CSV. */

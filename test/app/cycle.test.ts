@@ -5,11 +5,16 @@ import { simulateCycle, type Recipe } from '../../src/physics';
 import { buildRecipe, computeCycle } from '../../src/app/cycle/results';
 import {
   addStep,
+  cycleForm,
   DEFAULT_CYCLE_FORM,
   duplicateStep,
+  keepCycleReplace,
   MAX_STEPS,
   moveStep,
   removeStep,
+  replaceCycleForm,
+  replacedCycle,
+  undoCycleReplace,
   updateStep,
 } from '../../src/app/cycle/state';
 import { field } from '../../src/app/ui/fieldText';
@@ -43,6 +48,28 @@ describe('cycle step list', () => {
     // The editor's cap is the recipe's: as many steps as it offers, physics accepts.
     const short = { ...many, steps: many.steps.map((s) => ({ ...s, duration: field('0.1', 'h') })) };
     expect(computeCycle(short, settings).result?.recipe.steps).toHaveLength(MAX_STEPS);
+  });
+});
+
+describe('a plan put into the editor never loses what was typed there', () => {
+  it('keeps the replaced steps for an undo; keeping the plan lets them go; the same form twice asks nothing', () => {
+    const before = cycleForm.value;
+    const own = updateStep(DEFAULT_CYCLE_FORM, 0, { label: 'my boost' });
+    const planned = removeStep(DEFAULT_CYCLE_FORM, 3);
+    cycleForm.value = own;
+    replaceCycleForm(planned);
+    expect(cycleForm.value).toBe(planned);
+    expect(replacedCycle.value).toEqual({ form: own, active: true });
+    undoCycleReplace();
+    expect(cycleForm.value).toBe(own);
+    expect(replacedCycle.value.active).toBe(false);
+    replaceCycleForm(planned);
+    keepCycleReplace();
+    expect(cycleForm.value).toBe(planned);
+    expect(replacedCycle.value.active).toBe(false);
+    replaceCycleForm({ ...planned });
+    expect(replacedCycle.value.active).toBe(false);
+    cycleForm.value = before;
   });
 });
 
@@ -114,5 +141,12 @@ describe('the cycle screen runs the cycle solver', () => {
     const tooRich = updateStep(DEFAULT_CYCLE_FORM, 0, { carbonPotential: field('1.5') });
     const warnings = computeCycle(tooRich, settings).result?.simulation.warnings ?? [];
     expect(warnings.some((w) => w.code === 'saturation.potentialAboveAcm' && w.stepIndex === 0)).toBe(true);
+  });
+});
+
+describe('chart ticks', () => {
+  it('carry as many decimals as their step needs: 0.5 mm → 1, 0.25 → 2, 1 → 0, 20 HRC → 0', async () => {
+    const { tickDigits } = await import('../../src/app/cycle/chartData');
+    expect([0.5, 0.25, 1, 20, 0.1, 0.05, 0].map(tickDigits)).toEqual([1, 2, 0, 0, 1, 2, 0]);
   });
 });

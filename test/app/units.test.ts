@@ -54,3 +54,12 @@ describe('errors worded in the chosen units', () => {
     );
   });
 });
+
+describe('the conversion list', () => {
+  it('keeps what a figure says: 1.5 s is 1.5 s, not 2 s; 1 h is 3600 s without trailing zeros', async () => {
+    const { formatConverted } = await import('../../src/app/convert/results');
+    expect(formatConverted(1.5, 's', 'en')).toBe('1.5\u202fs');
+    expect(formatConverted(3600, 's', 'de')).toBe('3600\u202fs');
+    expect(formatConverted(0.0254, 'm', 'es')).toBe('0,0254\u202fm');
+  });
+});

@@ -106,7 +106,7 @@ describe('cycle editor', () => {
     assert.equal(await steps.count(), 5);
     await page.click('[aria-label="Duplicate step 1"]');
     assert.equal(await steps.count(), 6);
-    await page.fill('li.step >> nth=0 >> input[id$="-label"]', 'boost');
+    await page.fill('li.step >> nth=0 >> textarea[id$="-label"]', 'boost');
     await page.click('[aria-label="Move step 1 down"]');
     assert.match((await steps.nth(1).locator('h3').textContent()) ?? '', /boost/);
     await page.click('[aria-label="Remove step 6"]');
@@ -122,7 +122,9 @@ describe('cycle editor', () => {
       recorder.requests.some((u) => /\/chart-[\w-]+\.js$/.test(u)),
       'chart chunk loaded on demand',
     );
-    assert.equal(await page.locator('table.numbers tbody tr').count(), 11);
+    // The profile's table (11 depths), then the surface carbon's (11 times).
+    assert.equal(await page.locator('table.numbers').first().locator('tbody tr').count(), 11);
+    assert.equal(await page.locator('table.numbers').nth(1).locator('tbody tr').count(), 11);
     // A duration field takes 1:20 or 80 min besides a number, and says so when the text is neither.
     await page.fill('li.step >> nth=2 >> input[id$="-duration"]', 'zwei');
     await page.waitForSelector('li.step >> nth=2 >> .field-error');
@@ -147,7 +149,7 @@ describe('languages', () => {
     await page.waitForSelector('.answer-value');
     assert.equal(await page.textContent('main h1'), 'Profundidad de capa');
     assert.equal(await answer(page).textContent(), expectedEcd(925, 6, 0.9).replace('.', ','));
-    assert.match((await page.textContent('.bottom-nav')) ?? '', /Ciclo.*Recuperar.*Convertir.*Ajustes/);
+    assert.match((await page.textContent('.bottom-nav')) ?? '', /Ciclo.*Desvío.*Convertir.*Ajustes/);
     await close();
   });
 });

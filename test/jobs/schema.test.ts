@@ -9,9 +9,11 @@ const job: Job = demoJobs({ count: 1, end: new Date('2025-05-01T12:00:00Z'), see
 const ok = (schema: v.GenericSchema, value: unknown) => v.safeParse(schema, value).success;
 
 describe('job record schema (version 2)', () => {
-  it('operator initials: 1–4 letters of any alphabet', () => {
-    for (const good of ['M', 'MK', 'JRAT', 'ÑO', 'ÖZ', 'Ж']) expect(ok(InitialsSchema, good), good).toBe(true);
-    for (const bad of ['', 'ABCDE', 'M1', 'M K', 'M.', '<b>', '😀']) expect(ok(InitialsSchema, bad), bad).toBe(false);
+  it('operator: initials of 1–4 letters of any alphabet, or a badge number of up to 8 digits', () => {
+    for (const good of ['M', 'MK', 'JRAT', 'ÑO', 'ÖZ', 'Ж', '4417', '00731', '12345678'])
+      expect(ok(InitialsSchema, good), good).toBe(true);
+    for (const bad of ['', 'ABCDE', 'M1', 'M K', 'M.', '<b>', '😀', '123456789', '44 17'])
+      expect(ok(InitialsSchema, bad), bad).toBe(false);
   });
 
   it('timestamps are UTC as toISOString writes them, and real moments', () => {

@@ -1,36 +1,14 @@
 /** Unit conversions for the shop floor: temperature, length, time, diffusivity and (approximate) hardness. */
 import { ChoiceField } from '../ui/ChoiceField';
-import { formatQuantity, formatScientific, UNIT_SYMBOLS } from '../ui/format';
+import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { Segmented } from '../ui/Segmented';
 import { useScreenContext } from '../settings/screenContext';
-import { conversionOutcome } from './results';
+import { conversionOutcome, formatConverted } from './results';
 import { CONVERT_QUANTITIES, CONVERT_UNITS, convertForm, quantityOfForm, unitOfForm } from './state';
 import './screen.css';
-
-/** Decimals per unit in the conversion list (more than results elsewhere: this is a reference). */
-const DIGITS: Record<string, number> = {
-  C: 1,
-  F: 1,
-  K: 2,
-  R: 1,
-  mm: 4,
-  um: 1,
-  in: 5,
-  thou: 2,
-  m: 7,
-  h: 4,
-  min: 2,
-  s: 0,
-  HRC: 1,
-  HV: 0,
-};
-
-function formatConverted(value: number, unit: string, locale: string): string {
-  return unit in DIGITS ? formatQuantity(value, unit, locale, DIGITS[unit]) : formatScientific(value, unit, locale, 4);
-}
 
 export default function ConvertScreen() {
   const { t, locale, word } = useScreenContext();

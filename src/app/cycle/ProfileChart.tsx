@@ -1,23 +1,38 @@
-/** Mounts the lazily loaded uPlot chart; the table below it carries the same numbers. */
-import { useEffect, useRef } from 'preact/hooks';
-import type { ProfileChartData } from './chart';
+/**
+ * Mounts a lazily loaded uPlot chart, with a line under it that gives the values where the plot is
+ * tapped (for a screen reader too, politely); the table beside it carries the same numbers.
+ */
+import { useEffect, useRef, useState } from 'preact/hooks';
+import type { ChartData, ChartKind, HistoryChartData, MountedChart, ProfileChartData } from './chart';
 
-type Chart = ReturnType<(typeof import('./chart'))['mountProfileChart']>;
-
-export function ProfileChart({ data, label, theme }: { data: ProfileChartData; label: string; theme: string }) {
+function Chart<K extends ChartKind>({
+  kind,
+  data,
+  label,
+  hint,
+  theme,
+}: {
+  kind: K;
+  data: ChartData<K>;
+  label: string;
+  hint: string;
+  theme: string;
+}) {
   const box = useRef<HTMLDivElement>(null);
-  const chart = useRef<Chart | null>(null);
+  const chart = useRef<MountedChart<K> | null>(null);
+  const [point, setPoint] = useState<number | null>(null);
+  const readout = point === null ? '' : data.readout(point);
   useEffect(() => {
     let cancelled = false;
-    void import('./chart').then(({ mountProfileChart }) => {
+    void import('./chart').then(({ mountChart }) => {
       if (cancelled || !box.current) return;
       if (chart.current) chart.current.update(data, theme);
-      else chart.current = mountProfileChart(box.current, data, theme);
+      else chart.current = mountChart(kind, box.current, data, setPoint, theme);
     });
     return () => {
       cancelled = true;
     };
-  }, [data, theme]);
+  }, [kind, data, theme]);
   useEffect(() => {
     const onResize = () => chart.current?.resize();
     window.addEventListener('resize', onResize);
@@ -27,5 +42,20 @@ export function ProfileChart({ data, label, theme }: { data: ProfileChartData; l
       chart.current = null;
     };
   }, []);
-  return <div class="profile-chart" ref={box} role="img" aria-label={label} />;
+  return (
+    <figure class="chart">
+      <div class={`profile-chart chart-${kind}`} ref={box} role="img" aria-label={label} />
+      <figcaption class="chart-readout" aria-live="polite">
+        {readout || hint}
+      </figcaption>
+    </figure>
+  );
+}
+
+export function ProfileChart(props: { data: ProfileChartData; label: string; hint: string; theme: string }) {
+  return <Chart kind="profile" {...props} />;
+}
+
+export function HistoryChart(props: { data: HistoryChartData; label: string; hint: string; theme: string }) {
+  return <Chart kind="history" {...props} />;
 }

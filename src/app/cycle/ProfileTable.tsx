@@ -3,10 +3,10 @@ import type { ProfilePoint } from '../../physics';
 import type { ScreenContext } from '../settings/screenContext';
 
 /** Every n-th point, so the table stays short on a phone. */
-export function tableRows(profile: readonly ProfilePoint[], maxRows = 11): ProfilePoint[] {
-  if (profile.length <= maxRows) return [...profile];
-  const step = (profile.length - 1) / (maxRows - 1);
-  return Array.from({ length: maxRows }, (_, i) => profile[Math.round(i * step)]!);
+export function tableRows<P>(points: readonly P[], maxRows = 11): P[] {
+  if (points.length <= maxRows) return [...points];
+  const step = (points.length - 1) / (maxRows - 1);
+  return Array.from({ length: maxRows }, (_, i) => points[Math.round(i * step)]!);
 }
 
 export function ProfileTable({ profile, ctx }: { profile: readonly ProfilePoint[]; ctx: ScreenContext }) {

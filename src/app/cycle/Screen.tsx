@@ -2,7 +2,7 @@
 import { useMemo } from 'preact/hooks';
 import { sizePath } from '../fields/shape';
 import { isModelId } from '../../physics';
-import { defaults, model, theme } from '../settings/state';
+import { defaults, model } from '../settings/state';
 import { Answer } from '../ui/Answer';
 import { calibrationWords } from '../fields/calibrationWords';
 import { Deferred } from '../ui/Deferred';
@@ -17,8 +17,7 @@ import { ShapeFields } from '../fields/ShapeFields';
 import { SteelFields } from '../fields/SteelFields';
 import { fieldSetters } from '../ui/setters';
 import { CycleTabs } from './CycleTabs';
-import { ProfileChart } from './ProfileChart';
-import { ProfileTable } from './ProfileTable';
+import { CycleCharts } from './CycleCharts';
 import { LogSaveButton } from '../log/save/LogActions';
 import { cycleLogEntry } from './logEntry';
 import { cycleOutcome } from './results';
@@ -26,9 +25,12 @@ import {
   addStep,
   cycleForm,
   duplicateStep,
+  keepCycleReplace,
   MAX_STEPS,
   moveStep,
   removeStep,
+  replacedCycle,
+  undoCycleReplace,
   updateStep,
   type CycleForm,
   type StepForm,
@@ -53,6 +55,7 @@ export default function CycleScreen() {
         value={result ? show.depth(result.simulation.effectiveCaseDepthMm) : undefined}
         note={answerNote}
       />
+      <ReplacedNote />
       <Deferred>
         <CycleSteps />
       </Deferred>
@@ -66,7 +69,7 @@ export default function CycleScreen() {
   );
 }
 
-/** Rows, likely range, chart, method and table of the newest result, and "save to log". */
+/** Rows, likely range, charts, method and tables of the newest result, and "save to log". */
 function CycleResults() {
   const ctx = useScreenContext();
   const { t, units, show, word } = ctx;
@@ -78,12 +81,38 @@ function CycleResults() {
     <>
       <ResultsCard id="cycle-results" error={word(outcome.general)} view={view}>
         <CycleBand id="cycle-band" recipe={result?.recipe} ctx={ctx} />
-        {view && <ProfileChart data={view.chart} label={t('app.cycle.chartLabel')} theme={theme.value} />}
-        {view && <p class="note">{view.hardnessMethod}</p>}
-        {result && <ProfileTable profile={result.simulation.profile} ctx={ctx} />}
+        {view && result && (
+          <CycleCharts
+            simulation={result.simulation}
+            profile={view.chart}
+            history={view.history}
+            hardnessMethod={view.hardnessMethod}
+            ctx={ctx}
+          />
+        )}
       </ResultsCard>
       <LogSaveButton entry={logEntry} />
     </>
+  );
+}
+
+/** After a plan replaced the steps: the person's own can come back. */
+function ReplacedNote() {
+  const { t } = useScreenContext();
+  const replaced = replacedCycle.value;
+  if (!replaced.active) return null;
+  return (
+    <div class="card replaced-note" role="status">
+      <p>{t('app.cycle.replaced.text', { count: replaced.form.steps.length })}</p>
+      <div class="button-row">
+        <button type="button" class="button" onClick={undoCycleReplace}>
+          {t('app.cycle.replaced.undo')}
+        </button>
+        <button type="button" class="button" onClick={keepCycleReplace}>
+          {t('app.cycle.replaced.keep')}
+        </button>
+      </div>
+    </div>
   );
 }
 

@@ -93,16 +93,15 @@ export function StepCard({
         onInput={(v) => onChange({ label: v })}
         error={err('label')}
       />
-      <div class="field-grid field-grid-3">
-        <NumberField
-          compact
-          id={`${id}-duration`}
-          label={t('app.cycle.duration')}
-          unit={units.time}
-          value={step.duration}
-          onInput={(v) => onChange({ duration: v })}
-          error={err('durationH')}
-        />
+      <NumberField
+        id={`${id}-duration`}
+        label={t('app.cycle.duration')}
+        unit={units.time}
+        value={step.duration}
+        onInput={(v) => onChange({ duration: v })}
+        error={err('durationH')}
+      />
+      <div class="field-grid field-grid-2">
         <NumberField
           compact
           id={`${id}-start`}

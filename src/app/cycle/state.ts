@@ -59,6 +59,34 @@ export const DEFAULT_CYCLE_FORM: CycleForm = {
 
 export const cycleForm = persisted<CycleForm>('form.cycle', DEFAULT_CYCLE_FORM);
 
+/** The steps a plan replaced, kept (across reloads) until the person brings them back or keeps the plan's. */
+export const replacedCycle = persisted<{ form: CycleForm; active: boolean }>('form.cycleReplaced', {
+  form: DEFAULT_CYCLE_FORM,
+  active: false,
+});
+
+const sameForm = (a: CycleForm, b: CycleForm) => JSON.stringify(a) === JSON.stringify(b);
+
+/** Puts `next` into the editor; what was there stays at hand for an undo, unless it was the same. */
+export function replaceCycleForm(next: CycleForm): void {
+  const current = cycleForm.peek();
+  if (!sameForm(current, next)) replacedCycle.value = { form: current, active: true };
+  cycleForm.value = next;
+}
+
+/** Brings back the steps a plan replaced. */
+export function undoCycleReplace(): void {
+  const { form, active } = replacedCycle.peek();
+  if (!active) return;
+  cycleForm.value = form;
+  replacedCycle.value = { form: DEFAULT_CYCLE_FORM, active: false };
+}
+
+/** Keeps the plan's steps; the replaced ones are let go. */
+export function keepCycleReplace(): void {
+  replacedCycle.value = { form: DEFAULT_CYCLE_FORM, active: false };
+}
+
 /** The editor offers as many steps as a recipe may have. */
 export { MAX_STEPS } from '../../physics';
 

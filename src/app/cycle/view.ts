@@ -1,14 +1,14 @@
 /** The cycle screen's worded results and chart data (kept out of the JSX). */
 import type { TFunction } from 'i18next';
-import { convert, findGradeByIdOrName, type IndicativeHardnessBasis } from '../../physics';
+import { findGradeByIdOrName, type IndicativeHardnessBasis } from '../../physics';
 import { ecdLabel } from '../fields/ecdLabel';
 import { calibrationWords } from '../fields/calibrationWords';
-import { UNIT_SYMBOLS } from '../ui/format';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
 import { stepCautions } from '../ui/warningText';
 import type { DisplayUnits } from '../ui/units';
-import type { ProfileChartData } from './chart';
+import type { HistoryChartData, ProfileChartData } from './chart';
+import { historyChartData, profileChartData } from './chartData';
 import type { CycleResult } from './results';
 
 export interface CycleView {
@@ -18,14 +18,10 @@ export interface CycleView {
   rows: ResultRow[];
   cautions: string[];
   chart: ProfileChartData;
+  history: HistoryChartData;
   /** How the indicative hardness curve is drawn, with its anchors. */
   hardnessMethod: string;
 }
-
-const toUnit = (mm: number, unit: string) => {
-  const r = convert(mm, 'mm', unit);
-  return r.ok ? r.value : Number.NaN;
-};
 
 function coreSourceWords(basis: IndicativeHardnessBasis, grade: string | undefined, t: TFunction): string {
   const listed = grade === undefined ? undefined : findGradeByIdOrName(grade);
@@ -78,25 +74,8 @@ export function cycleView(
       { key: 'duration', label: t('app.cycle.cycleTime'), value: show.time(totalH), detail: show.hoursMinutes(totalH) },
     ],
     cautions: stepCautions(simulation.warnings, t, show),
-    chart: {
-      depth: simulation.profile.map((p) => toUnit(p.depthMm, units.depth)),
-      carbonPct: simulation.profile.map((p) => p.carbonPct),
-      hardnessHrc: simulation.profile.map((p) => p.hardnessHrc),
-      thresholdPct: threshold,
-      limitHrc: basis.limitHrc,
-      ecd: toUnit(simulation.effectiveCaseDepthMm, units.depth),
-      formatTick: (value, digits) => show.number(value, digits),
-      labels: {
-        depth: t('app.cycle.chartDepth', { unit: units.depth }),
-        carbon: t('app.cycle.chartCarbon'),
-        hardness: t('app.cycle.chartHardness'),
-        threshold: t('app.cycle.chartThreshold', { threshold: show.carbon(threshold) }),
-        limit: t('app.cycle.chartLimit', { limit: show.hardness(basis.limit) }),
-        ecd: t('app.cycle.chartEcd'),
-        carbonAxis: UNIT_SYMBOLS.pctC!,
-        hardnessAxis: UNIT_SYMBOLS.HRC!,
-      },
-    },
+    chart: profileChartData(simulation, recipe, t, show, units),
+    history: historyChartData(simulation, t, show, units),
     hardnessMethod: hardnessMethodText(basis, recipe.steel.grade, t, show),
   };
 }

@@ -3,6 +3,7 @@
  * the jobs and their residuals, and a switch to apply it to that furnace's predictions (off by
  * default). The figures are kept with the settings, so the calculators never open the log.
  */
+import { PairsTable } from './PairsTable';
 import { useEffect, useMemo } from 'preact/hooks';
 import { DEFAULT_CALIBRATION_JOBS, describeJobsError, type Job, type SkippedJob } from '../../jobs';
 import { errorMessage } from '../../i18n/i18n';
@@ -191,35 +192,23 @@ function ResidualsTable({
   return (
     <details class="disclosure">
       <summary>{t('app.calibration.residualsHeading', { count: fit.residuals.length })}</summary>
-      <div class="table-wrap">
-        <table class="numbers pairs">
-          <caption>{t('app.calibration.residualsCaption')}</caption>
-          <thead>
-            <tr>
-              <th scope="col">{t('app.log.summary.colJob')}</th>
-              <th scope="col">{t('app.log.summary.colMeasured')}</th>
-              <th scope="col">{t('app.log.summary.colPredicted')}</th>
-              <th scope="col">{t('app.log.summary.colDifference')}</th>
-            </tr>
-          </thead>
-          <tbody>
-            {fit.residuals.map((r) => {
-              const job = byId.get(r.id);
-              return (
-                <tr key={r.id}>
-                  <th scope="row">
-                    <a href={hrefFor('log', 'job', r.id)}>{job?.partNumber ?? r.id.slice(0, 8)}</a>
-                    {job?.workOrder && <span class="pair-furnace">{job.workOrder}</span>}
-                  </th>
-                  <td>{show.depth(r.measuredMm)}</td>
-                  <td>{show.depth(r.predictedMm)}</td>
-                  <td>{show.depthChange(-r.residualMm)}</td>
-                </tr>
-              );
-            })}
-          </tbody>
-        </table>
-      </div>
+      <PairsTable
+        caption={t('app.calibration.residualsCaption')}
+        columns={[
+          t('app.log.summary.colMeasured'),
+          t('app.log.summary.colPredicted'),
+          t('app.log.summary.colDifference'),
+        ]}
+        rows={fit.residuals.map((r) => {
+          const job = byId.get(r.id);
+          return {
+            id: r.id,
+            title: job?.partNumber ?? r.id.slice(0, 8),
+            subtitle: job?.workOrder,
+            cells: [show.depth(r.measuredMm), show.depth(r.predictedMm), show.depthChange(-r.residualMm)],
+          };
+        })}
+      />
       <p class="note">{t('app.log.summary.differenceNote')}</p>
     </details>
   );

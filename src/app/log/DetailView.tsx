@@ -202,13 +202,15 @@ function JobEditor({ entry, onDone }: { entry: JobEntry; onDone: (saved: boolean
   const [placed, setPlaced] = useState<PlacedErrors | undefined>(undefined);
   const [stale, setStale] = useState(false);
   const [busy, setBusy] = useState(false);
+  // Only a steel of the calculator's own composition needs naming; a listed grade has its name.
+  const askGradeName = entry.job.steel.gradeId === undefined;
   const setForm = (next: JobForm, from = base) => {
     setFormState(next);
     writeDraft('edit', id, { baseRev: from.rev, base: from.job, form: next });
   };
   const save = async (event: Event) => {
     event.preventDefault();
-    const missing = missingFields(form, true);
+    const missing = missingFields(form, askGradeName);
     if (missing.length > 0) {
       setPlaced(placeMissing(t, missing));
       return;
@@ -244,7 +246,7 @@ function JobEditor({ entry, onDone }: { entry: JobEntry; onDone: (saved: boolean
         form={form}
         onChange={(changes) => setForm({ ...form, ...changes })}
         errors={placed?.fields ?? {}}
-        askGradeName
+        askGradeName={askGradeName}
         withStatus={false}
       />
       <FormActions

@@ -10,6 +10,7 @@ import {
   exportCsv,
   exportFileName,
   importBackup,
+  type DeviceState,
   succeed,
   type ExportFile,
   type JobsResult,
@@ -19,6 +20,7 @@ import { language } from '../../i18n/useT';
 import { ErrorNote } from '../ui/Notices';
 import { Segmented } from '../ui/Segmented';
 import { useScreenContext } from '../settings/screenContext';
+import { applyDeviceState, currentDeviceState } from '../settings/deviceState';
 import { APP_VERSION } from '../version';
 import { jobStore, writeToLog } from './db';
 import { formatMoment } from './dates';
@@ -42,6 +44,8 @@ export function FilesView() {
   const [exported, setExported] = useState<Outcome | undefined>(undefined);
   const [imported, setImported] = useState<Outcome | undefined>(undefined);
   const [busy, setBusy] = useState(false);
+  /** The settings an imported file carries, until they are applied or another file is picked. */
+  const [fileDevice, setFileDevice] = useState<DeviceState | undefined>(undefined);
   const [progress, setProgress] = useState<{ done: number; total: number } | undefined>(undefined);
   const { locale } = useScreenContext();
 
@@ -53,7 +57,7 @@ export function FilesView() {
       ? store
       : kind === 'csv'
         ? await exportCsv(store.value, { decimalMark })
-        : await exportBackup(store.value, APP_VERSION);
+        : await exportBackup(store.value, APP_VERSION, new Date(), currentDeviceState());
     setBusy(false);
     if (!file.ok) {
       setExported({ ok: false, text: describeJobsError(t, file.error) });
@@ -88,6 +92,7 @@ export function FilesView() {
         ? { ok: true, text: t('jobs.importReport', { ...result.value }) }
         : { ok: false, text: describeJobsError(t, result.error) },
     );
+    setFileDevice(result.ok ? result.value.device : undefined);
   };
 
   return (
@@ -99,16 +104,19 @@ export function FilesView() {
         <button type="button" class="button button-primary" disabled={busy} onClick={() => void download('json')}>
           {t('app.log.files.backup')}
         </button>
-        <Segmented
-          name="files-decimal"
-          legend={t('app.log.files.decimalMark')}
-          value={decimalMark}
-          choices={[
-            { value: '.', label: t('app.log.files.point') },
-            { value: ',', label: t('app.log.files.comma') },
-          ]}
-          onChange={(v) => setDecimalMark(v as DecimalMark)}
-        />
+        {/* The two notations shown as they are, whatever the language. */}
+        <div data-literal>
+          <Segmented
+            name="files-decimal"
+            legend={t('app.log.files.decimalMark')}
+            value={decimalMark}
+            choices={[
+              { value: '.', label: t('app.log.files.point') },
+              { value: ',', label: t('app.log.files.comma') },
+            ]}
+            onChange={(v) => setDecimalMark(v as DecimalMark)}
+          />
+        </div>
         <button type="button" class="button" disabled={busy} onClick={() => void download('csv')}>
           {t('app.log.files.csv')}
         </button>
@@ -140,6 +148,22 @@ export function FilesView() {
         <div aria-live="polite">
           {imported && (imported.ok ? <p class="log-saved">{imported.text}</p> : <ErrorNote message={imported.text} />)}
         </div>
+        {fileDevice && (
+          <div class="files-device">
+            <p class="note">{t('app.log.files.deviceOffer')}</p>
+            <button
+              type="button"
+              class="button"
+              onClick={() => {
+                applyDeviceState(fileDevice);
+                setFileDevice(undefined);
+                setImported({ ok: true, text: t('app.log.files.deviceApplied') });
+              }}
+            >
+              {t('app.log.files.deviceApply')}
+            </button>
+          </div>
+        )}
       </section>
       <MigrationNote locale={locale} />
 

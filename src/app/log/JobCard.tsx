@@ -3,10 +3,28 @@ import type { Job } from '../../jobs';
 import { hrefFor } from '../shell/route';
 import type { Show } from '../ui/show';
 import type { TFunction } from 'i18next';
+import { StrokeIcon } from '../ui/Icon';
 import { formatClockTime } from './dates';
 
+/**
+ * A shape for each status beside its colour, so no two statuses look alike in any theme or to a
+ * colour-blind eye: planned an open circle, in furnace a flame, done a tick, on hold a pause, rejected a cross.
+ */
+const STATUS_SHAPES: Record<Job['status'], string> = {
+  planned: 'M12 5.5a6.5 6.5 0 1 0 0 13a6.5 6.5 0 1 0 0-13z',
+  inFurnace: 'M12 3c1 4 5 5.5 5 10a5 5 0 0 1-10 0c0-2.5 1.5-3.5 2.5-5c.5 2 1.5 2.5 2.5 3c.5-2.5 0-5.5 0-8z',
+  done: 'M5 12.5l4.5 4.5L19 7.5',
+  onHold: 'M9 6v12M15 6v12',
+  rejected: 'M6.5 6.5l11 11M17.5 6.5l-11 11',
+};
+
 export function StatusBadge({ status, t }: { status: Job['status']; t: TFunction }) {
-  return <span class={`status-badge status-${status}`}>{t(`jobs.status.${status}`)}</span>;
+  return (
+    <span class={`status-badge status-${status}`} data-status={status}>
+      <StrokeIcon path={STATUS_SHAPES[status]} />
+      {t(`jobs.status.${status}`)}
+    </span>
+  );
 }
 
 export function JobCard({ job, t, show, locale }: { job: Job; t: TFunction; show: Show; locale: string }) {

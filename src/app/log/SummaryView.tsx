@@ -1,6 +1,7 @@
 /** The shift summary for a supervisor: loads, furnaces, open items, and predicted against lab depth. */
 import { describeJobsError, JOB_STATUSES, summarizeShift, type EcdComparison, type Job } from '../../jobs';
 import { NO_VALUE } from '../ui/format';
+import { PairsTable } from './PairsTable';
 import { ErrorNote } from '../ui/Notices';
 import { ResultList } from '../ui/ResultList';
 import { useScreenContext } from '../settings/screenContext';
@@ -108,7 +109,7 @@ export function SummaryView() {
                   : []),
               ]}
             />
-            <PairsTable pairs={summary.ecdPairs} />
+            <ComparedJobs pairs={summary.ecdPairs} />
           </>
         )}
         <p class="note">{t('app.log.summary.differenceNote')}</p>
@@ -120,42 +121,34 @@ export function SummaryView() {
   );
 }
 
-function PairsTable({ pairs }: { pairs: readonly EcdComparison[] }) {
+function ComparedJobs({ pairs }: { pairs: readonly EcdComparison[] }) {
   const { t, show, locale } = useScreenContext();
   return (
-    <div class="table-wrap">
-      <table class="numbers pairs">
-        <caption>{t('app.log.summary.tableCaption')}</caption>
-        <thead>
-          <tr>
-            <th scope="col">{t('app.log.summary.colJob')}</th>
-            <th scope="col">{t('app.log.summary.colPredicted')}</th>
-            <th scope="col">{t('app.log.summary.colMeasured')}</th>
-            <th scope="col">{t('app.log.summary.colDifference')}</th>
-          </tr>
-        </thead>
-        <tbody>
-          {pairs.map((pair) => (
-            <tr key={pair.jobId}>
-              <th scope="row">
-                <a href={hrefFor('log', 'job', pair.jobId)}>{pair.partNumber}</a>
-                <span class="pair-furnace">{pair.furnace}</span>
-              </th>
-              <td>{show.depth(pair.predictedMm)}</td>
-              <td>{show.depth(pair.measuredMm)}</td>
-              <td>
-                {show.depthChange(pair.differenceMm)}
-                <span class="pair-detail">{signedPercent(pair.differencePct, locale)}</span>
-                {pair.withinBand !== undefined && (
-                  <span class={pair.withinBand ? 'pair-detail pair-in' : 'pair-detail pair-out'}>
-                    {pair.withinBand ? t('app.log.compare.inside') : t('app.log.compare.outside')}
-                  </span>
-                )}
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <PairsTable
+      caption={t('app.log.summary.tableCaption')}
+      columns={[
+        t('app.log.summary.colPredicted'),
+        t('app.log.summary.colMeasured'),
+        t('app.log.summary.colDifference'),
+      ]}
+      rows={pairs.map((pair) => ({
+        id: pair.jobId,
+        title: pair.partNumber,
+        subtitle: pair.furnace,
+        cells: [
+          show.depth(pair.predictedMm),
+          show.depth(pair.measuredMm),
+          <>
+            {show.depthChange(pair.differenceMm)}
+            <span class="pair-detail">{signedPercent(pair.differencePct, locale)}</span>
+            {pair.withinBand !== undefined && (
+              <span class={pair.withinBand ? 'pair-detail pair-in' : 'pair-detail pair-out'}>
+                {pair.withinBand ? t('app.log.compare.inside') : t('app.log.compare.outside')}
+              </span>
+            )}
+          </>,
+        ],
+      }))}
+    />
   );
 }

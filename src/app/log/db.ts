@@ -13,6 +13,7 @@ import {
   type JobStore,
   type LogDatabase,
   type PersistOutcome,
+  storageFailure,
 } from '../../jobs';
 import { persisted } from '../ui/persist';
 
@@ -55,7 +56,13 @@ export async function jobStore(): Promise<JobsResult<JobStore>> {
 export async function writeToLog<T>(work: (store: JobStore) => Promise<JobsResult<T>>): Promise<JobsResult<T>> {
   const store = await jobStore();
   if (!store.ok) return store;
-  const result = await work(store.value);
+  let result: JobsResult<T>;
+  try {
+    result = await work(store.value);
+  } catch (error) {
+    // Whatever the browser throws, the form gets a sentence and its button back.
+    return storageFailure(error);
+  }
   if (result.ok) announceChange();
   return result;
 }

@@ -52,7 +52,7 @@ export const TEXT_MAX: Record<JobFormField, number> = {
   workOrder: TEXT_LIMITS.short,
   partNumber: TEXT_LIMITS.short,
   furnace: FURNACE_NAME_MAX,
-  operator: 4,
+  operator: 8,
   status: TEXT_LIMITS.short,
   notes: TEXT_LIMITS.notes,
   gradeName: TEXT_LIMITS.short,

@@ -74,7 +74,7 @@ export function planRows(
   // Predicted with a furnace's depth correction: the record says so.
   if (inputs.diffusivityFactor !== undefined && inputs.diffusivityFactor !== 1) {
     rows.push(
-      row(
+      wordRow(
         'factor',
         t('app.calibration.factor'),
         t('app.calibration.factorValue', speedParams(show, inputs.diffusivityFactor)),

@@ -5,11 +5,14 @@
  */
 import { useMemo } from 'preact/hooks';
 import { sizePath } from '../fields/shape';
-import { isModelId } from '../../physics';
+import { isModelId, simulateCycle } from '../../physics';
+import { historyChartData, profileChartData } from '../cycle/chartData';
+import { CycleCharts } from '../cycle/CycleCharts';
 import { cycleFormOfRecipe } from '../cycle/fromRecipe';
+import { hardnessMethodText } from '../cycle/view';
 import { CycleTabs } from '../cycle/CycleTabs';
 import { cycleLogEntry } from '../cycle/logEntry';
-import { cycleForm } from '../cycle/state';
+import { replaceCycleForm } from '../cycle/state';
 import { LogSaveButton } from '../log/save/LogActions';
 import { defaults, model } from '../settings/state';
 import { hrefFor } from '../shell/route';
@@ -36,7 +39,7 @@ import './screen.css';
 
 export default function PlanScreen() {
   const ctx = useScreenContext();
-  const { t, show, word } = ctx;
+  const { t, show, units, word } = ctx;
   // The form is drawn at once (PlanTargets, PlanSteps, PlanPart); the plan follows from the worker.
   const outcome = planOutcome.value;
   const result = outcome.result;
@@ -52,18 +55,34 @@ export default function PlanScreen() {
         : undefined,
     [result],
   );
+  // The planned cycle run once more here, for its charts (a fraction of a millisecond; the search itself runs in the worker).
+  const charts = useMemo(() => {
+    if (!result) return undefined;
+    const recipe = result.plan.recipe;
+    const run = simulateCycle(recipe);
+    if (!run.ok) return undefined;
+    return {
+      simulation: run.value,
+      profile: profileChartData(run.value, recipe, t, show, units),
+      history: historyChartData(run.value, t, show, units),
+      hardnessMethod: hardnessMethodText(run.value.hardnessBasis, recipe.steel.grade, t, show),
+    };
+  }, [result, t, show, units]);
   const openInEditor = () => {
     if (!result) return;
     const form = planForm.peek();
-    cycleForm.value = cycleFormOfRecipe(result.plan.recipe, {
-      steel: form.steel,
-      model: form.model,
-      threshold: form.threshold,
-      size: form.size,
-      defaultBetaMPerS: defaults.value.betaMPerS,
-      labelOf: (label) =>
-        label === 'boost' || label === 'diffuse' || label === 'hardening' ? t(`app.plan.steps.${label}`) : label,
-    });
+    // What the engineer had in the editor stays at hand: the cycle screen offers to bring it back.
+    replaceCycleForm(
+      cycleFormOfRecipe(result.plan.recipe, {
+        steel: form.steel,
+        model: form.model,
+        threshold: form.threshold,
+        size: form.size,
+        defaultBetaMPerS: defaults.value.betaMPerS,
+        labelOf: (label) =>
+          label === 'boost' || label === 'diffuse' || label === 'hardening' ? t(`app.plan.steps.${label}`) : label,
+      }),
+    );
     location.hash = hrefFor('cycle');
   };
 
@@ -105,6 +124,7 @@ export default function PlanScreen() {
 
         <ResultsCard id="plan-results" error={word(outcome.general)} view={view}>
           <CycleBand id="plan-band" recipe={result?.plan.recipe} ctx={ctx} />
+          {charts && <CycleCharts {...charts} ctx={ctx} />}
         </ResultsCard>
         <div class="plan-actions">
           <button

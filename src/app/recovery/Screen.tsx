@@ -1,7 +1,8 @@
 /** Upset recovery: what the furnace did, converted to time at the set temperature, and the time still needed. */
 import { EUTECTOID_TEMP_C } from '../../physics';
 import { Icon } from '../ui/Icon';
-import { NO_VALUE, UNIT_SYMBOLS } from '../ui/format';
+import { Answer } from '../ui/Answer';
+import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
 import { ErrorNote } from '../ui/Notices';
 import type { FieldText } from '../ui/fieldText';
@@ -49,14 +50,14 @@ export default function RecoveryScreen() {
     <div class="screen recovery">
       <h1 tabIndex={-1}>{t('app.recovery.title')}</h1>
       <p class="note">{t('app.recovery.intro')}</p>
-      <div class="answer" aria-live="polite">
-        <span class="answer-label">
-          {r
+      <Answer
+        label={
+          r
             ? t('app.recovery.answerLabel', { temperature: show.temperature(r.setTemperatureC) })
-            : t('app.common.noResult')}
-        </span>
-        <span class="answer-value">{r ? show.hoursMinutes(r.extraTimeH ?? 0) : NO_VALUE}</span>
-      </div>
+            : t('app.common.noResult')
+        }
+        value={r ? show.hoursMinutes(r.extraTimeH ?? 0) : undefined}
+      />
       <RecoveryInputs />
       <section class="card" aria-labelledby="recovery-results">
         <h2 id="recovery-results">{t('app.common.results')}</h2>

@@ -40,11 +40,13 @@ export function NumberField({
   const asTyped = displayText(value, unit, language.value);
   const shown = typing ? asTyped : localizeTyped(asTyped, language.value);
   const symbol = unitLabel ?? (unit ? (UNIT_SYMBOLS[unit] ?? unit) : '');
+  // A long unit ("×10⁻⁷ m/s") beside the box would leave no room for the value: it goes with the label.
+  const unitInLabel = symbol.length > 5;
   return (
     <div class={compact ? 'field field-compact' : 'field'}>
       <label for={id} class={hideLabel ? 'visually-hidden' : undefined}>
         {label}
-        {symbol && <span class="visually-hidden"> ({symbol})</span>}
+        {symbol && <span class={unitInLabel ? 'field-label-unit' : 'visually-hidden'}> ({symbol})</span>}
       </label>
       <div class={error ? 'field-box field-box-invalid' : 'field-box'}>
         <input
@@ -64,7 +66,7 @@ export function NumberField({
           }}
           onBlur={() => setTyping(false)}
         />
-        {symbol && (
+        {symbol && !unitInLabel && (
           <span class="field-unit" aria-hidden="true">
             {symbol}
           </span>

@@ -12,4 +12,7 @@ export * from './backup';
 export * from './csv';
 export * from './transfer';
 export * from './calibration';
+export * from './labFigures';
+export * from './rerun';
+export * from './predictedProfile';
 export { INDEX, JOBS_STORE, LATEST_DB_VERSION } from './migrations';

@@ -2,6 +2,7 @@
  * The supervisor's view of a shift: how many loads, which furnaces, what is still open,
  * and how each prediction compares with the lab's traverse. Pure functions over jobs.
  */
+import { measuredEcdMm } from './labFigures';
 import { OPEN_STATUSES, type Job, type JobStatus } from './schema';
 
 export interface EcdComparison {
@@ -33,8 +34,8 @@ export interface ShiftSummary {
 /** Prediction against the lab for one job, when both depths are known. */
 export function ecdComparison(job: Job): EcdComparison | undefined {
   const predictedMm = job.prediction?.effectiveCaseDepthMm;
-  const measuredMm = job.lab?.ecdMm;
-  if (predictedMm === undefined || measuredMm === undefined || !(measuredMm > 0)) return undefined;
+  const measuredMm = measuredEcdMm(job);
+  if (predictedMm === undefined || measuredMm === undefined) return undefined;
   const differenceMm = predictedMm - measuredMm;
   const band = job.prediction?.ecdBandMm;
   return {

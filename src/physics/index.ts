@@ -82,11 +82,13 @@ export {
   depthFigures,
   readCaseSpec,
   temperatureForCaseDepth,
+  type CaseSpec,
   timeForCaseDepth,
   type CaseDepthResult,
   type TemperatureResult,
   type TimeResult,
 } from './caseDepth';
+export { closedFormProfile, type ClosedFormProfile } from './closedFormProfile';
 export { equivalentTime, type EquivalentTimeResult } from './equivalentTime';
 export { convertRequest, type ConversionResult } from './conversions';
 export { DEFAULT_BETA_RANGE_M_PER_S, DEFAULT_TEMPERATURE_TOLERANCE_C, type DepthBand, type Range } from './uncertainty';

@@ -31,10 +31,13 @@ import { makeShow } from '../../src/app/ui/show';
 import { APP_VERSION } from '../../src/app/version';
 import { createI18n } from '../../src/i18n/i18n';
 import { JobDraftSchema, JobSchema, OPEN_STATUSES } from '../../src/jobs';
-import { TOTAL_CASE_MARGIN_PCT } from '../../src/physics';
+import { CASE_CRITERIA, TOTAL_CASE_MARGIN_PCT } from '../../src/physics';
 import * as v from 'valibot';
 import { readFileSync } from 'node:fs';
 import { sourceFiles } from '../sourceFiles';
+
+/** The default case criterion: 550 HV, ISO 18203. */
+const ISO = CASE_CRITERIA['iso-18203'];
 
 const settings = {
   model: 'agren' as const,
@@ -213,7 +216,7 @@ describe('job and lab forms', () => {
       coreUnit: 'HV' as const,
       by: ' QL ',
     };
-    const { lab, errors } = readLabForm(form);
+    const { lab, errors } = readLabForm(form, ISO);
     expect(errors).toEqual({});
     expect(lab?.ecdMm).toBeCloseTo(0.8636, 12);
     expect(lab).toMatchObject({
@@ -226,8 +229,8 @@ describe('job and lab forms', () => {
   });
 
   it('an empty lab form removes the result; an unreadable number is an error on its field', () => {
-    expect(readLabForm(labFormOf(undefined)).lab).toBeUndefined();
-    const bad = readLabForm({ ...labFormOf(undefined), surfaceCarbon: field('0.8x') });
+    expect(readLabForm(labFormOf(undefined), ISO).lab).toBeUndefined();
+    const bad = readLabForm({ ...labFormOf(undefined), surfaceCarbon: field('0.8x') }, ISO);
     expect(bad.lab).toBeUndefined();
     expect(bad.errors.surfaceCarbon?.code).toBe('number.invalid');
     expect(labFieldOf('lab.surfaceHardness')).toBe('surfaceHardness');
@@ -241,7 +244,7 @@ describe('job and lab forms', () => {
       measuredAt: '2025-03-06T10:00:00.000Z',
       by: 'QL',
     };
-    expect(readLabForm(labFormOf(lab)).lab).toEqual({ ...lab, measuredAt: '2025-03-06' });
+    expect(readLabForm(labFormOf(lab), ISO).lab).toEqual({ ...lab, measuredAt: '2025-03-06' });
   });
 });
 

@@ -4,6 +4,8 @@
  */
 import uPlot from 'uplot';
 import 'uplot/dist/uPlot.min.css';
+import type { ChartHandle } from '../ui/LazyChart';
+import { cssVar, depthMarker, mountUplot, themedAxis } from '../ui/uplotMount';
 
 export interface ProfileChartData {
   depth: number[];
@@ -26,25 +28,11 @@ export interface ProfileChartData {
   };
 }
 
-const cssVar = (name: string) => getComputedStyle(document.documentElement).getPropertyValue(name).trim() || '#888';
-
 function options(data: ProfileChartData, width: number): uPlot.Options {
-  const text = cssVar('--text');
-  const grid = cssVar('--line');
   const carbon = cssVar('--chart-carbon');
   const hardness = cssVar('--chart-hardness');
   const mark = cssVar('--chart-mark');
-  const axis = (label: string, scale: string, side?: 0 | 1 | 2 | 3): uPlot.Axis => ({
-    scale,
-    label,
-    stroke: text,
-    grid: { stroke: grid, width: 1 },
-    ticks: { stroke: grid },
-    font: '13px system-ui, sans-serif',
-    labelFont: '600 13px system-ui, sans-serif',
-    // eslint-disable-next-line @typescript-eslint/no-unsafe-enum-assignment -- uPlot's Side is an ambient const enum, which isolated modules cannot name; its values are 0–3.
-    ...(side === undefined ? {} : { side }),
-  });
+  const axis = themedAxis;
   return {
     width,
     height: Math.round(Math.min(340, Math.max(240, width * 0.8))),
@@ -64,25 +52,7 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
       { label: data.labels.limit, scale: 'hrc', stroke: hardness, width: 1.5, dash: [2, 3], points: { show: false } },
     ],
     hooks: {
-      draw: [
-        (u) => {
-          const x = u.valToPos(data.ecd, 'x', true);
-          if (!Number.isFinite(x)) return;
-          const ctx = u.ctx;
-          ctx.save();
-          ctx.strokeStyle = mark;
-          ctx.setLineDash([]);
-          ctx.lineWidth = 2 * devicePixelRatio;
-          ctx.beginPath();
-          ctx.moveTo(x, u.bbox.top);
-          ctx.lineTo(x, u.bbox.top + u.bbox.height);
-          ctx.stroke();
-          ctx.fillStyle = mark;
-          ctx.font = `600 ${12 * devicePixelRatio}px system-ui, sans-serif`;
-          ctx.fillText(data.labels.ecd, x + 4 * devicePixelRatio, u.bbox.top + 14 * devicePixelRatio);
-          ctx.restore();
-        },
-      ],
+      draw: [(u) => depthMarker(u, data.ecd, data.labels.ecd, mark)],
     },
   };
 }
@@ -97,21 +67,6 @@ function series(data: ProfileChartData): uPlot.AlignedData {
   ];
 }
 
-/** Draws the chart into `el`; returns a function that redraws with new data or removes it. */
-export function mountProfileChart(el: HTMLElement, data: ProfileChartData) {
-  let current = data;
-  let plot = new uPlot(options(current, el.clientWidth || 320), series(current), el);
-  return {
-    update(next: ProfileChartData) {
-      current = next;
-      plot.destroy();
-      plot = new uPlot(options(current, el.clientWidth || 320), series(current), el);
-    },
-    resize() {
-      plot.setSize({ width: el.clientWidth || 320, height: plot.height });
-    },
-    destroy() {
-      plot.destroy();
-    },
-  };
-}
+/** Draws the chart into `el`; the handle redraws it with new data, resizes or removes it. */
+export const mountProfileChart = (el: HTMLElement, data: ProfileChartData): ChartHandle<ProfileChartData> =>
+  mountUplot(el, data, options, series);

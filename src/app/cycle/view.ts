@@ -27,11 +27,18 @@ const toUnit = (mm: number, unit: string) => {
   return r.ok ? r.value : Number.NaN;
 };
 
-function coreSourceWords(basis: IndicativeHardnessBasis, grade: string | undefined, t: TFunction): string {
+/** Where a given core hardness came from: typed with the steel, or the lab's traverse. */
+export type GivenCore = 'steel' | 'lab';
+
+function coreSourceWords(
+  basis: IndicativeHardnessBasis,
+  grade: string | undefined,
+  t: TFunction,
+  given: GivenCore,
+): string {
   const listed = grade === undefined ? undefined : findGradeByIdOrName(grade);
-  return basis.coreSource === 'grade' && listed
-    ? t('app.cycle.coreSource.grade', { grade: listed.name })
-    : t(basis.coreSource === 'steel' ? 'app.cycle.coreSource.steel' : 'app.cycle.coreSource.default');
+  if (basis.coreSource === 'grade' && listed) return t('app.cycle.coreSource.grade', { grade: listed.name });
+  return t(basis.coreSource === 'steel' ? `app.cycle.coreSource.${given}` : 'app.cycle.coreSource.default');
 }
 
 /** The method of the indicative hardness in words, with the figures it was drawn through. */
@@ -40,10 +47,11 @@ export function hardnessMethodText(
   grade: string | undefined,
   t: TFunction,
   show: Show,
+  given: GivenCore = 'steel',
 ): string {
   return t('app.cycle.hardnessMethod', {
     core: show.hardness({ value: basis.coreHardnessHrc, unit: 'HRC' }),
-    coreSource: coreSourceWords(basis, grade, t),
+    coreSource: coreSourceWords(basis, grade, t, given),
     limit: show.hardness(basis.limit),
     limitHrc: show.hardness({ value: basis.limitHrc, unit: 'HRC' }, 1),
     threshold: show.carbon(basis.thresholdCarbonPct),

@@ -1,6 +1,13 @@
 /** One job: what was logged, its status (changed with one tap), an edit form, the plan and prediction, the lab's result. */
 import { useState } from 'preact/hooks';
-import { describeJobsError, JOB_STATUSES, type Job, type JobStatus } from '../../jobs';
+import {
+  analyseStoredTraverse,
+  describeJobsError,
+  JOB_STATUSES,
+  type Job,
+  type JobStatus,
+  type StoredTraverse,
+} from '../../jobs';
 import { ErrorNote } from '../ui/Notices';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { Segmented } from '../ui/Segmented';
@@ -21,7 +28,8 @@ import {
   type PlacedErrors,
 } from './jobForm';
 import { comparisonRows, labRows, planRows, predictionRows } from './jobRows';
-import { LabEditor } from './LabEditor';
+import { hasLabDraft, LabEditor } from './LabEditor';
+import { TraverseFigures } from './traverse/TraverseFigures';
 import { useJob } from './useLog';
 
 type Mode = 'view' | 'edit' | 'lab';
@@ -60,7 +68,8 @@ export function DetailView({ id }: { id: string }) {
 function JobPage({ job, locale }: { job: Job; locale: string }) {
   const ctx = useScreenContext();
   const { t } = ctx;
-  const [mode, setMode] = useState<Mode>('view');
+  // A lab form left unsaved (a reload, an update) opens again as it was typed.
+  const [mode, setMode] = useState<Mode>(() => (hasLabDraft(job) ? 'lab' : 'view'));
   const [message, setMessage] = useState<string | undefined>(undefined);
   const [error, setError] = useState<string | undefined>(undefined);
   const wording = { t, show: ctx.show, locale };
@@ -151,6 +160,7 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
           ) : (
             <p class="note">{t('app.log.lab.none')}</p>
           )}
+          {job.lab?.traverse && <LabTraverse job={job} traverse={job.lab.traverse} />}
           <button type="button" class="button button-primary" onClick={() => setMode('lab')}>
             {job.lab ? t('app.log.lab.change') : t('app.log.lab.record')}
           </button>
@@ -215,4 +225,11 @@ function JobEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void
       />
     </form>
   );
+}
+
+/** The stored traverse over the prediction (the figures are in the rows above). */
+function LabTraverse({ job, traverse }: { job: Job; traverse: StoredTraverse }) {
+  const analysis = analyseStoredTraverse(traverse);
+  if (!analysis) return null;
+  return <TraverseFigures job={job} points={traverse.points} analysis={analysis} withRows={false} />;
 }

@@ -1,8 +1,16 @@
-/** Recording (or correcting) the lab's result for a job: depth in the user's unit, hardness in HRC or HV. */
+/**
+ * Recording (or correcting) the lab's result for a job: the traverse first (typed point by point or
+ * pasted from the tester), read at the case criterion of the settings; then what the traverse does
+ * not give, typed. What is typed is kept across a reload until it is saved or cancelled.
+ */
 import { useState } from 'preact/hooks';
 import { HARDNESS_UNITS, type HardnessUnit, type Job } from '../../jobs';
+import { CASE_CRITERIA } from '../../physics';
+import { caseCriterion } from '../settings/state';
+import type { FieldText } from '../ui/fieldText';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
+import { persisted } from '../ui/persist';
 import { Segmented } from '../ui/Segmented';
 import { TextField } from '../ui/TextField';
 import { useScreenContext } from '../settings/screenContext';
@@ -10,16 +18,56 @@ import { writeToLog } from './db';
 import { FormActions } from './FormActions';
 import { placeJobsError, type PlacedErrors } from './jobForm';
 import { LAB_FIELDS, labFieldOf, labFormOf, readLabForm, type LabForm } from './labForm';
+import { emptyRow, EMPTY_TRAVERSE_FORM } from './traverse/traverseForm';
+import { TraverseEditor } from './traverse/TraverseEditor';
+import { TraverseFigures } from './traverse/TraverseFigures';
+
+interface LabDraft {
+  jobId: string;
+  form: LabForm;
+}
+
+const EMPTY_DRAFT: LabDraft = {
+  jobId: '',
+  // One row as the template every stored row is checked against (persist.ts).
+  form: {
+    ...labFormOf(undefined, new Date(0)),
+    traverse: { ...EMPTY_TRAVERSE_FORM, rows: [emptyRow({ text: '', unit: '' })] },
+  },
+};
+
+/** The lab form being typed, kept across reloads (one job at a time). */
+const draft = persisted<LabDraft>('log.labDraft', EMPTY_DRAFT);
+
+const keepDraft = (jobId: string, form: LabForm) => {
+  draft.value = { jobId, form };
+};
+const clearDraft = () => {
+  draft.value = EMPTY_DRAFT;
+};
+
+/** Whether a lab form for this job was left unsaved (it is resumed as it was typed). */
+export const hasLabDraft = (job: Job) => draft.value.jobId === job.id;
 
 export function LabEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void }) {
-  const { t, units, word } = useScreenContext();
-  const [form, setForm] = useState<LabForm>(() => labFormOf(job.lab));
+  const { t, units, word, locale } = useScreenContext();
+  const [form, setForm] = useState<LabForm>(() =>
+    hasLabDraft(job) ? draft.value.form : labFormOf(job.lab, new Date(), units.depth, locale),
+  );
   const [placed, setPlaced] = useState<PlacedErrors | undefined>(undefined);
   const [busy, setBusy] = useState(false);
-  const set = (changes: Partial<LabForm>) => setForm({ ...form, ...changes });
-  const read = readLabForm(form);
+  const limit = CASE_CRITERIA[caseCriterion.value];
+  const set = (changes: Partial<LabForm>) => {
+    const next = { ...form, ...changes };
+    setForm(next);
+    keepDraft(job.id, next);
+  };
+  const read = readLabForm(form, limit);
   const fieldError = (name: string) => word(read.errors[name]) ?? placed?.fields[name];
-  const hardnessChoices = HARDNESS_UNITS.map((u) => ({ value: u, label: UNIT_SYMBOLS[u] ?? u }));
+  const finish = (saved: boolean) => {
+    clearDraft();
+    onDone(saved);
+  };
 
   const save = async (event: Event) => {
     event.preventDefault();
@@ -32,56 +80,51 @@ export function LabEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) 
       setPlaced(placeJobsError(t, result.error, labels, labFieldOf));
       return;
     }
-    onDone(true);
+    finish(true);
   };
 
+  const { points, analysis } = read.traverse;
   return (
     <form class="card log-form" aria-labelledby="lab-title" onSubmit={(e) => void save(e)} noValidate>
       <h2 id="lab-title">{t('app.log.lab.title')}</h2>
-      <NumberField
-        id="lab-ecd"
-        label={t('app.log.lab.ecd')}
-        unit={units.depth}
-        value={form.ecd}
-        onInput={(v) => set({ ecd: v })}
-        error={fieldError('ecd')}
-      />
-      <div class="lab-hardness">
+      <TraverseEditor form={form.traverse} onChange={(traverse) => set({ traverse })} outcome={read.traverse} />
+      {points && analysis && <TraverseFigures job={job} points={points} analysis={analysis} withRows />}
+      {read.typed.ecd && (
         <NumberField
+          id="lab-ecd"
+          label={t('app.log.lab.ecd')}
+          unit={units.depth}
+          value={form.ecd}
+          hint={analysis ? t('app.log.lab.ecdByHand') : undefined}
+          onInput={(v) => set({ ecd: v })}
+          error={fieldError('ecd')}
+        />
+      )}
+      {read.typed.surface && (
+        <TypedHardness
           id="lab-surface-hardness"
           label={t('app.log.lab.surfaceHardness')}
-          unitLabel={UNIT_SYMBOLS[form.surfaceUnit]}
-          value={form.surfaceHardness}
-          onInput={(v) => set({ surfaceHardness: v })}
-          error={fieldError('surfaceHardness')}
-        />
-        <Segmented
-          hideLegend
-          name="lab-surface-unit"
           legend={t('app.log.lab.surfaceUnit')}
-          value={form.surfaceUnit}
-          choices={hardnessChoices}
-          onChange={(v) => set({ surfaceUnit: v as HardnessUnit })}
+          value={form.surfaceHardness}
+          unit={form.surfaceUnit}
+          error={fieldError('surfaceHardness')}
+          onValue={(surfaceHardness) => set({ surfaceHardness })}
+          onUnit={(surfaceUnit) => set({ surfaceUnit })}
         />
-      </div>
-      <div class="lab-hardness">
-        <NumberField
+      )}
+      {read.typed.core && (
+        <TypedHardness
           id="lab-core-hardness"
           label={t('app.log.lab.coreHardness')}
-          unitLabel={UNIT_SYMBOLS[form.coreUnit]}
-          value={form.coreHardness}
-          onInput={(v) => set({ coreHardness: v })}
-          error={fieldError('coreHardness')}
-        />
-        <Segmented
-          hideLegend
-          name="lab-core-unit"
           legend={t('app.log.lab.coreUnit')}
-          value={form.coreUnit}
-          choices={hardnessChoices}
-          onChange={(v) => set({ coreUnit: v as HardnessUnit })}
+          value={form.coreHardness}
+          unit={form.coreUnit}
+          hint={analysis ? t('app.log.lab.coreByHand') : undefined}
+          error={fieldError('coreHardness')}
+          onValue={(coreHardness) => set({ coreHardness })}
+          onUnit={(coreUnit) => set({ coreUnit })}
         />
-      </div>
+      )}
       <NumberField
         id="lab-surface-carbon"
         label={t('app.log.lab.surfaceCarbon')}
@@ -110,8 +153,55 @@ export function LabEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) 
         error={placed?.general}
         submitLabel={t('app.log.lab.save')}
         disabled={busy}
-        onCancel={() => onDone(false)}
+        onCancel={() => finish(false)}
       />
     </form>
+  );
+}
+
+const HARDNESS_CHOICES = HARDNESS_UNITS.map((u) => ({ value: u, label: UNIT_SYMBOLS[u] ?? u }));
+
+/** A hardness typed by hand with its unit beside it (the legend for screen readers; the field names the value). */
+function TypedHardness({
+  id,
+  label,
+  legend,
+  value,
+  unit,
+  hint,
+  error,
+  onValue,
+  onUnit,
+}: {
+  id: string;
+  label: string;
+  legend: string;
+  value: FieldText;
+  unit: HardnessUnit;
+  hint?: string | undefined;
+  error: string | undefined;
+  onValue: (value: FieldText) => void;
+  onUnit: (unit: HardnessUnit) => void;
+}) {
+  return (
+    <div class="lab-hardness">
+      <NumberField
+        id={id}
+        label={label}
+        unitLabel={UNIT_SYMBOLS[unit]}
+        value={value}
+        hint={hint}
+        onInput={onValue}
+        error={error}
+      />
+      <Segmented
+        hideLegend
+        name={id.replace('-hardness', '-unit')}
+        legend={legend}
+        value={unit}
+        choices={HARDNESS_CHOICES}
+        onChange={(v) => onUnit(v as HardnessUnit)}
+      />
+    </div>
   );
 }

@@ -2,21 +2,18 @@
  * Furnace calibration from the job log. Each job of one furnace that has a lab ECD and the
  * inputs it was planned with becomes a calibration sample whose prediction re-runs that
  * calculation with D × k: a closed-form request with `diffusivityFactor: k` at the time and
- * temperature it ran, or the recorded cycle with the model's D scaled by k. Physics fits k.
+ * temperature it ran, or the recorded cycle with `diffusivityFactor: k`. Physics fits k.
  * k is relative to one diffusivity model: `model` re-runs every job with it (the app passes the
  * model it calculates with), otherwise each job keeps its own.
  */
 import {
   type CalibrationFit,
   type CalibrationSample,
-  DEFAULT_MODEL,
   depthFigures,
-  DIFFUSIVITY_MODELS,
   type DiffusivityModelId,
   fitDiffusivityFactor,
   type Result,
   runCycle,
-  scaledDiffusivity,
 } from '../physics';
 import { measuredEcdMm } from './labFigures';
 import { jobRun, type SkipReason } from './rerun';
@@ -59,9 +56,8 @@ function predictorOf(job: Job, model: DiffusivityModelId | undefined): Predictor
     return (factor) =>
       depthFigures({ ...run.spec, diffusivityFactor: factor }, run.temperatureC, run.timeH).effectiveCaseDepthMm;
   }
-  const diffusivity = DIFFUSIVITY_MODELS[run.recipe.model ?? DEFAULT_MODEL].diffusivity;
-  return (factor) =>
-    runCycle(run.recipe, 1, { diffusivity: scaledDiffusivity(diffusivity, factor) }).effectiveCaseDepthMm;
+  // k replaces the factor the cycle was planned with.
+  return (factor) => runCycle({ ...run.recipe, diffusivityFactor: factor }).effectiveCaseDepthMm;
 }
 
 /**

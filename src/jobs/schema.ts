@@ -1,5 +1,5 @@
 /**
- * The job record (record version 2): one load on one shift, from the plan to the lab's
+ * The job record (record version 3): one load on one shift, from the plan to the lab's
  * traverse. The valibot schema is the single source: the TypeScript type is derived from it,
  * stored records are checked with it on read, and backup files on import.
  */
@@ -8,17 +8,17 @@ import { MAX_DEPTH_MM, readTraverse } from '../physics';
 import {
   CarbonPctSchema,
   CompositionSchema,
-  finiteNumber,
   JobInputsSchema,
   ModelIdSchema,
   numberBetween,
   positiveNumber,
   textUpTo,
 } from './inputs';
+import { FURNACE_NAME_MAX, NOTES_MAX, SHORT_TEXT_MAX } from './limits';
 import { SHIFT_IDS } from './shift';
 
 /** Version of the record shape; also the IndexedDB version and the backup `version`. */
-export const JOB_RECORD_VERSION = 2;
+export const JOB_RECORD_VERSION = 3;
 
 /** Status ids (English code; the words are under `jobs.status.` in the locales). */
 export const JOB_STATUSES = ['planned', 'inFurnace', 'done', 'onHold', 'rejected'] as const;
@@ -32,7 +32,7 @@ export type HardnessUnit = (typeof HARDNESS_UNITS)[number];
 /** Plausible bounds, to catch slips (a depth typed as hardness), not to judge parts. */
 export const HARDNESS_LIMITS = { HRC: { min: 0, max: 80 }, HV: { min: 1, max: 2000 } } as const;
 
-export const TEXT_LIMITS = { short: 40, notes: 4000 } as const;
+export const TEXT_LIMITS = { short: SHORT_TEXT_MAX, notes: NOTES_MAX } as const;
 
 /**
  * Whether `text` parses to an instant that Date.toISOString writes as `expected` (so 30 February
@@ -99,6 +99,7 @@ export const HardnessSchema = v.pipe(
   ),
 );
 
+const finiteNumber = () => v.pipe(v.number(), v.finite());
 const TraverseHardnessSchema = v.strictObject({ value: finiteNumber(), unit: v.picklist(HARDNESS_UNITS) });
 
 /**
@@ -133,7 +134,7 @@ export const LabResultSchema = v.strictObject({
 /** What a person enters or edits; the store adds id, timestamps and (by default) the shift. */
 const editableEntries = {
   operator: InitialsSchema,
-  furnace: requiredText(TEXT_LIMITS.short),
+  furnace: requiredText(FURNACE_NAME_MAX),
   workOrder: textUpTo(TEXT_LIMITS.short),
   partNumber: requiredText(TEXT_LIMITS.short),
   steel: SteelSchema,

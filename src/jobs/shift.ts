@@ -63,3 +63,14 @@ export function shiftOf(date: Date, config: ShiftConfig = DEFAULT_SHIFT_CONFIG):
   const lastNight = starts[starts.length - 1]!;
   return { shift: lastNight.shift, shiftDate: addDays(localIsoDate(date), -1) };
 }
+
+/** A shift's place in time: its start date, then its start hour within that day. */
+function slotKey(slot: ShiftSlot, config: ShiftConfig): string {
+  const rank = [...SHIFT_IDS].sort((a, b) => minutesOf(config[a]) - minutesOf(config[b])).indexOf(slot.shift);
+  return `${slot.shiftDate}#${String(rank)}`;
+}
+
+/** Whether shift slot `a` started before slot `b`. */
+export function slotBefore(a: ShiftSlot, b: ShiftSlot, config: ShiftConfig = DEFAULT_SHIFT_CONFIG): boolean {
+  return slotKey(a, config) < slotKey(b, config);
+}

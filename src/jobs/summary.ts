@@ -4,6 +4,7 @@
  */
 import { measuredEcdMm } from './labFigures';
 import { OPEN_STATUSES, type Job, type JobStatus } from './schema';
+import { DEFAULT_SHIFT_CONFIG, slotBefore, type ShiftConfig, type ShiftSlot } from './shift';
 
 export interface EcdComparison {
   jobId: string;
@@ -23,8 +24,10 @@ export interface ShiftSummary {
   loads: number;
   furnaces: string[];
   byStatus: Record<JobStatus, number>;
-  /** Jobs still planned, in the furnace or on hold, newest first as given. */
+  /** Jobs still planned, in the furnace or on hold: those carried over from earlier shifts first. */
   openItems: Job[];
+  /** How many of the open items an earlier shift left. */
+  carriedOver: number;
   ecdPairs: EcdComparison[];
   /** Mean of the differences and of their absolute percentages; absent without pairs. */
   meanDifferenceMm?: number;
@@ -52,7 +55,29 @@ export function ecdComparison(job: Job): EcdComparison | undefined {
 
 const mean = (values: readonly number[]) => values.reduce((sum, x) => sum + x, 0) / values.length;
 
-export function summarizeShift(jobs: readonly Job[]): ShiftSummary {
+/** Handover order: what is in a furnace first, then what waits to go in, then what is held; oldest first. */
+const HANDOVER_ORDER: readonly JobStatus[] = ['inFurnace', 'planned', 'onHold'];
+
+/**
+ * The loads an earlier shift left open that the shift `slot` takes over, in handover order. A load
+ * belongs to the shift it was entered in; it stays on every later shift's list until it is done,
+ * released or rejected.
+ */
+export function carriedOverLoads(
+  jobs: readonly Job[],
+  slot: ShiftSlot,
+  config: ShiftConfig = DEFAULT_SHIFT_CONFIG,
+): Job[] {
+  return jobs
+    .filter((job) => OPEN_STATUSES.includes(job.status) && slotBefore(job, slot, config))
+    .sort(
+      (a, b) =>
+        HANDOVER_ORDER.indexOf(a.status) - HANDOVER_ORDER.indexOf(b.status) || a.createdAt.localeCompare(b.createdAt),
+    );
+}
+
+/** The summary of one shift's `jobs`; `carriedOver` (see carriedOverLoads) heads its open items. */
+export function summarizeShift(jobs: readonly Job[], carriedOver: readonly Job[] = []): ShiftSummary {
   const byStatus: Record<JobStatus, number> = { planned: 0, inFurnace: 0, done: 0, onHold: 0, rejected: 0 };
   for (const job of jobs) byStatus[job.status]++;
   const ecdPairs = jobs.map(ecdComparison).filter((pair): pair is EcdComparison => pair !== undefined);
@@ -60,7 +85,8 @@ export function summarizeShift(jobs: readonly Job[]): ShiftSummary {
     loads: jobs.length,
     furnaces: [...new Set(jobs.map((job) => job.furnace))].sort(),
     byStatus,
-    openItems: jobs.filter((job) => OPEN_STATUSES.includes(job.status)),
+    openItems: [...carriedOver, ...jobs.filter((job) => OPEN_STATUSES.includes(job.status))],
+    carriedOver: carriedOver.length,
     ecdPairs,
     ...(ecdPairs.length > 0
       ? {

@@ -5,7 +5,7 @@
  * 10 % down and up in a reference case (test/physics/approximations.test.ts measures them again
  * and fails when they drift).
  */
-import { DEFAULT_HISTORY_CARBON_PCT } from './equivalentTime';
+import { DEFAULT_HISTORY_CARBON_PCT } from './requestTables';
 import { STEEL_GRADES } from './grades';
 import { MAX_AS_QUENCHED_HRC, RETAINED_AUSTENITE_CARBON_PCT } from './hardness';
 import { DEFAULT_CORE_HARDNESS_HRC } from './indicativeHardness';
@@ -127,7 +127,7 @@ export const APPROXIMATIONS: readonly Approximation[] = [
     id: 'historyCarbon',
     basis: 'commonPractice',
     value: { kind: 'number', value: DEFAULT_HISTORY_CARBON_PCT, unit: 'pctC' },
-    usedIn: 'physics/equivalentTime.ts DEFAULT_HISTORY_CARBON_PCT',
+    usedIn: 'physics/requestTables.ts DEFAULT_HISTORY_CARBON_PCT',
     effect: { kind: 'result', result: 'equivalentTime', reference: 'recovery', minusPct: -0.19, plusPct: 0.19 },
   },
   {

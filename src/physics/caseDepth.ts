@@ -16,31 +16,13 @@ import { asQuenchedHardnessHrc } from './hardness';
 import { fail, ok, type Result, type Warning } from './result';
 import { brentRoot } from './rootFinding';
 import { harrisTotalCaseDepthMm } from './rulesOfThumb';
-import {
-  alloyFactor,
-  DEFAULT_ECD_THRESHOLD_PCT,
-  hasAustenite,
-  TOTAL_CASE_MARGIN_PCT,
-  totalCaseThresholdPct,
-  type Composition,
-} from './steel';
-import { depthBand, DEFAULT_TEMPERATURE_TOLERANCE_C, type DepthBand } from './uncertainty';
+import { checkLimit, LIMITS } from './limits';
+import { readFields, readRequest, type ReadOf } from './requestSpec';
+import { DEPTH_REQUEST, TEMPERATURE_REQUEST, TIME_REQUEST } from './requestTables';
+import { alloyFactor, hasAustenite, totalCaseThresholdPct, type Composition } from './steel';
+import { depthBand, type DepthBand } from './uncertainty';
 import { celsiusToKelvin, SECONDS_PER_HOUR } from './units';
-import {
-  asFields,
-  checkCarbonPct,
-  checkDepthMm,
-  checkDiffusivityFactor,
-  checkTemperatureC,
-  checkTemperatureTolerance,
-  checkTotalCaseMargin,
-  checkTimeH,
-  readChecked,
-  readComposition,
-  readModel,
-  readOptionalNumber,
-  type Fields,
-} from './validate';
+import type { Fields } from './validate';
 
 /** Temperatures searched when solving for temperature, °C: all above A1 (727 °C), so the answer always has austenite. */
 export const TEMPERATURE_SEARCH_C = { min: 800, max: 1100 } as const;
@@ -110,69 +92,52 @@ export interface TemperatureResult extends CaseDepthResult {
   modelRangeC?: { min: number; max: number };
 }
 
-/** Reads surface, core, threshold, model and composition, with their cross-checks. */
-export function readCaseSpec(fields: Fields): Result<CaseSpec> {
-  const model = readModel(fields);
-  if (!model.ok) return model;
-  const composition = readComposition(fields);
-  if (!composition.ok) return composition;
-  const factor = composition.value ? alloyFactor(composition.value) : 1;
-  const core = readChecked(fields, 'coreCarbonPct', checkCarbonPct);
-  if (!core.ok) return core;
-  const given = readOptionalNumber(fields, 'surfaceCarbonPct');
-  if (!given.ok) return given;
-  const potential = readOptionalNumber(fields, 'carbonPotentialPct');
-  if (!potential.ok) return potential;
-  if (given.value === undefined && potential.value === undefined) return fail('field.missing', 'surfaceCarbonPct');
-  if (potential.value !== undefined) {
-    const checked = checkCarbonPct(potential.value, 'carbonPotentialPct');
-    if (!checked.ok) return checked;
-  }
-  const surfaceField = given.value === undefined ? 'carbonPotentialPct' : 'surfaceCarbonPct';
-  const surface = checkCarbonPct(given.value ?? potential.value! * factor, surfaceField);
+/** The fields every closed-form request shares, as read from its description (requestTables.ts). */
+type CaseFields = ReadOf<typeof DEPTH_REQUEST>;
+
+/** The cross-checks of the case fields: one carbon source given, the surface above core, the threshold between. */
+function caseSpecOf(f: Omit<CaseFields, 'temperatureC' | 'timeH'>): Result<CaseSpec> {
+  const factor = f.composition ? alloyFactor(f.composition) : 1;
+  const given = f.surfaceCarbonPct;
+  const potential = f.carbonPotentialPct;
+  if (given === undefined && potential === undefined) return fail('field.missing', 'surfaceCarbonPct');
+  const surfaceField = given === undefined ? 'carbonPotentialPct' : 'surfaceCarbonPct';
+  // A potential is read in range; the surface it gives on this steel must be too.
+  const surface = checkLimit(LIMITS.carbon, given ?? potential! * factor, surfaceField);
   if (!surface.ok) return surface;
   // Without a stated potential, the one implied by the surface carbon feeds the soot caution.
-  const potentialPct = potential.value ?? surface.value / factor;
-  if (!(surface.value > core.value)) {
-    return fail('carbon.surfaceNotAboveCore', surfaceField, { surfacePct: surface.value, corePct: core.value });
+  const potentialPct = potential ?? surface.value / factor;
+  const core = f.coreCarbonPct;
+  if (!(surface.value > core)) {
+    return fail('carbon.surfaceNotAboveCore', surfaceField, { surfacePct: surface.value, corePct: core });
   }
-  const threshold = readOptionalNumber(fields, 'thresholdCarbonPct');
-  if (!threshold.ok) return threshold;
-  const thresholdPct = threshold.value ?? DEFAULT_ECD_THRESHOLD_PCT;
-  if (!(thresholdPct > core.value && thresholdPct < surface.value)) {
+  const thresholdPct = f.thresholdCarbonPct;
+  if (!(thresholdPct > core && thresholdPct < surface.value)) {
     return fail('threshold.outsideProfile', 'thresholdCarbonPct', {
       thresholdPct,
-      corePct: core.value,
+      corePct: core,
       surfacePct: surface.value,
     });
   }
-  const factorField = readOptionalNumber(fields, 'diffusivityFactor');
-  if (!factorField.ok) return factorField;
-  const diffusivityFactor = checkDiffusivityFactor(factorField.value ?? 1, 'diffusivityFactor');
-  if (!diffusivityFactor.ok) return diffusivityFactor;
-  const tolerance = readOptionalNumber(fields, 'temperatureToleranceC');
-  if (!tolerance.ok) return tolerance;
-  const toleranceC = checkTemperatureTolerance(
-    tolerance.value ?? DEFAULT_TEMPERATURE_TOLERANCE_C,
-    'temperatureToleranceC',
-  );
-  if (!toleranceC.ok) return toleranceC;
-  const margin = readOptionalNumber(fields, 'totalCaseMarginPct');
-  if (!margin.ok) return margin;
-  const marginPct = checkTotalCaseMargin(margin.value ?? TOTAL_CASE_MARGIN_PCT, 'totalCaseMarginPct');
-  if (!marginPct.ok) return marginPct;
   return ok({
-    totalCaseMarginPct: marginPct.value,
-    diffusivityFactor: diffusivityFactor.value,
-    temperatureToleranceC: toleranceC.value,
+    totalCaseMarginPct: f.totalCaseMarginPct,
+    diffusivityFactor: f.diffusivityFactor,
+    temperatureToleranceC: f.temperatureToleranceC,
     surfaceCarbonPct: surface.value,
     carbonPotentialPct: potentialPct,
-    coreCarbonPct: core.value,
+    coreCarbonPct: core,
     thresholdCarbonPct: thresholdPct,
-    model: model.value,
-    ...(composition.value ? { composition: composition.value } : {}),
+    model: f.model,
+    ...(f.composition ? { composition: f.composition } : {}),
     alloyFactor: factor,
   });
+}
+
+/** Reads surface, core, threshold, model, composition and the furnace fields of a closed-form request, with their cross-checks. */
+export function readCaseSpec(fields: Fields): Result<CaseSpec> {
+  const { temperatureC: _t, timeH: _h, ...caseFields } = DEPTH_REQUEST;
+  const read = readFields(caseFields, fields);
+  return read.ok ? caseSpecOf(read.value as Omit<CaseFields, 'temperatureC' | 'timeH'>) : read;
 }
 
 /** Effective constant D for a spec (model at mean carbon, times the furnace factor), m²/s; 0 without austenite. */
@@ -243,29 +208,22 @@ export function evaluateCaseDepth(spec: CaseSpec, temperatureC: number, timeH: n
   };
 }
 
-type Check = (value: number, field: string) => Result<number>;
-
-/** Reads the two numbers a calculator request turns on, then the case spec (errors in that order). */
-function readCalculatorRequest(
+/** A closed-form request read by its description, then its case spec. */
+function readCalculatorRequest<F extends typeof DEPTH_REQUEST | typeof TIME_REQUEST | typeof TEMPERATURE_REQUEST>(
+  spec: F,
   request: unknown,
-  first: [string, Check],
-  second: [string, Check],
-): Result<[number, number, CaseSpec]> {
-  const fields = asFields(request);
-  if (!fields.ok) return fields;
-  const a = readChecked(fields.value, ...first);
-  if (!a.ok) return a;
-  const b = readChecked(fields.value, ...second);
-  if (!b.ok) return b;
-  const spec = readCaseSpec(fields.value);
-  return spec.ok ? ok([a.value, b.value, spec.value]) : spec;
+): Result<[ReadOf<F>, CaseSpec]> {
+  const read = readRequest(spec, request);
+  if (!read.ok) return read;
+  const caseSpec = caseSpecOf(read.value as unknown as CaseFields);
+  return caseSpec.ok ? ok([read.value, caseSpec.value]) : caseSpec;
 }
 
 /** `depth`: case depths after `timeH` at `temperatureC`. */
 export function caseDepth(request: unknown): Result<CaseDepthResult> {
-  const read = readCalculatorRequest(request, ['temperatureC', checkTemperatureC], ['timeH', checkTimeH]);
+  const read = readCalculatorRequest(DEPTH_REQUEST, request);
   if (!read.ok) return read;
-  const [temperatureC, timeH, spec] = read.value;
+  const [{ temperatureC, timeH }, spec] = read.value;
   return ok(evaluateCaseDepth(spec, temperatureC, timeH));
 }
 
@@ -284,11 +242,11 @@ export function timeForDepthH(spec: CaseSpec, temperatureC: number, depthMm: num
 
 /** `time`: how long at `temperatureC` for an effective case depth of `targetDepthMm`. */
 export function timeForCaseDepth(request: unknown): Result<TimeResult> {
-  const read = readCalculatorRequest(request, ['temperatureC', checkTemperatureC], ['targetDepthMm', checkDepthMm]);
+  const read = readCalculatorRequest(TIME_REQUEST, request);
   if (!read.ok) return read;
-  const [temperatureC, targetDepthMm, spec] = read.value;
+  const [{ temperatureC, targetDepthMm }, spec] = read.value;
   const timeH = timeForDepthH(spec, temperatureC, targetDepthMm);
-  const checkedTime = checkTimeH(timeH, 'targetDepthMm');
+  const checkedTime = checkLimit(LIMITS.time, timeH, 'targetDepthMm');
   if (!checkedTime.ok) return checkedTime;
   const times = MODEL_IDS.map((id) => timeForDepthH(spec, temperatureC, targetDepthMm, id));
   return ok({
@@ -318,9 +276,9 @@ export function temperatureForDepthC(
 
 /** `temperature`: which temperature gives `targetDepthMm` in `timeH`. */
 export function temperatureForCaseDepth(request: unknown): Result<TemperatureResult> {
-  const read = readCalculatorRequest(request, ['timeH', checkTimeH], ['targetDepthMm', checkDepthMm]);
+  const read = readCalculatorRequest(TEMPERATURE_REQUEST, request);
   if (!read.ok) return read;
-  const [timeH, targetDepthMm, spec] = read.value;
+  const [{ timeH, targetDepthMm }, spec] = read.value;
   const temperature = temperatureForDepthC(spec, timeH, targetDepthMm);
   if (!temperature.ok) return temperature;
   const temps = MODEL_IDS.map((id) => temperatureForDepthC(spec, timeH, targetDepthMm, id))

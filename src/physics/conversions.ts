@@ -5,7 +5,8 @@
 import { CONVERTIBLE_RANGE, HARDNESS_UNITS, hardnessIn, isHardnessUnit, type HardnessUnit } from './hardness';
 import { fail, ok, type Result } from './result';
 import { convert, quantityOf, UNITS } from './units';
-import { asFields, readNumber, shownValue } from './validate';
+import { readRequest } from './requestSpec';
+import { CONVERT_REQUEST } from './requestTables';
 
 export interface ConversionResult {
   quantity: string;
@@ -26,25 +27,20 @@ function convertHardness(value: number, from: HardnessUnit, to: HardnessUnit): R
 
 /** `convert`: request `{value, from, to?}`; without `to`, into every unit of the quantity. */
 export function convertRequest(request: unknown): Result<ConversionResult> {
-  const fields = asFields(request);
-  if (!fields.ok) return fields;
-  const value = readNumber(fields.value, 'value');
-  if (!value.ok) return value;
-  const from = shownValue(fields.value.from ?? '');
+  const read = readRequest(CONVERT_REQUEST, request);
+  if (!read.ok) return read;
+  const { value, from, to } = read.value;
   const isHardness = isHardnessUnit(from);
   const quantity = isHardness ? 'hardness' : quantityOf(from);
   if (!quantity) return fail('unit.unknown', 'from', { unit: from });
   const allUnits: readonly string[] = isHardness ? HARDNESS_UNITS : UNITS[quantity as keyof typeof UNITS];
-  const to = fields.value.to;
-  if (to !== undefined && !allUnits.includes(shownValue(to)))
-    return fail('unit.unknown', 'to', { unit: shownValue(to) });
-  const targets = to === undefined ? allUnits : [shownValue(to)];
+  if (to !== undefined && !allUnits.includes(to)) return fail('unit.unknown', 'to', { unit: to });
+  const targets = to === undefined ? allUnits : [to];
   const values: Record<string, number> = {};
   for (const unit of targets) {
-    const out =
-      isHardness && isHardnessUnit(unit) ? convertHardness(value.value, from, unit) : convert(value.value, from, unit);
+    const out = isHardness && isHardnessUnit(unit) ? convertHardness(value, from, unit) : convert(value, from, unit);
     if (!out.ok) return out;
     values[unit] = out.value;
   }
-  return ok({ quantity, value: value.value, from, values, approximate: isHardness });
+  return ok({ quantity, value, from, values, approximate: isHardness });
 }

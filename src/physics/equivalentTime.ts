@@ -8,21 +8,10 @@ import { DIFFUSIVITY_MODELS, type DiffusivityModelId } from './diffusivity';
 import { fail, ok, type Result } from './result';
 import { austeniteSpan } from './steel';
 import { celsiusToKelvin } from './units';
-import {
-  asFields,
-  checkCarbonPct,
-  checkTemperatureC,
-  checkTimeH,
-  readChecked,
-  readModel,
-  readNumber,
-  readOptionalNumber,
-} from './validate';
+import { readRequest } from './requestSpec';
+import { EQUIVALENT_TIME_REQUEST } from './requestTables';
 
-/** Carbon at which D is evaluated when the request gives none: mid-case (common practice), wt%. */
-export const DEFAULT_HISTORY_CARBON_PCT = 0.5;
-/** Hottest reading accepted in a history, °C. */
-export const MAX_HISTORY_TEMP_C = 1150;
+export { DEFAULT_HISTORY_CARBON_PCT } from './requestTables';
 /** Simpson intervals per linear piece of the history (D varies smoothly within a piece). */
 const SIMPSON_INTERVALS = 64;
 
@@ -90,31 +79,15 @@ export function equivalentTimeH(
   return total;
 }
 
-function readHistory(raw: unknown): Result<HistoryPoint[]> {
-  if (!Array.isArray(raw) || raw.length < 2) return fail('history.tooShort', 'history', { min: 2 });
-  const points: HistoryPoint[] = [];
-  for (const [index, entry] of raw.entries()) {
-    const fields = asFields(entry);
-    if (!fields.ok) return fail('request.notObject', `history.${index}`);
-    const timeH = readNumber(fields.value, 'timeH');
-    if (!timeH.ok) return fail(timeH.error.code, `history.${index}.timeH`, timeH.error.params);
-    const tempC = readNumber(fields.value, 'temperatureC');
-    if (!tempC.ok) return fail(tempC.error.code, `history.${index}.temperatureC`, tempC.error.params);
-    const previous = points[points.length - 1];
-    if (timeH.value < 0 || (previous && timeH.value < previous.timeH)) {
-      return fail('history.notIncreasing', `history.${index}.timeH`, { index, value: timeH.value });
-    }
-    if (!(tempC.value >= 0 && tempC.value <= MAX_HISTORY_TEMP_C)) {
-      return fail('history.temperatureTooHigh', `history.${index}.temperatureC`, {
-        index,
-        value: tempC.value,
-        max: MAX_HISTORY_TEMP_C,
-      });
-    }
-    points.push({ timeH: timeH.value, temperatureC: tempC.value });
+/** The readings in time order (the reader checks each one's range). */
+function checkHistory(points: readonly HistoryPoint[]): Result<HistoryPoint[]> {
+  for (let index = 1; index < points.length; index++) {
+    const value = points[index]!.timeH;
+    if (value < points[index - 1]!.timeH)
+      return fail('history.notIncreasing', `history.${index}.timeH`, { index, value });
   }
   const elapsed = points[points.length - 1]!.timeH - points[0]!.timeH;
-  return elapsed > 0 ? ok(points) : fail('time.notPositive', 'history', { value: elapsed });
+  return elapsed > 0 ? ok([...points]) : fail('time.notPositive', 'history', { value: elapsed });
 }
 
 /**
@@ -122,36 +95,21 @@ function readHistory(raw: unknown): Result<HistoryPoint[]> {
  * requiredTimeH?, model?, carbonPct?}`; the history is piecewise linear between points.
  */
 export function equivalentTime(request: unknown): Result<EquivalentTimeResult> {
-  const fields = asFields(request);
-  if (!fields.ok) return fields;
-  const history = readHistory(fields.value.history);
+  const read = readRequest(EQUIVALENT_TIME_REQUEST, request);
+  if (!read.ok) return read;
+  const history = checkHistory(read.value.history);
   if (!history.ok) return history;
-  const setTemp = readChecked(fields.value, 'setTemperatureC', checkTemperatureC);
-  if (!setTemp.ok) return setTemp;
-  const model = readModel(fields.value);
-  if (!model.ok) return model;
-  const carbon = readOptionalNumber(fields.value, 'carbonPct');
-  if (!carbon.ok) return carbon;
-  const carbonPct = checkCarbonPct(carbon.value ?? DEFAULT_HISTORY_CARBON_PCT, 'carbonPct');
-  if (!carbonPct.ok) return carbonPct;
-  const required = readOptionalNumber(fields.value, 'requiredTimeH');
-  if (!required.ok) return required;
-  if (required.value !== undefined) {
-    const checked = checkTimeH(required.value, 'requiredTimeH');
-    if (!checked.ok) return checked;
-  }
+  const { setTemperatureC, model, carbonPct, requiredTimeH } = read.value;
   const points = history.value;
   const elapsedH = points[points.length - 1]!.timeH - points[0]!.timeH;
-  const eqH = equivalentTimeH(points, setTemp.value, model.value, carbonPct.value);
+  const eqH = equivalentTimeH(points, setTemperatureC, model, carbonPct);
   return ok({
-    setTemperatureC: setTemp.value,
-    model: model.value,
-    carbonPct: carbonPct.value,
+    setTemperatureC,
+    model,
+    carbonPct,
     elapsedH,
     equivalentTimeH: eqH,
     lostTimeH: elapsedH - eqH,
-    ...(required.value === undefined
-      ? {}
-      : { requiredTimeH: required.value, extraTimeH: Math.max(0, required.value - eqH) }),
+    ...(requiredTimeH === undefined ? {} : { requiredTimeH, extraTimeH: Math.max(0, requiredTimeH - eqH) }),
   });
 }

@@ -27,6 +27,7 @@ export const ERROR_CODES = [
   'depth.tooDeep',
   'model.unknown',
   'composition.outOfRange',
+  'composition.notObject',
   'composition.unknownElement',
   'beta.notPositive',
   'diffusivityFactor.outOfRange',
@@ -67,6 +68,7 @@ export const ERROR_CODES = [
   'range.minAboveMax',
   'carbon.boostNotAboveDiffuse',
   'time.limitTooShort',
+  'text.tooLong',
 ] as const;
 
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -3,27 +3,17 @@
  * Every failure is a typed error naming the field; nothing here throws.
  */
 import { DEFAULT_MODEL, isModelId, type DiffusivityModelId } from './diffusivity';
-import { fail, ok, type ErrorCode, type Result } from './result';
-import {
-  ALLOY_ELEMENT_MAX_PCT,
-  ALLOY_ELEMENTS,
-  EUTECTOID_TEMP_C,
-  hasAustenite,
-  MAX_CARBON_PCT,
-  type Composition,
-} from './steel';
+import { fail, ok, type Result } from './result';
+import { checkLimit, LIMITS } from './limits';
+import { ALLOY_ELEMENTS, type Composition } from './steel';
 import { parseNumber } from './units';
 
-/**
- * Carburizing temperatures accepted as input, °C: above A1 (`min` itself excluded: at or below
- * it there is no austenite, and the answer is the plain `temperature.noAustenite`, not a range
- * error) and up to `max` (beyond the models).
- */
-export const TEMPERATURE_LIMITS_C = { min: EUTECTOID_TEMP_C, max: 1150 } as const;
-/** Longest cycle accepted, h (a very long pit-furnace cycle is well under this). */
-export const MAX_TIME_H = 1000;
+/** Carburizing temperatures accepted, °C: above A1 (`min` itself excluded), up to `max`. */
+export const TEMPERATURE_LIMITS_C = { min: LIMITS.temperature.min, max: LIMITS.temperature.max } as const;
+/** Longest time accepted, h. */
+export const MAX_TIME_H = LIMITS.time.max;
 /** Deepest case accepted, mm. */
-export const MAX_DEPTH_MM = 10;
+export const MAX_DEPTH_MM = LIMITS.depth.max;
 
 export type Fields = Record<string, unknown>;
 
@@ -64,59 +54,30 @@ export function readOptionalNumber(fields: Fields, field: string): Result<number
   return isBlank(fields[field]) ? ok(undefined) : readNumber(fields, field);
 }
 
-function inRange(value: number, field: string, min: number, max: number, code: ErrorCode): Result<number> {
-  return value >= min && value <= max ? ok(value) : fail(code, field, { value, min, max });
-}
+/** A temperature to carburize at: above A1 (else `temperature.noAustenite`), up to the hottest accepted. */
+export const checkTemperatureC = (value: number, field: string) => checkLimit(LIMITS.temperature, value, field);
+export const checkTimeH = (value: number, field: string) => checkLimit(LIMITS.time, value, field);
+export const checkCarbonPct = (value: number, field: string) => checkLimit(LIMITS.carbon, value, field);
+export const checkDepthMm = (value: number, field: string) => checkLimit(LIMITS.depth, value, field);
 
-/** A temperature to carburize at: above A1, at most TEMPERATURE_LIMITS_C.max. */
-export function checkTemperatureC(value: number, field: string): Result<number> {
-  const { min, max } = TEMPERATURE_LIMITS_C;
-  if (value > max) return fail('temperature.outOfRange', field, { value, min, max });
-  return hasAustenite(value) ? ok(value) : fail('temperature.noAustenite', field, { value, limitC: EUTECTOID_TEMP_C });
-}
-
-export function checkTimeH(value: number, field: string): Result<number> {
-  if (!(value > 0)) return fail('time.notPositive', field, { value });
-  return value <= MAX_TIME_H ? ok(value) : fail('time.tooLong', field, { value, max: MAX_TIME_H });
-}
-
-export function checkCarbonPct(value: number, field: string): Result<number> {
-  if (value < 0) return fail('carbon.negative', field, { value });
-  return value <= MAX_CARBON_PCT ? ok(value) : fail('carbon.aboveMax', field, { value, max: MAX_CARBON_PCT });
-}
-
-export function checkDepthMm(value: number, field: string): Result<number> {
-  if (!(value > 0)) return fail('depth.notPositive', field, { value });
-  return value <= MAX_DEPTH_MM ? ok(value) : fail('depth.tooDeep', field, { value, max: MAX_DEPTH_MM });
-}
-
-/** Furnace calibration factor on D; beyond these a fit means a wrong record or model, not a furnace. */
-export const DIFFUSIVITY_FACTOR_LIMITS = { min: 0.1, max: 10 } as const;
-
-export function checkDiffusivityFactor(value: number, field: string): Result<number> {
-  const { min, max } = DIFFUSIVITY_FACTOR_LIMITS;
-  return inRange(value, field, min, max, 'diffusivityFactor.outOfRange');
-}
+/** Furnace calibration factor on D. */
+export const DIFFUSIVITY_FACTOR_LIMITS = {
+  min: LIMITS.diffusivityFactor.min,
+  max: LIMITS.diffusivityFactor.max,
+} as const;
+export const checkDiffusivityFactor = (value: number, field: string) =>
+  checkLimit(LIMITS.diffusivityFactor, value, field);
 
 /** Largest total-case margin above core carbon accepted, %C. */
-export const MAX_TOTAL_CASE_MARGIN_PCT = 1;
-
-export function checkTotalCaseMargin(value: number, field: string): Result<number> {
-  return value > 0 && value <= MAX_TOTAL_CASE_MARGIN_PCT
-    ? ok(value)
-    : fail('totalCaseMargin.outOfRange', field, { value, max: MAX_TOTAL_CASE_MARGIN_PCT });
-}
+export const MAX_TOTAL_CASE_MARGIN_PCT = LIMITS.totalCaseMargin.max;
+export const checkTotalCaseMargin = (value: number, field: string) => checkLimit(LIMITS.totalCaseMargin, value, field);
 
 /** Widest furnace temperature tolerance accepted for the uncertainty band, ±°C. */
-export const MAX_TEMPERATURE_TOLERANCE_C = 50;
+export const MAX_TEMPERATURE_TOLERANCE_C = LIMITS.temperatureTolerance.max;
+export const checkTemperatureTolerance = (value: number, field: string) =>
+  checkLimit(LIMITS.temperatureTolerance, value, field);
 
-export function checkTemperatureTolerance(value: number, field: string): Result<number> {
-  return inRange(value, field, 0, MAX_TEMPERATURE_TOLERANCE_C, 'temperatureTolerance.outOfRange');
-}
-
-export function checkBeta(value: number, field: string): Result<number> {
-  return value > 0 ? ok(value) : fail('beta.notPositive', field, { value });
-}
+export const checkBeta = (value: number, field: string) => checkLimit(LIMITS.beta, value, field);
 
 /** Reads a number field and applies a range check to it. */
 export function readChecked(
@@ -139,18 +100,16 @@ export function readComposition(fields: Fields, field = 'composition'): Result<C
   const raw = fields[field];
   if (raw === undefined || raw === null) return ok(undefined);
   const obj = asFields(raw);
-  if (!obj.ok) return fail('composition.outOfRange', field);
+  if (!obj.ok) return fail('composition.notObject', field);
   const unknown = Object.keys(obj.value).find((k) => !(ALLOY_ELEMENTS as readonly string[]).includes(k));
   if (unknown !== undefined) return fail('composition.unknownElement', `${field}.${unknown}`, { element: unknown });
   const composition: Composition = { Si: 0, Mn: 0, Cr: 0, Ni: 0, Mo: 0 };
   for (const element of ALLOY_ELEMENTS) {
     const value = readOptionalNumber(obj.value, element);
     if (!value.ok) return fail(value.error.code, `${field}.${element}`, value.error.params);
-    const pct = value.value ?? 0;
-    if (pct < 0 || pct > ALLOY_ELEMENT_MAX_PCT) {
-      return fail('composition.outOfRange', `${field}.${element}`, { element, value: pct, max: ALLOY_ELEMENT_MAX_PCT });
-    }
-    composition[element] = pct;
+    const pct = checkLimit(LIMITS.alloyElement, value.value ?? 0, `${field}.${element}`, { element });
+    if (!pct.ok) return pct;
+    composition[element] = pct.value;
   }
   return ok(composition);
 }

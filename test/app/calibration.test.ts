@@ -19,7 +19,7 @@ import {
 } from '../../src/app/settings/calibration';
 import { makeShow } from '../../src/app/ui/show';
 import { createI18n } from '../../src/i18n/i18n';
-import { caseDepth, DIFFUSIVITY_MODELS, runCycle, scaledDiffusivity } from '../../src/physics';
+import { caseDepth, DIFFUSIVITY_MODELS, runCycle } from '../../src/physics';
 import type { Job } from '../../src/jobs/schema';
 import { pinionDraft } from '../jobs/helpers';
 
@@ -139,14 +139,16 @@ describe('the calculators with a calibrated furnace', () => {
     expect(direct.ok && direct.value.uncertaintyMm).toEqual(narrow.figures.uncertaintyMm);
   });
 
-  it('cycle: the simulation runs with the model’s D × k, for the form’s own model', () => {
+  it('cycle: the recipe carries k and the simulation runs with the model’s D × k, for the form’s own model', () => {
     const settings = { model: 'agren' as const, ecdThresholdPct: 0.4, totalCaseMarginPct: 0.05, betaMPerS: 1.5e-7 };
     const out = computeCycle(DEFAULT_CYCLE_FORM, {
       ...settings,
       calibrationFor: (m) => calibrationState([f1], 'F1', m),
     }).result!;
-    const direct = runCycle(out.recipe, 1, {
-      diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS.agren.diffusivity, 1.21),
+    expect(out.recipe.diffusivityFactor).toBe(1.21);
+    const { diffusivityFactor: _k, ...uncalibrated } = out.recipe;
+    const direct = runCycle(uncalibrated, 1, {
+      diffusivity: (tempK, carbonPct) => 1.21 * DIFFUSIVITY_MODELS.agren.diffusivity(tempK, carbonPct),
     });
     expect(out.simulation.effectiveCaseDepthMm).toBeCloseTo(direct.effectiveCaseDepthMm, 12);
     expect(out.calibration.kind).toBe('applied');

@@ -20,7 +20,7 @@ import {
   smallTargets,
   waitUntilOfflineReady,
 } from './browser';
-import { backupText, demoLog, importFile, storedRecords, wipeLog } from './logData';
+import { backupText, demoLog, importFile, movedTo, storedRecords, wipeLog } from './logData';
 
 const { version } = JSON.parse(readFileSync('package.json', 'utf8')) as { version: string };
 
@@ -298,6 +298,35 @@ describe('job log', () => {
     assert.deepEqual(await storedRecords(page), before);
     assert.deepEqual(await cspViolations(page), []);
     assert.deepEqual(foreignRequests(recorder), []);
+    assert.deepEqual(recorder.problems, []);
+    await context.close();
+  });
+
+  it('at 22:40 the loads shift B left in the furnace head shift C’s list and summary', async () => {
+    const { context, recorder } = await phoneContext(browser);
+    const page = await context.newPage();
+    // Shift C (22–06, the default hours) of 3 March has just begun, in the browser's own time.
+    await page.clock.setFixedTime(new Date(2026, 2, 3, 22, 40));
+    await openScreen(page, 'log');
+    const [inB1, inB2, doneB] = demoLog(3, 0).map((job, i) =>
+      movedTo(
+        { ...job, status: i < 2 ? 'inFurnace' : 'done', workOrder: `WO-HAND-${String(i + 1)}` },
+        new Date(2026, 2, 3, 15 + i, 0).getTime(),
+      ),
+    );
+    assert.match(await importFile(page, backupText([inB1!, inB2!, doneB!])), /3/);
+
+    await page.goto(`${BASE_URL}#/log`);
+    const carried = page.locator('section.carried-over .job-card-title');
+    await carried.first().waitFor();
+    assert.deepEqual(await carried.allTextContents(), ['WO-HAND-1', 'WO-HAND-2']);
+    assert.match((await page.textContent('.log-count')) ?? '', /^0 jobs/);
+
+    await page.goto(`${BASE_URL}#/log/summary`);
+    await page.locator('section.carried-over').waitFor();
+    const openTile = page.locator('.tile', { hasText: 'open' }).locator('.tile-value');
+    assert.equal(await openTile.textContent(), '2');
+    assert.doesNotMatch(await mainText(page), /Nothing open/);
     assert.deepEqual(recorder.problems, []);
     await context.close();
   });

@@ -15,7 +15,6 @@ import {
   mulberry32,
   type Recipe,
   runCycle,
-  scaledDiffusivity,
   timeForCaseDepth,
 } from '../../src/physics';
 import { pinionDraft } from './helpers';
@@ -67,8 +66,9 @@ function closedFormEcd(inputs: JobInputs, k: number, model?: DiffusivityModelId)
 }
 
 function cycleEcd(recipe: Recipe, k: number): number {
-  return runCycle(recipe, 1, { diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS.agren.diffusivity, k) })
-    .effectiveCaseDepthMm;
+  return runCycle(recipe, 1, {
+    diffusivity: (tempK, carbonPct) => k * DIFFUSIVITY_MODELS.agren.diffusivity(tempK, carbonPct),
+  }).effectiveCaseDepthMm;
 }
 
 /** Depth jobs at 900–950 °C for 3–10 h on `furnace`, lab = engine with D × kTrue, times (1 + relative scatter). */

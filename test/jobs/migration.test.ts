@@ -190,7 +190,7 @@ describe('job log database: version 1 → 2', () => {
     ).toEqual([V1_FIXTURES[3]!.id]);
     store.close();
     const raw = await openDB(name);
-    expect(raw.version).toBe(2);
+    expect(raw.version).toBe(LATEST_DB_VERSION);
     expect([...raw.transaction(JOBS_STORE).store.indexNames].sort()).toEqual(Object.values(INDEX).sort());
     raw.close();
   });

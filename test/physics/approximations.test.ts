@@ -112,6 +112,8 @@ describe('register of approximate constants', () => {
       'src/physics/closedForm.ts': 'the √(Dt) rule is a method, not a value',
       'src/physics/conversions.ts': 'refers to the HRC ↔ HV table of hardness.ts',
       'src/physics/approximations.ts': 'the register itself',
+      'src/physics/equivalentTime.ts':
+        'the equivalent-time rule is a method; its default carbon is listed under requestTables.ts',
     };
     const marked = sourceFiles('src/physics').filter((file) =>
       /from memory|common practice/iu.test(readFileSync(file, 'utf8')),

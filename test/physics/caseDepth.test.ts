@@ -169,7 +169,7 @@ describe('no austenite, no answer (A1 = 727 °C, Fe–Fe₃C eutectoid)', () => 
   it.each([700, 727, 500])('depth at %s °C is refused in words, not answered', (temperatureC) => {
     expect(caseDepth({ ...base, temperatureC })).toMatchObject({
       ok: false,
-      error: { code: 'temperature.noAustenite', field: 'temperatureC', params: { value: temperatureC, limitC: 727 } },
+      error: { code: 'temperature.noAustenite', field: 'temperatureC', params: { value: temperatureC, min: 727 } },
     });
   });
   it('the temperature solve searches above A1 only, so its answer always has austenite', () => {

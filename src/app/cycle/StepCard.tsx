@@ -1,5 +1,5 @@
 /** One recipe step: name, duration, start and end temperature (a ramp when they differ), carbon potential or none, β. */
-import type { InputError } from '../../physics';
+import { type InputError, TEXT_LENGTH_LIMITS } from '../../physics';
 import { Icon } from '../ui/Icon';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
@@ -89,6 +89,7 @@ export function StepCard({
         label={t('app.cycle.stepName')}
         value={step.label}
         placeholder={t('app.cycle.stepNamePlaceholder')}
+        maxLength={TEXT_LENGTH_LIMITS.label}
         onInput={(v) => onChange({ label: v })}
       />
       <div class="field-grid field-grid-3">

@@ -28,7 +28,9 @@ export interface ProfileChartData {
   };
 }
 
-function options(data: ProfileChartData, width: number): uPlot.Options {
+/** `shown()` is the data drawn now: the ECD mark reads it on every draw, so new data needs no new chart. */
+function options(shown: () => ProfileChartData, width: number): uPlot.Options {
+  const data = shown();
   const carbon = cssVar('--chart-carbon');
   const hardness = cssVar('--chart-hardness');
   const mark = cssVar('--chart-mark');
@@ -52,7 +54,12 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
       { label: data.labels.limit, scale: 'hrc', stroke: hardness, width: 1.5, dash: [2, 3], points: { show: false } },
     ],
     hooks: {
-      draw: [(u) => depthMarker(u, data.ecd, data.labels.ecd, mark)],
+      draw: [
+        (u) => {
+          const { ecd, labels } = shown();
+          depthMarker(u, ecd, labels.ecd, mark);
+        },
+      ],
     },
   };
 }
@@ -68,5 +75,5 @@ function series(data: ProfileChartData): uPlot.AlignedData {
 }
 
 /** Draws the chart into `el`; the handle redraws it with new data, resizes or removes it. */
-export const mountProfileChart = (el: HTMLElement, data: ProfileChartData): ChartHandle<ProfileChartData> =>
-  mountUplot(el, data, options, series);
+export const mountProfileChart = (el: HTMLElement, data: ProfileChartData, look = ''): ChartHandle<ProfileChartData> =>
+  mountUplot(el, data, look, options, series);

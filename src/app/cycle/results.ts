@@ -7,6 +7,7 @@ import {
   isModelId,
   type Recipe,
   type RecipeStep,
+  simulateCycle,
   type SimulationResult,
 } from '../../physics';
 import {
@@ -18,11 +19,11 @@ import {
 } from '../settings/calibration';
 import { BETA_INPUT_SCALE, defaults, model } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
-import { FieldReader, placeError, type Outcome } from '../ui/outcome';
+import { deferred } from '../ui/Deferred';
+import { FieldReader, NO_ERRORS, placeError, type Outcome } from '../ui/outcome';
 import { readShape } from '../fields/shape';
 import { readComposition } from '../fields/steel';
 import { PHYSICS_UNITS } from '../ui/units';
-import { simulate } from './simulate';
 import { cycleForm, type CycleForm } from './state';
 
 export interface CycleDefaults {
@@ -118,16 +119,18 @@ export function buildRecipe(
   });
   const base = readBaseFields(form, settings, read);
   if (read.failed || !base) return { errors: read.errors };
-  return { errors: {}, recipe: { ...base, steps: steps as RecipeStep[] } };
+  return { errors: NO_ERRORS, recipe: { ...base, steps: steps as RecipeStep[] } };
 }
 
 export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<CycleResult> {
   const { recipe, errors } = buildRecipe(form, settings);
   if (!recipe) return { errors };
   const calibration: CalibrationState = settings.calibrationFor?.(recipe.model ?? settings.model) ?? { kind: 'none' };
-  const simulation = simulate(recipe, factorOf(calibration));
+  const factor = factorOf(calibration);
+  const calibrated: Recipe = factor === 1 ? recipe : { ...recipe, diffusivityFactor: factor };
+  const simulation = simulateCycle(calibrated);
   if (!simulation.ok) return placeError(simulation.error, CYCLE_FIELD_MAP, formFields(form));
-  return { errors: {}, result: { recipe, simulation: simulation.value, calibration } };
+  return { errors: NO_ERRORS, result: { recipe: calibrated, simulation: simulation.value, calibration } };
 }
 
 /** The settings a cycle calculation reads, with the chosen furnace's calibration (shared by the planner). */
@@ -144,4 +147,7 @@ export const cycleDefaults = computed<CycleDefaults>(() => {
   };
 });
 
-export const cycleOutcome = computed(() => computeCycle(cycleForm.value, cycleDefaults.value));
+/** The form as the results show it: one task behind the typing (ui/Deferred.tsx). */
+export const shownCycleForm = deferred(cycleForm);
+
+export const cycleOutcome = computed(() => computeCycle(shownCycleForm.value, cycleDefaults.value));

@@ -1,4 +1,5 @@
 /** The cycle editor's form: steps, part shape, steel, model and threshold, persisted as typed. */
+import { MAX_STEPS } from '../../physics';
 import { field, type FieldText } from '../ui/fieldText';
 import { persisted } from '../ui/persist';
 import { defaultSteel, type SteelForm } from '../fields/steel';
@@ -58,7 +59,8 @@ export const DEFAULT_CYCLE_FORM: CycleForm = {
 
 export const cycleForm = persisted<CycleForm>('form.cycle', DEFAULT_CYCLE_FORM);
 
-export const MAX_STEPS = 12;
+/** The editor offers as many steps as a recipe may have. */
+export { MAX_STEPS } from '../../physics';
 
 export function addStep(form: CycleForm): CycleForm {
   if (form.steps.length >= MAX_STEPS) return form;

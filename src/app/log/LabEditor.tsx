@@ -77,7 +77,11 @@ export function LabEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) 
     setBusy(false);
     if (!result.ok) {
       const labels = (f: string) => ((LAB_FIELDS as readonly string[]).includes(f) ? t(`app.log.lab.${f}`) : undefined);
-      setPlaced(placeJobsError(t, result.error, labels, labFieldOf));
+      const placedError = placeJobsError(t, result.error, labels, labFieldOf);
+      // Only the lab result was being written: say that, not that "the job" was lost.
+      setPlaced(
+        result.error.code === 'record.invalid' ? { ...placedError, general: t('app.log.lab.notSaved') } : placedError,
+      );
       return;
     }
     finish(true);

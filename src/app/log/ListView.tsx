@@ -9,6 +9,7 @@ import { filterForm, toJobFilter } from './filter';
 import { FilterPanel } from './FilterPanel';
 import { JobCard } from './JobCard';
 import { useLogPicks } from './picks';
+import { CarriedOver, useCarriedOver } from './handover';
 import { useJobList } from './useLog';
 
 /** Jobs drawn at once; more on request, so a year of log stays quick on a phone. */
@@ -41,6 +42,7 @@ export function ListView() {
     if (list.state === 'ready') remember(list.value.jobs);
   }, [list]);
   const jobs = list.state === 'ready' ? list.value.jobs : [];
+  const carried = useCarriedOver(filterForm.value);
   const recent = useLogPicks();
   const union = (a: readonly string[], b: readonly string[]) => [...new Set([...a, ...b])].sort();
   return (
@@ -52,6 +54,7 @@ export function ListView() {
       />
       {list.state === 'failed' && <ErrorNote message={describeJobsError(t, list.error)} />}
       {list.state === 'ready' && <DamagedRecords records={list.value.corrupt} />}
+      <CarriedOver jobs={carried} headingId="list-carried" />
       <p class="log-count" aria-live="polite">
         {list.state === 'loading' ? t('app.shell.loading') : t('app.log.list.count', { count: jobs.length })}
       </p>

@@ -10,6 +10,7 @@ import { filterForm, toJobFilter } from './filter';
 import { describeFilter } from './FilterPanel';
 import { JobCard } from './JobCard';
 import { signedPercent } from './jobRows';
+import { CarriedOver, useCarriedOver } from './handover';
 import { useJobList } from './useLog';
 
 export function SummaryView() {
@@ -19,7 +20,10 @@ export function SummaryView() {
   const filter = toJobFilter(form);
   const list = useJobList(filter);
   const jobs: Job[] = list.state === 'ready' ? list.value.jobs : [];
-  const summary = summarizeShift(jobs);
+  const carried = useCarriedOver(form);
+  const summary = summarizeShift(jobs, carried);
+  // The carried-over loads have their own section above.
+  const ownOpen = summary.openItems.slice(summary.carriedOver);
   const inBand = summary.ecdPairs.filter((p) => p.withinBand === true).length;
   const withBand = summary.ecdPairs.filter((p) => p.withinBand !== undefined).length;
   return (
@@ -30,6 +34,7 @@ export function SummaryView() {
       </p>
       {list.state === 'failed' && <ErrorNote message={describeJobsError(t, list.error)} />}
       {list.state === 'ready' && <DamagedRecords records={list.value.corrupt} />}
+      <CarriedOver jobs={carried} headingId="summary-carried" />
 
       <section class="card" aria-labelledby="summary-loads">
         <h2 id="summary-loads">{t('app.log.summary.loadsHeading')}</h2>
@@ -63,11 +68,11 @@ export function SummaryView() {
 
       <section class="card" aria-labelledby="summary-open">
         <h2 id="summary-open">{t('app.log.summary.openHeading')}</h2>
-        {summary.openItems.length === 0 ? (
-          <p class="note">{t('app.log.summary.noOpen')}</p>
+        {ownOpen.length === 0 ? (
+          <p class="note">{t(summary.carriedOver > 0 ? 'app.log.summary.noOwnOpen' : 'app.log.summary.noOpen')}</p>
         ) : (
           <ul class="card-stack">
-            {summary.openItems.map((job) => (
+            {ownOpen.map((job) => (
               <JobCard key={job.id} job={job} t={t} show={show} locale={locale} />
             ))}
           </ul>

@@ -14,6 +14,7 @@ import {
   type JobStatus,
 } from '../../jobs';
 import type { LogEntry } from './entry';
+import { FURNACE_NAME_MAX } from '../../jobs/limits';
 
 export interface JobForm {
   workOrder: string;
@@ -50,7 +51,7 @@ export type JobFormField = (typeof JOB_FORM_FIELDS)[number];
 export const TEXT_MAX: Record<JobFormField, number> = {
   workOrder: TEXT_LIMITS.short,
   partNumber: TEXT_LIMITS.short,
-  furnace: TEXT_LIMITS.short,
+  furnace: FURNACE_NAME_MAX,
   operator: 4,
   status: TEXT_LIMITS.short,
   notes: TEXT_LIMITS.notes,

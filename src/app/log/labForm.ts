@@ -3,11 +3,21 @@
  * traverse does not give typed by hand: the ECD when there is no traverse or it has no single
  * crossing, the surface hardness without a traverse, the core hardness when the traverse has not
  * levelled off; then surface carbon, who measured and when. Numbers are read like every other field
- * (decimal comma or point); a hardness outside its scale is refused with the scale it fits ("did you
+ * (decimal comma or point) and checked before anything is stored: a depth and a carbon within the
+ * bounds the record takes, a hardness within its scale or refused with the scale it fits ("did you
  * mean 35 HRC?") by the same physics check the traverse uses.
  */
 import { HARDNESS_UNITS, localIsoDate, type HardnessUnit, type LabResult } from '../../jobs';
-import { checkHardness, fail, hardnessIn, type Hardness, type InputError, type Result } from '../../physics';
+import {
+  checkCarbonPct,
+  checkDepthMm,
+  checkHardness,
+  fail,
+  hardnessIn,
+  type Hardness,
+  type InputError,
+  type Result,
+} from '../../physics';
 import { field, readOptionalField, type FieldText } from '../ui/fieldText';
 import { FieldReader } from '../ui/outcome';
 import {
@@ -87,6 +97,25 @@ export function typedFieldsOf(outcome: TraverseOutcome): TypedFields {
   return { ecd: analysis.effectiveCaseDepthMm === null, surface: false, core: analysis.coreHardness === undefined };
 }
 
+function optional(
+  value: number | undefined,
+  check: (v: number, name: string) => Result<number>,
+  name: string,
+): Result<number | undefined> {
+  return value === undefined ? { ok: true, value } : check(value, name);
+}
+
+/** An optional typed number, then checked: within the bounds the record takes, worded beside its field. */
+function readChecked(
+  value: FieldText,
+  name: string,
+  check: (v: number, name: string) => Result<number>,
+  unit?: string,
+) {
+  const typed = readOptionalField(value, name, unit);
+  return typed.ok ? optional(typed.value, check, name) : typed;
+}
+
 /** A typed hardness within its scale (else "did you mean … HRC?"); a core must also be softer than the limit. */
 function readHardness(
   value: FieldText,
@@ -122,7 +151,7 @@ export function readLabForm(form: LabForm, limit: Hardness): LabRead {
   const traverse = readTraverseForm(form.traverse, limit);
   const typed = typedFieldsOf(traverse);
   const read = new FieldReader();
-  const ecdMm = typed.ecd ? read.value(readOptionalField(form.ecd, 'ecd', 'mm')) : undefined;
+  const ecdMm = typed.ecd ? read.value(readChecked(form.ecd, 'ecd', checkDepthMm, 'mm')) : undefined;
   const surface =
     typed.surface && isHardnessUnit(form.surfaceUnit)
       ? read.value(readHardness(form.surfaceHardness, form.surfaceUnit, 'surfaceHardness', limit))
@@ -131,7 +160,7 @@ export function readLabForm(form: LabForm, limit: Hardness): LabRead {
     typed.core && isHardnessUnit(form.coreUnit)
       ? read.value(readHardness(form.coreHardness, form.coreUnit, 'coreHardness', limit))
       : undefined;
-  const surfaceCarbonPct = read.value(readOptionalField(form.surfaceCarbon, 'surfaceCarbon'));
+  const surfaceCarbonPct = read.value(readChecked(form.surfaceCarbon, 'surfaceCarbon', checkCarbonPct));
   const errors = { ...traverse.errors, ...read.errors };
   if (Object.keys(errors).length > 0) return { errors, traverse, typed };
   const by = form.by.trim();

@@ -15,20 +15,19 @@ import { BandMethod } from './BandMethod';
 
 export interface CycleBandProps {
   id: string;
+  /** The recipe as simulated, the furnace's calibration factor on D included. */
   recipe: Recipe | undefined;
-  /** The furnace's calibration factor on D used for the result. */
-  diffusivityFactor: number;
   ctx: ScreenContext;
 }
 
-export function CycleBand({ id, recipe, diffusivityFactor, ctx }: CycleBandProps) {
+export function CycleBand({ id, recipe, ctx }: CycleBandProps) {
   const { t, show } = ctx;
   const [open, setOpen] = useState(false);
   const ranges = useMemo(() => latestRun('band'), []);
   const { temperatureToleranceC, betaRangeMPerS } = defaults.value;
   useEffect(() => {
-    if (open && recipe) ranges.run({ recipe, options: { diffusivityFactor, temperatureToleranceC, betaRangeMPerS } });
-  }, [ranges, open, recipe, diffusivityFactor, temperatureToleranceC, betaRangeMPerS]);
+    if (open && recipe) ranges.run({ recipe, options: { temperatureToleranceC, betaRangeMPerS } });
+  }, [ranges, open, recipe, temperatureToleranceC, betaRangeMPerS]);
   const answer = ranges.answer.value;
   const band = answer && 'output' in answer ? answer.output : undefined;
   const updating = open && ranges.updating.value;

@@ -42,8 +42,7 @@ export default function SettingsScreen() {
   const beta = readBeta(s.beta);
   const threshold = readThreshold(s.ecdThreshold);
   const margin = readMargin(s.totalCaseMargin);
-  const marginError =
-    margin === 'notPositive' ? t('app.settings.marginNotPositive') : margin.ok ? undefined : word(margin.error);
+  const marginError = margin.ok ? undefined : word(margin.error);
   const unitChoices = (q: DisplayQuantity) => [
     { value: 'auto', label: t('app.settings.followSystem') },
     ...UNIT_CHOICES[q].map((u) => ({ value: u, label: UNIT_SYMBOLS[u] ?? u })),

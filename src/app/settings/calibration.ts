@@ -5,6 +5,7 @@
  * one furnace at a time).
  */
 import { DIFFUSIVITY_FACTOR_LIMITS, type DiffusivityModelId, isModelId } from '../../physics';
+import { FURNACE_NAME_MAX } from '../../jobs/limits';
 import { persisted } from '../ui/persist';
 
 export interface StoredCalibration {
@@ -24,9 +25,6 @@ export interface StoredCalibration {
   apply: boolean;
 }
 
-/** Longest furnace name, characters (the log's limit for short text). */
-const FURNACE_MAX_LENGTH = 40;
-
 const finiteIn = (x: unknown, min: number, max: number): x is number =>
   typeof x === 'number' && Number.isFinite(x) && x >= min && x <= max;
 
@@ -37,7 +35,7 @@ function isCalibration(raw: unknown): raw is StoredCalibration {
   return (
     typeof c.furnace === 'string' &&
     c.furnace.trim() !== '' &&
-    c.furnace.length <= FURNACE_MAX_LENGTH &&
+    c.furnace.length <= FURNACE_NAME_MAX &&
     finiteIn(c.low, min, max) &&
     finiteIn(c.factor, c.low, max) &&
     finiteIn(c.high, c.factor, max) &&

@@ -10,6 +10,7 @@ import {
   checkBeta,
   checkCarbonPct,
   checkTemperatureTolerance,
+  checkTotalCaseMargin,
   DEFAULT_BETA_M_PER_S,
   DEFAULT_BETA_RANGE_M_PER_S,
   DEFAULT_CASE_CRITERION,
@@ -109,11 +110,10 @@ export function readThreshold(value: FieldText): Result<number> {
   return typed.ok ? checkCarbonPct(typed.value, 'ecdThreshold') : typed;
 }
 
-/** Total-case margin above core carbon, %C; zero would put the total case at infinite depth. */
-export function readMargin(value: FieldText): Result<number> | 'notPositive' {
+/** Total-case margin above core carbon, %C, by the same check as every request that carries it. */
+export function readMargin(value: FieldText): Result<number> {
   const typed = readField(value, 'totalCaseMargin');
-  if (!typed.ok) return typed;
-  return typed.value > 0 ? checkCarbonPct(typed.value, 'totalCaseMargin') : 'notPositive';
+  return typed.ok ? checkTotalCaseMargin(typed.value, 'totalCaseMargin') : typed;
 }
 
 /** Furnace temperature tolerance, ±°C. */
@@ -149,7 +149,7 @@ export const defaults = computed(() => {
     betaMPerS: beta.ok ? beta.value : DEFAULT_BETA_M_PER_S,
     ecdThresholdPct: threshold.ok ? threshold.value : DEFAULT_ECD_THRESHOLD_PCT,
     ecdHardnessLimit: CASE_CRITERIA[caseCriterion.value],
-    totalCaseMarginPct: margin !== 'notPositive' && margin.ok ? margin.value : TOTAL_CASE_MARGIN_PCT,
+    totalCaseMarginPct: margin.ok ? margin.value : TOTAL_CASE_MARGIN_PCT,
     temperatureToleranceC: tolerance.ok ? tolerance.value : DEFAULT_TEMPERATURE_TOLERANCE_C,
     betaRangeMPerS: betaRange.ok ? betaRange.value : { ...DEFAULT_BETA_RANGE_M_PER_S },
   };

@@ -2,12 +2,13 @@
 import { useEffect, useRef } from 'preact/hooks';
 
 export interface ChartHandle<D> {
-  update(data: D): void;
+  /** New data, and the theme it is drawn in. */
+  update(data: D, look?: string): void;
   resize(): void;
   destroy(): void;
 }
 
-export type ChartMounter<D> = (el: HTMLElement, data: D) => ChartHandle<D>;
+export type ChartMounter<D> = (el: HTMLElement, data: D, look: string) => ChartHandle<D>;
 
 export function LazyChart<D>({
   data,
@@ -29,8 +30,8 @@ export function LazyChart<D>({
     let cancelled = false;
     void load().then((mount) => {
       if (cancelled || !box.current) return;
-      if (chart.current) chart.current.update(data);
-      else chart.current = mount(box.current, data);
+      if (chart.current) chart.current.update(data, theme);
+      else chart.current = mount(box.current, data, theme);
     });
     return () => {
       cancelled = true;

@@ -47,21 +47,41 @@ export function depthMarker(u: uPlot, depth: number, label: string, colour: stri
   ctx.restore();
 }
 
-export function mountUplot<D>(
+/**
+ * Draws a uPlot chart into `el`. `options` reads the data drawn now through `shown()` (marks drawn
+ * on every frame read it there), so new figures with the same words and theme go into the same
+ * chart (setData); new words or another theme (`look`) make a new one.
+ */
+export function mountUplot<D extends { labels: unknown }>(
   el: HTMLElement,
   data: D,
-  options: (data: D, width: number) => uPlot.Options,
+  look: string,
+  options: (shown: () => D, width: number) => uPlot.Options,
   series: (data: D) => uPlot.AlignedData,
 ): ChartHandle<D> {
-  const width = () => el.clientWidth || 320;
-  let plot = new uPlot(options(data, width()), series(data), el);
+  let current = data;
+  let drawnLook = look;
+  const make = () =>
+    new uPlot(
+      options(() => current, el.clientWidth || 320),
+      series(current),
+      el,
+    );
+  let plot = make();
   return {
-    update(next) {
+    update(next, nextLook = drawnLook) {
+      const sameWords = JSON.stringify(next.labels) === JSON.stringify(current.labels);
+      current = next;
+      if (sameWords && nextLook === drawnLook) {
+        plot.setData(series(current));
+        return;
+      }
+      drawnLook = nextLook;
       plot.destroy();
-      plot = new uPlot(options(next, width()), series(next), el);
+      plot = make();
     },
     resize() {
-      plot.setSize({ width: width(), height: plot.height });
+      plot.setSize({ width: el.clientWidth || 320, height: plot.height });
     },
     destroy() {
       plot.destroy();

@@ -4,16 +4,15 @@
  * the furnace tolerance, and (at the β corners) every carburizing step's β set to one end of
  * the β range. Identical cases are simulated once (23 runs with a β range, 9 without).
  */
-import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, scaledDiffusivity } from '../diffusivity';
+import { DEFAULT_MODEL } from '../diffusivity';
 import { DEFAULT_ECD_THRESHOLD_PCT } from '../steel';
 import { depthBand, type BandCase, type DepthBand, type Range } from '../uncertainty';
 import { depthToCarbonM } from './profile';
 import type { Recipe } from './recipe';
 import { solveRecipe } from './simulate';
 
+/** The furnace's calibration factor on D is the recipe's own `diffusivityFactor`. */
 export interface CycleBandOptions {
-  /** Furnace calibration factor on D (1 when uncalibrated). */
-  diffusivityFactor?: number;
   /** Furnace temperature tolerance, ±°C (uncertainty.ts default when absent). */
   temperatureToleranceC?: number;
   /** Range of β, m/s; absent: each step keeps its own β. */
@@ -40,16 +39,13 @@ export function bandRecipe(recipe: Recipe, c: Pick<BandCase, 'tempOffsetC' | 'be
 
 /** Band on the effective case depth of a validated recipe (depths in mm). */
 export function cycleDepthBand(recipe: Recipe, options: CycleBandOptions = {}): CycleBand {
-  const factor = options.diffusivityFactor ?? 1;
   const thresholdPct = recipe.thresholdCarbonPct ?? DEFAULT_ECD_THRESHOLD_PCT;
   const cache = new Map<string, number>();
   const predict = (c: BandCase): number => {
     const key = `${c.model}|${c.tempOffsetC}|${c.betaMPerS ?? ''}`;
     let ecdMm = cache.get(key);
     if (ecdMm === undefined) {
-      const run = solveRecipe(bandRecipe(recipe, c), {
-        diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS[c.model].diffusivity, factor),
-      });
+      const run = solveRecipe({ ...bandRecipe(recipe, c), model: c.model });
       ecdMm = depthToCarbonM(run, thresholdPct) * 1e3;
       cache.set(key, ecdMm);
     }

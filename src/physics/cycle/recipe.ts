@@ -50,6 +50,8 @@ export interface Recipe {
   ecdHardnessLimit?: Hardness;
   /** Total case ends this far above core carbon, %C (default TOTAL_CASE_MARGIN_PCT). */
   totalCaseMarginPct?: number;
+  /** The furnace's calibration factor on D (1 when absent: uncalibrated). */
+  diffusivityFactor?: number;
   shape?: PartShape;
   steps: RecipeStep[];
 }

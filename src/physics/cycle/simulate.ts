@@ -2,7 +2,7 @@
  * The `simulate` command: a multi-step carburizing cycle in, final surface carbon, case
  * depths, carbon profile, surface history and cautions out.
  */
-import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, type DiffusivityFunction } from '../diffusivity';
+import { DIFFUSIVITY_MODELS, DEFAULT_MODEL, scaledDiffusivity, type DiffusivityFunction } from '../diffusivity';
 import { indicativeHardnessBasis, indicativeHardnessHrc } from '../indicativeHardness';
 import { fail, ok, type Result } from '../result';
 import { DEFAULT_ECD_THRESHOLD_PCT, totalCaseThresholdPct } from '../steel';
@@ -22,7 +22,10 @@ export const RESOLUTION_LIMITS = { min: 0.25, max: 64 } as const;
 export interface CycleOptions {
   /** Grid and time-step refinement factor: 2 halves cell widths and time steps. Default 1. */
   resolution?: number;
-  /** Replaces the recipe's diffusivity model (tests: constant D for the closed-form checks). */
+  /**
+   * Replaces the recipe's diffusivity model (tests only: constant D for the closed-form checks).
+   * A furnace's factor is the recipe's `diffusivityFactor`, applied to either.
+   */
   diffusivity?: DiffusivityFunction;
 }
 
@@ -42,7 +45,10 @@ export function solveRecipe(recipe: Recipe, options: CycleOptions = {}): SolverR
   const resolution = Number.isFinite(requested)
     ? Math.min(Math.max(requested, RESOLUTION_LIMITS.min), RESOLUTION_LIMITS.max)
     : 1;
-  const diffusivity = options.diffusivity ?? DIFFUSIVITY_MODELS[recipe.model ?? DEFAULT_MODEL].diffusivity;
+  const diffusivity = scaledDiffusivity(
+    options.diffusivity ?? DIFFUSIVITY_MODELS[recipe.model ?? DEFAULT_MODEL].diffusivity,
+    recipe.diffusivityFactor ?? 1,
+  );
   const schedule = scheduleTimeSteps(recipe, diffusivity, resolution);
   const { extentM, radiusM } = domain(recipe.shape ?? { kind: 'semi-infinite' }, schedule.semiInfiniteDepthM);
   const grid = buildGrid(extentM, resolution, radiusM);
@@ -91,13 +97,10 @@ function allFinite(result: SimulationResult): boolean {
   );
 }
 
-/** `simulate`: request → validated recipe → simulation, or a typed error. `options` may replace D (a calibrated furnace). */
-export function simulateCycle(
-  request: unknown,
-  options: Omit<CycleOptions, 'resolution'> = {},
-): Result<SimulationResult> {
+/** `simulate`: request → validated recipe (a calibrated furnace's factor included) → simulation, or a typed error. */
+export function simulateCycle(request: unknown): Result<SimulationResult> {
   const recipe = readRecipe(request);
   if (!recipe.ok) return recipe;
-  const result = runCycle(recipe.value, 1, options);
+  const result = runCycle(recipe.value);
   return allFinite(result) ? ok(result) : fail('solve.noConvergence', 'steps');
 }

@@ -1,9 +1,8 @@
 /**
  * The forward model the planner searches: a boost/diffuse/hardening recipe from two times,
- * simulated by the cycle solver with the furnace's calibration factor on D. Counts every
+ * simulated by the cycle solver (the recipe carries the furnace's calibration factor on D). Counts every
  * simulation so the benchmark can report what a plan costs.
  */
-import { DIFFUSIVITY_MODELS, scaledDiffusivity, type DiffusivityFunction } from '../diffusivity';
 import { depthToCarbonM } from '../cycle/profile';
 import type { Recipe, RecipeStep, SimulationResult } from '../cycle/recipe';
 import { runCycle, solveRecipe } from '../cycle/simulate';
@@ -26,11 +25,8 @@ function soak(label: string, durationH: number, step: PotentialStep): RecipeStep
 export class PlanModel {
   /** Simulator runs so far. */
   simulations = 0;
-  private readonly diffusivity: DiffusivityFunction;
 
-  constructor(readonly request: PlanRequest) {
-    this.diffusivity = scaledDiffusivity(DIFFUSIVITY_MODELS[request.model].diffusivity, request.diffusivityFactor);
-  }
+  constructor(readonly request: PlanRequest) {}
 
   /** Hours at hardening temperature (0 without a hardening step). */
   get hardeningH(): number {
@@ -41,6 +37,8 @@ export class PlanModel {
   recipe(boostH: number, diffuseH: number, tempOffsetC = 0): Recipe {
     const { boost, diffuse, hardening, name, steel, model, thresholdCarbonPct, totalCaseMarginPct, shape } =
       this.request;
+    // The furnace's factor travels with the recipe, so a saved plan reproduces its prediction.
+    const { diffusivityFactor } = this.request;
     const shifted = (step: PotentialStep) => ({ ...step, temperatureC: step.temperatureC + tempOffsetC });
     const steps: RecipeStep[] = [];
     if (boostH > 0) steps.push(soak(PLAN_STEP_LABELS.boost, boostH, shifted(boost)));
@@ -51,7 +49,8 @@ export class PlanModel {
       );
     return {
       ...(name === undefined ? {} : { name }),
-      ...(totalCaseMarginPct === undefined ? {} : { totalCaseMarginPct }),
+      totalCaseMarginPct,
+      diffusivityFactor,
       steel,
       model,
       thresholdCarbonPct,
@@ -68,7 +67,6 @@ export class PlanModel {
     this.simulations++;
     const run = solveRecipe(this.recipe(boostShare * carburizeH, (1 - boostShare) * carburizeH, tempOffsetC), {
       resolution,
-      diffusivity: this.diffusivity,
     });
     return { ecdMm: depthToCarbonM(run, this.request.thresholdCarbonPct) * 1e3, surfacePct: run.surfaceCarbonPct };
   }
@@ -76,6 +74,6 @@ export class PlanModel {
   /** The full simulation of a recipe (profile, history, cautions) at `resolution`. */
   simulate(recipe: Recipe, resolution: number): SimulationResult {
     this.simulations++;
-    return runCycle(recipe, resolution, { diffusivity: this.diffusivity });
+    return runCycle(recipe, resolution);
   }
 }

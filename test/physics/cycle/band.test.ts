@@ -1,7 +1,6 @@
 /** The likely-range band of a cycle's ECD: depthBand over the simulator, each distinct case run once. */
 import { describe, expect, it } from 'vitest';
 import { bandRecipe, cycleDepthBand } from '../../../src/physics/cycle/band';
-import { scaledDiffusivity } from '../../../src/physics/diffusivity';
 import { runCycle } from '../../../src/physics/cycle/simulate';
 import { DIFFUSIVITY_MODELS } from '../../../src/physics/diffusivity';
 import { demoCycle } from './fixtures';
@@ -43,11 +42,14 @@ describe('cycle depth band', () => {
     expect(band.maxMm).toBe(band.models.max);
   });
 
-  it('a calibration factor scales D in every case: the nominal equals the simulator run with D × k', () => {
-    const recipe = demoCycle();
-    const band = cycleDepthBand(recipe, { diffusivityFactor: 1.2 });
-    const direct = runCycle(recipe, 1, { diffusivity: scaledDiffusivity(DIFFUSIVITY_MODELS.agren.diffusivity, 1.2) });
+  it('the recipe’s calibration factor scales D in every case: the nominal equals the simulator run with D × k', () => {
+    const recipe = { ...demoCycle(), diffusivityFactor: 1.2 };
+    const band = cycleDepthBand(recipe);
+    const direct = runCycle(demoCycle(), 1, {
+      diffusivity: (tempK, carbonPct) => 1.2 * DIFFUSIVITY_MODELS.agren.diffusivity(tempK, carbonPct),
+    });
     expect(band.nominalMm).toBeCloseTo(direct.effectiveCaseDepthMm, 12);
-    expect(band.nominalMm).toBeGreaterThan(cycleDepthBand(recipe).nominalMm);
+    expect(band.models.max).toBeGreaterThan(cycleDepthBand(demoCycle()).models.max);
+    expect(band.nominalMm).toBeGreaterThan(cycleDepthBand(demoCycle()).nominalMm);
   });
 });

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { createI18n, errorMessage, LANGUAGES, RESOURCES } from '../../../src/i18n/i18n';
 import { DEFAULT_BETA_M_PER_S } from '../../../src/physics/cycle/recipe';
 import { MAX_STEPS, readRecipe } from '../../../src/physics/cycle/readRecipe';
+import { TEXT_LENGTH_LIMITS } from '../../../src/physics/limits';
 import { simulateCycle } from '../../../src/physics/cycle/simulate';
 
 const step = { durationH: 2, startTempC: 925, endTempC: 925, carbonPotentialPct: 0.9 };
@@ -13,7 +14,7 @@ const withSteps = (...steps: unknown[]) => ({ ...valid, steps });
 const withStep = (patch: Record<string, unknown>) => withSteps(step, { ...step, ...patch });
 
 describe('readRecipe: defaults', () => {
-  it('fills model, threshold, shape, β and a soak end temperature', () => {
+  it('fills model, threshold, shape, total-case margin, furnace factor 1, β and a soak end temperature', () => {
     const result = readRecipe({
       steel: { coreCarbonPct: '0,2' },
       steps: [{ durationH: 2, startTempC: 925, carbonPotentialPct: '0,9' }],
@@ -25,6 +26,8 @@ describe('readRecipe: defaults', () => {
         model: 'agren',
         thresholdCarbonPct: 0.4,
         shape: { kind: 'semi-infinite' },
+        totalCaseMarginPct: 0.05,
+        diffusivityFactor: 1,
         steps: [
           { durationH: 2, startTempC: 925, endTempC: 925, carbonPotentialPct: 0.9, betaMPerS: DEFAULT_BETA_M_PER_S },
         ],
@@ -110,6 +113,18 @@ const errorCases: [string, unknown, string, string | undefined][] = [
     'steps',
   ],
   ['start temperature too hot', withStep({ startTempC: 1200 }), 'temperature.outOfRange', 'steps.1.startTempC'],
+  [
+    'a step label longer than the record keeps',
+    withStep({ label: 'x'.repeat(TEXT_LENGTH_LIMITS.label + 1) }),
+    'text.tooLong',
+    'steps.1.label',
+  ],
+  [
+    'a name longer than the record keeps',
+    { ...valid, name: 'n'.repeat(TEXT_LENGTH_LIMITS.name + 1) },
+    'text.tooLong',
+    'name',
+  ],
   ['end temperature below 0 °C', withStep({ endTempC: -5 }), 'temperature.outOfRange', 'steps.1.endTempC'],
   ['start temperature missing', withStep({ startTempC: undefined }), 'field.missing', 'steps.1.startTempC'],
   [

@@ -21,10 +21,14 @@ export const pinionWith = (patch: Record<string, unknown>): Record<string, unkno
   ...patch,
 });
 
-/** The recipe simulated forward at the simulator's default resolution, D scaled by the furnace factor. */
+/**
+ * The recipe simulated forward at the simulator's default resolution, D scaled by `factor` here
+ * (the recipe's own `diffusivityFactor` is set aside, so the check does not lean on that route).
+ */
 export function forward(recipe: Recipe, factor = 1, resolution = 1): SimulationResult {
+  const { diffusivityFactor: _own, ...uncalibrated } = recipe;
   const model = DIFFUSIVITY_MODELS[recipe.model ?? 'agren'].diffusivity;
-  return runCycle(recipe, resolution, { diffusivity: (tempK, carbonPct) => factor * model(tempK, carbonPct) });
+  return runCycle(uncalibrated, resolution, { diffusivity: (tempK, carbonPct) => factor * model(tempK, carbonPct) });
 }
 
 export const within = (value: number, range: { min: number; max: number }) => value >= range.min && value <= range.max;

@@ -6,7 +6,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { readRecipe } from '../../../src/physics/cycle/readRecipe';
-import { simulateCycle } from '../../../src/physics/cycle/simulate';
+import { runCycle, simulateCycle } from '../../../src/physics/cycle/simulate';
 import type { Recipe } from '../../../src/physics/cycle/recipe';
 import { findGrade } from '../../../src/physics/grades';
 import {
@@ -118,6 +118,9 @@ describe('furnace calibration factor', () => {
     const ratio = (calibrated.boostH + calibrated.diffuseH) / (nominal.boostH + nominal.diffuseH);
     expect(ratio).toBeGreaterThan(0.65);
     expect(ratio).toBeLessThan(0.85);
+    // The planned recipe carries the factor, so simulating it as it stands reproduces the plan.
+    expect(calibrated.recipe.diffusivityFactor).toBe(1.3);
+    expect(runCycle(calibrated.recipe).effectiveCaseDepthMm).toBe(calibrated.predicted.effectiveCaseDepthMm);
     const again = forward(calibrated.recipe, 1.3);
     expect(within(again.effectiveCaseDepthMm, { min: 0.75, max: 1.0 })).toBe(true);
     expect(again.effectiveCaseDepthMm).toBeCloseTo(calibrated.predicted.effectiveCaseDepthMm, 12);
@@ -184,6 +187,7 @@ function requestFor(c: Cycle): Omit<PlanRequest, 'targetEcdMm' | 'targetSurfaceC
     diffuse: { temperatureC: c.diffuseC, carbonPotentialPct: c.diffusePct, betaMPerS: 1.5e-7 },
     ...(c.hardening ? { hardening: c.hardening } : {}),
     diffusivityFactor: c.factor,
+    totalCaseMarginPct: 0.05,
     maxTotalH: 100,
   };
 }

@@ -16,7 +16,7 @@ const minimal = {
 };
 
 describe('readPlanRequest: defaults', () => {
-  it('fills model, threshold, shape, β, calibration factor 1 and the time limit; no hardening step unless given', () => {
+  it('fills model, threshold, shape, total-case margin, β, calibration factor 1 and the time limit; no hardening step unless given', () => {
     const result = readPlanRequest(minimal);
     expect(result).toEqual({
       ok: true,
@@ -30,6 +30,7 @@ describe('readPlanRequest: defaults', () => {
         targetEcdMm: { min: 0.75, max: 1 },
         targetSurfaceCarbonPct: { min: 0.75, max: 0.9 },
         diffusivityFactor: 1,
+        totalCaseMarginPct: 0.05,
         maxTotalH: DEFAULT_MAX_TOTAL_H,
       },
     });
@@ -125,7 +126,12 @@ const errorCases: [string, unknown, string, string | undefined][] = [
     'targetEcdMm.min',
   ],
   ['ECD target max too deep', { ...minimal, targetEcdMm: { min: 1, max: 40 } }, 'depth.tooDeep', 'targetEcdMm.max'],
-  ['ECD target min above max', { ...minimal, targetEcdMm: { min: 1, max: 0.75 } }, 'range.minAboveMax', 'targetEcdMm'],
+  [
+    'ECD target min above max',
+    { ...minimal, targetEcdMm: { min: 1, max: 0.75 } },
+    'range.minAboveMax',
+    'targetEcdMm.max',
+  ],
   [
     'ECD target beyond half the plate',
     { ...minimal, shape: { kind: 'plate', thicknessMm: 1.5 } },
@@ -136,7 +142,7 @@ const errorCases: [string, unknown, string, string | undefined][] = [
     'surface target min above max',
     { ...minimal, targetSurfaceCarbonPct: { min: 0.9, max: 0.8 } },
     'range.minAboveMax',
-    'targetSurfaceCarbonPct',
+    'targetSurfaceCarbonPct.max',
   ],
   [
     'surface target above 2.11 %C',

@@ -41,7 +41,9 @@ export function alignTraverse(data: TraverseChartData): uPlot.AlignedData {
   ];
 }
 
-function options(data: TraverseChartData, width: number): uPlot.Options {
+/** `shown()` is the data drawn now: the ECD marks read it on every draw. */
+function options(shown: () => TraverseChartData, width: number): uPlot.Options {
+  const data = shown();
   const measured = cssVar('--chart-carbon');
   const predicted = cssVar('--chart-hardness');
   const mark = cssVar('--chart-mark');
@@ -75,9 +77,9 @@ function options(data: TraverseChartData, width: number): uPlot.Options {
     hooks: {
       draw: [
         (u) => {
-          if (data.measuredEcd !== undefined) depthMarker(u, data.measuredEcd, data.labels.measuredEcd, mark);
-          if (data.predictedEcd !== undefined)
-            depthMarker(u, data.predictedEcd, data.labels.predictedEcd, mark, 1, [6, 4]);
+          const { measuredEcd, predictedEcd, labels } = shown();
+          if (measuredEcd !== undefined) depthMarker(u, measuredEcd, labels.measuredEcd, mark);
+          if (predictedEcd !== undefined) depthMarker(u, predictedEcd, labels.predictedEcd, mark, 1, [6, 4]);
         },
       ],
     },
@@ -85,5 +87,8 @@ function options(data: TraverseChartData, width: number): uPlot.Options {
 }
 
 /** Draws the chart into `el`; the handle redraws it with new data, resizes or removes it. */
-export const mountTraverseChart = (el: HTMLElement, data: TraverseChartData): ChartHandle<TraverseChartData> =>
-  mountUplot(el, data, options, alignTraverse);
+export const mountTraverseChart = (
+  el: HTMLElement,
+  data: TraverseChartData,
+  look = '',
+): ChartHandle<TraverseChartData> => mountUplot(el, data, look, options, alignTraverse);

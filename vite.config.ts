@@ -50,6 +50,8 @@ export default defineConfig({
         // Every asset, the lazy screen chunks and the chart included, so the app works in airplane mode.
         globPatterns: ['**/*.{js,css,html,png,svg,json}'],
         navigateFallback: 'index.html',
+        // The shop server sits under /db/ on the same origin: never answered from the app's cache.
+        navigateFallbackDenylist: [/^\/db\//u],
         cleanupOutdatedCaches: true,
       },
     }),

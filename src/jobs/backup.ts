@@ -1,8 +1,9 @@
 /**
  * The full backup: our own plain JSON format,
  * `{ format: "casefront-job-log", version, exportedAt, appVersion, jobs: [...] }`,
- * where `version` is the job record version. Import checks the whole file first and
- * changes nothing unless every record is valid.
+ * where `version` is the job record version, and `history`: each job's change ids per field (and
+ * the values kept from two devices), so that reading the file back merges field by field. Import
+ * checks the whole file first and changes nothing unless every record is valid.
  */
 import * as v from 'valibot';
 import { issuesOf } from './issues';
@@ -12,23 +13,44 @@ import { compareNewestFirst } from './query';
 
 export const BACKUP_FORMAT = 'casefront-job-log';
 
+const ChangeIdsSchema = v.array(v.pipe(v.string(), v.minLength(1), v.maxLength(40)));
+
+const AlternativeSchema = v.object({
+  value: v.optional(v.unknown()),
+  version: v.pipe(v.string(), v.maxLength(40)),
+  by: v.optional(v.pipe(v.string(), v.maxLength(80))),
+});
+
+export const JobHistorySchema = v.strictObject({
+  versions: v.record(v.string(), ChangeIdsSchema),
+  open: v.optional(v.record(v.string(), v.array(AlternativeSchema))),
+});
+
 export const BackupSchema = v.strictObject({
   format: v.literal(BACKUP_FORMAT),
   version: v.literal(JOB_RECORD_VERSION),
   exportedAt: TimestampSchema,
   appVersion: v.pipe(v.string(), v.minLength(1), v.maxLength(40)),
   jobs: v.array(JobSchema),
+  history: v.optional(v.record(v.string(), JobHistorySchema)),
 });
 
 export type Backup = v.InferOutput<typeof BackupSchema>;
+export type JobHistory = v.InferOutput<typeof JobHistorySchema>;
 
-export function createBackup(jobs: readonly Job[], appVersion: string, now: Date = new Date()): Backup {
+export function createBackup(
+  jobs: readonly Job[],
+  appVersion: string,
+  now: Date = new Date(),
+  history?: Record<string, JobHistory>,
+): Backup {
   return {
     format: BACKUP_FORMAT,
     version: JOB_RECORD_VERSION,
     exportedAt: now.toISOString(),
     appVersion,
     jobs: [...jobs].sort(compareNewestFirst).reverse(),
+    ...(history ? { history } : {}),
   };
 }
 

@@ -15,4 +15,6 @@ export * from './calibration';
 export * from './labFigures';
 export * from './rerun';
 export * from './predictedProfile';
-export { INDEX, JOBS_STORE, LATEST_DB_VERSION } from './migrations';
+export { JOBS_STORE, LATEST_DB_VERSION } from './migrations';
+export type { Alternative } from './documents';
+export type { LogDatabase, PouchFactory } from './pouch';

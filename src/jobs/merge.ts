@@ -1,53 +1,41 @@
 /**
- * The import merge rule: records are matched by id and the newer `updatedAt` wins.
- * A record identical to the local one is unchanged; one that is not newer than the local
- * copy is skipped (the local copy is kept); a local copy that no longer validates is replaced.
+ * What an import did, and the one rule for timestamps from elsewhere: a time more than a day
+ * ahead of this device's clock is set to now (counted), so a job from a device with a wild
+ * clock stays editable and sorts where it belongs. Which value of a field wins is decided by
+ * the change history (`fieldMerge.ts`), never by these times.
  */
 import type { Job } from './schema';
 
-export type MergeDecision = 'add' | 'update' | 'unchanged' | 'skipOlder';
+export { canonicalJson } from './canonical';
 
 export interface ImportReport {
   added: number;
+  /** Jobs that took changes from the file (merged field by field). */
   updated: number;
   unchanged: number;
-  skippedOlder: number;
+  /** Jobs with a field changed both here and in the file: both values kept, shown on the job. */
+  conflicts: number;
+  /** Jobs whose timestamps lay far in the future and were set to the time of the import. */
+  clamped: number;
 }
 
-/** JSON with keys sorted at every level: equal text means equal records. */
-export function canonicalJson(value: unknown): string {
-  return JSON.stringify(value, (_key, v: unknown) =>
-    typeof v === 'object' && v !== null && !Array.isArray(v)
-      ? Object.fromEntries(
-          Object.entries(v as Record<string, unknown>).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)),
-        )
-      : v,
-  );
-}
+/** How far ahead of this device's clock a timestamp may be before it counts as wrong. */
+export const FUTURE_TOLERANCE_MS = 24 * 3600_000;
 
-/** `local` is the stored record (valid), `'corrupt'` when it failed validation, or undefined. */
-export function decideMerge(local: Job | 'corrupt' | undefined, incoming: Job): MergeDecision {
-  if (local === undefined) return 'add';
-  if (local === 'corrupt') return 'update';
-  if (canonicalJson(local) === canonicalJson(incoming)) return 'unchanged';
-  return incoming.updatedAt > local.updatedAt ? 'update' : 'skipOlder';
-}
+export const emptyReport = (): ImportReport => ({ added: 0, updated: 0, unchanged: 0, conflicts: 0, clamped: 0 });
 
-/** Within one file, keep the newest version of each id (a file should not repeat ids, but may). */
-export function newestById(jobs: readonly Job[]): Job[] {
-  const byId = new Map<string, Job>();
-  for (const job of jobs) {
-    const seen = byId.get(job.id);
-    if (!seen || job.updatedAt > seen.updatedAt) byId.set(job.id, job);
-  }
-  return [...byId.values()];
-}
-
-export const emptyReport = (): ImportReport => ({ added: 0, updated: 0, unchanged: 0, skippedOlder: 0 });
-
-export function countDecision(report: ImportReport, decision: MergeDecision): void {
-  if (decision === 'add') report.added++;
-  else if (decision === 'update') report.updated++;
-  else if (decision === 'unchanged') report.unchanged++;
-  else report.skippedOlder++;
+/** The job with createdAt/updatedAt no later than `now` + the tolerance (else set to now). */
+export function clampFuture(job: Job, now: Date): { job: Job; clamped: boolean } {
+  const limit = now.getTime() + FUTURE_TOLERANCE_MS;
+  const late = (iso: string) => Date.parse(iso) > limit;
+  if (!late(job.createdAt) && !late(job.updatedAt)) return { job, clamped: false };
+  const stamp = now.toISOString();
+  return {
+    job: {
+      ...job,
+      createdAt: late(job.createdAt) ? stamp : job.createdAt,
+      updatedAt: late(job.updatedAt) ? stamp : job.updatedAt,
+    },
+    clamped: true,
+  };
 }

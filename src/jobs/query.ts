@@ -1,11 +1,9 @@
 /**
- * Filtering the log: which index narrows a filter best, whether a job matches it, and the
- * list order (newest first). The store reads through the index, then checks every job
- * against the whole filter, so the index choice only affects speed, never the answer.
+ * Filtering the log: whether a job matches a filter, and the list order (newest first). The
+ * store keeps every job in memory with its search text folded once, so a filter is one pass.
  */
 import type { JobStatus, Job } from './schema';
 import { DEFAULT_SHIFT_CONFIG, shiftOf, type IsoDate, type ShiftConfig, type ShiftId } from './shift';
-import { INDEX } from './migrations';
 
 export interface JobFilter {
   /** First shift date, inclusive. */
@@ -20,39 +18,14 @@ export interface JobFilter {
   text?: string;
 }
 
-const EARLIEST_DATE = '0000-01-01';
-const LATEST_DATE = '9999-12-31';
-
 /** The filter the log opens with: the shift running at `now`. */
 export function currentShiftFilter(now: Date, config: ShiftConfig = DEFAULT_SHIFT_CONFIG): JobFilter {
   const { shift, shiftDate } = shiftOf(now, config);
   return { fromDate: shiftDate, toDate: shiftDate, shift };
 }
 
-export interface IndexPlan {
-  index: string;
-  range: IDBKeyRange;
-}
-
 const statusList = (status: JobFilter['status']): readonly JobStatus[] =>
   status === undefined ? [] : typeof status === 'string' ? [status] : status;
-
-/** The index read for a filter, or undefined to read the whole store. */
-export function planQuery(filter: JobFilter): IndexPlan | undefined {
-  const hasDates = filter.fromDate !== undefined || filter.toDate !== undefined;
-  const from = filter.fromDate ?? EARLIEST_DATE;
-  const to = filter.toDate ?? LATEST_DATE;
-  if (from > to) return { index: INDEX.shiftDate, range: IDBKeyRange.only('') };
-  if (filter.furnace !== undefined && hasDates) {
-    return { index: INDEX.furnaceShiftDate, range: IDBKeyRange.bound([filter.furnace, from], [filter.furnace, to]) };
-  }
-  if (hasDates) return { index: INDEX.shiftDate, range: IDBKeyRange.bound(from, to) };
-  if (filter.furnace !== undefined) return { index: INDEX.furnace, range: IDBKeyRange.only(filter.furnace) };
-  if (filter.partNumber !== undefined) return { index: INDEX.partNumber, range: IDBKeyRange.only(filter.partNumber) };
-  const statuses = statusList(filter.status);
-  if (statuses.length === 1) return { index: INDEX.status, range: IDBKeyRange.only(statuses[0]!) };
-  return undefined;
-}
 
 /** Lower case without accents, so "nitrogeno" finds "Nitrógeno" and "OEL" finds "Öl". */
 export function foldText(text: string): string {
@@ -67,7 +40,8 @@ export function searchWords(text: string | undefined): string[] {
         .filter((w) => w !== '');
 }
 
-function searchableText(job: Job): string {
+/** The text a search looks in, folded once (the log keeps it beside each job). */
+export function searchableText(job: Job): string {
   return foldText([job.workOrder, job.partNumber, job.notes, job.operator].join('\n'));
 }
 
@@ -76,6 +50,7 @@ export function matchesFilter(
   job: Job,
   filter: JobFilter,
   words: readonly string[] = searchWords(filter.text),
+  haystack?: string,
 ): boolean {
   if (filter.fromDate !== undefined && job.shiftDate < filter.fromDate) return false;
   if (filter.toDate !== undefined && job.shiftDate > filter.toDate) return false;
@@ -85,8 +60,8 @@ export function matchesFilter(
   const statuses = statusList(filter.status);
   if (statuses.length > 0 && !statuses.includes(job.status)) return false;
   if (words.length > 0) {
-    const haystack = searchableText(job);
-    if (!words.every((word) => haystack.includes(word))) return false;
+    const text = haystack ?? searchableText(job);
+    if (!words.every((word) => text.includes(word))) return false;
   }
   return true;
 }

@@ -13,6 +13,8 @@ export const JOBS_ERROR_CODES = [
   'storage.newerVersion',
   'record.notFound',
   'record.invalid',
+  'record.stale',
+  'record.notDamaged',
   'import.notJson',
   'import.wrongFormat',
   'import.unsupportedVersion',
@@ -40,6 +42,7 @@ export const PROBLEM_CODES = [
   'notOneOf',
   'unknownField',
   'invalid',
+  'changedMeanwhile',
 ] as const;
 
 export type ProblemCode = (typeof PROBLEM_CODES)[number];

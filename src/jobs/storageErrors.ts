@@ -15,9 +15,19 @@ export function isQuotaError(error: unknown): boolean {
   return ['QuotaExceededError', 'NS_ERROR_DOM_QUOTA_REACHED'].includes(errorName(error));
 }
 
-/** The typed failure for an error thrown or reported by IndexedDB. */
+/**
+ * PouchDB reports a failed IndexedDB transaction as its own error whose `reason` is the
+ * browser's error name (`QuotaExceededError` for a full disk).
+ */
+function pouchReason(error: unknown): string | undefined {
+  if (typeof error !== 'object' || error === null) return undefined;
+  const { reason, message } = error as { reason?: unknown; message?: unknown };
+  return [reason, message].find((text): text is string => typeof text === 'string' && /Quota/iu.test(text));
+}
+
+/** The typed failure for an error thrown or reported by IndexedDB or PouchDB. */
 export function storageFailure<T = never>(error: unknown): JobsResult<T> {
-  if (isQuotaError(error)) return failWith('storage.full');
+  if (isQuotaError(error) || pouchReason(error) !== undefined) return failWith('storage.full');
   const name = errorName(error);
   if (name === 'InvalidStateError') return failWith('storage.closed');
   return failWith('storage.failed', { name });

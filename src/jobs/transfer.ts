@@ -8,7 +8,7 @@ import { jobsToCsv, type CsvOptions } from './csv';
 import type { ImportReport } from './merge';
 import { succeed, type JobsResult } from './result';
 import { localIsoDate } from './shift';
-import type { CorruptRecord, JobStore } from './store';
+import type { CorruptRecord, ImportOptions, JobStore } from './store';
 
 export interface ExportFile {
   text: string;
@@ -25,15 +25,24 @@ export async function exportBackup(
 ): Promise<JobsResult<ExportFile>> {
   const all = await store.readAll();
   if (!all.ok) return all;
-  const text = backupToJson(createBackup(all.value.jobs, appVersion, now));
+  const history = await store.history();
+  if (!history.ok) return history;
+  const text = backupToJson(createBackup(all.value.jobs, appVersion, now, history.value));
   return succeed({ text, jobCount: all.value.jobs.length, skipped: all.value.corrupt });
 }
 
-/** Checks the whole file, then merges it into the log in one transaction (newest `updatedAt` wins). */
-export async function importBackup(store: JobStore, text: string): Promise<JobsResult<ImportReport>> {
+/** Checks the whole file, then merges it into the log field by field (`JobStore.merge`). */
+export async function importBackup(
+  store: JobStore,
+  text: string,
+  options: Omit<ImportOptions, 'history'> = {},
+): Promise<JobsResult<ImportReport>> {
   const backup = parseBackup(text);
   if (!backup.ok) return backup;
-  return store.merge(backup.value.jobs);
+  return store.merge(backup.value.jobs, {
+    ...options,
+    ...(backup.value.history ? { history: backup.value.history } : {}),
+  });
 }
 
 /** The whole log, oldest first, as CSV. */

@@ -20,7 +20,7 @@ import {
   smallTargets,
   waitUntilOfflineReady,
 } from './browser';
-import { backupText, demoLog, importFile, movedTo, storedRecords, wipeLog } from './logData';
+import { backupText, demoLog, importFile, importReport, movedTo, storedRecords, wipeLog } from './logData';
 
 const { version } = JSON.parse(readFileSync('package.json', 'utf8')) as { version: string };
 
@@ -249,10 +249,7 @@ describe('job log', () => {
     const { context, recorder } = await phoneContext(browser);
     const page = await context.newPage();
     await openScreen(page, 'log');
-    assert.equal(
-      await importFile(page, backupText(demoLog(40, 5))),
-      'Backup read: 40 added, 0 updated, 0 unchanged, 0 kept because the copy on this device is newer.',
-    );
+    assert.equal(await importFile(page, backupText(demoLog(40, 5))), importReport(40, 0, 0));
     const before = await storedRecords(page);
     assert.equal(before.length, 40);
 
@@ -276,15 +273,9 @@ describe('job log', () => {
     await page.reload();
     await page.waitForSelector('#files-import-input');
     assert.deepEqual(await storedRecords(page), []);
-    assert.equal(
-      await importFile(page, backupJson),
-      'Backup read: 40 added, 0 updated, 0 unchanged, 0 kept because the copy on this device is newer.',
-    );
+    assert.equal(await importFile(page, backupJson), importReport(40, 0, 0));
     assert.deepEqual(await storedRecords(page), before);
-    assert.equal(
-      await importFile(page, backupJson),
-      'Backup read: 0 added, 0 updated, 40 unchanged, 0 kept because the copy on this device is newer.',
-    );
+    assert.equal(await importFile(page, backupJson), importReport(0, 0, 40));
 
     const broken = JSON.parse(backupJson) as { jobs: Record<string, unknown>[] };
     broken.jobs[3]!.operator = 'M1';
@@ -369,7 +360,11 @@ describe('job log', () => {
       (await storedRecords(page)).map((r) => r.workOrder),
       ['WO-FULL-1'],
     );
-    assert.deepEqual(recorder.problems, []);
+    // PouchDB itself logs the failed transaction it reports; the app words it (checked above).
+    assert.deepEqual(
+      recorder.problems.filter((p) => !p.includes('Database has a global failure QuotaExceededError')),
+      [],
+    );
     await context.close();
   });
 

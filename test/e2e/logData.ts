@@ -9,7 +9,8 @@ import { demoJobs } from '../../src/app/log/demo/demoLog';
 import type { Job } from '../../src/jobs/schema';
 import { DEFAULT_SHIFT_CONFIG, shiftOf } from '../../src/jobs/shift';
 
-export const DB_NAME = 'casefront-job-log';
+/** The earlier log's own IndexedDB database (moved into the document database once). */
+export const LEGACY_DB_NAME = 'casefront-job-log';
 
 /** Moves a job to `createdMs` (and its shift with it), keeping it valid. */
 export function movedTo(job: Job, createdMs: number): Job {
@@ -55,14 +56,20 @@ export async function importFile(page: Page, text: string, name = 'casefront-job
   return (await report.textContent()) ?? '';
 }
 
-/** Every record in the browser's job log, exactly as stored, sorted by id. */
-export function storedRecords(page: Page): Promise<Record<string, unknown>[]> {
+/** The log's database in the browser: PouchDB's IndexedDB adapter names it with its prefix. */
+export const POUCH_DB_NAME = '_pouch_casefront-log';
+
+/**
+ * Every job document in the browser's log as IndexedDB holds it (the winning revision of each,
+ * read from PouchDB's own stores, not through the app), sorted by id.
+ */
+export function storedDocs(page: Page): Promise<Record<string, unknown>[]> {
   return page.evaluate(
     (name) =>
       new Promise<Record<string, unknown>[]>((resolve, reject) => {
         const open = indexedDB.open(name);
         let absent = false;
-        // No log yet: do not create an empty database that the app would then have to upgrade.
+        // No log yet: do not create an empty database.
         open.onupgradeneeded = () => {
           absent = true;
           open.transaction?.abort();
@@ -70,24 +77,42 @@ export function storedRecords(page: Page): Promise<Record<string, unknown>[]> {
         open.onerror = () => (absent ? resolve([]) : reject(open.error ?? new Error('the log did not open')));
         open.onsuccess = () => {
           const db = open.result;
-          if (!db.objectStoreNames.contains('jobs')) {
-            db.close();
-            resolve([]);
-            return;
-          }
-          const all = db.transaction('jobs').objectStore('jobs').getAll();
+          const tx = db.transaction(['document-store', 'by-sequence']);
+          const all = tx.objectStore('document-store').getAll();
           all.onsuccess = () => {
-            db.close();
-            resolve((all.result as Record<string, unknown>[]).sort((a, b) => (String(a.id) < String(b.id) ? -1 : 1)));
+            const metas = (all.result as { id: string; winningRev: string; deletedOrLocal: string }[]).filter(
+              (m) => m.deletedOrLocal === '0' && !m.id.startsWith('_design/'),
+            );
+            const bodies = tx.objectStore('by-sequence').index('_doc_id_rev');
+            const docs: Record<string, unknown>[] = [];
+            let pending = metas.length;
+            if (pending === 0) resolve([]);
+            for (const meta of metas) {
+              const get = bodies.get(`${meta.id}::${meta.winningRev}`);
+              get.onsuccess = () => {
+                const { _doc_id_rev: _key, ...body } = get.result as Record<string, unknown>;
+                docs.push({ _id: meta.id, _rev: meta.winningRev, ...body });
+                if (--pending === 0) {
+                  db.close();
+                  resolve(docs.sort((a, b) => (String(a._id) < String(b._id) ? -1 : 1)));
+                }
+              };
+              get.onerror = () => reject(get.error ?? new Error('a document could not be read'));
+            }
           };
           all.onerror = () => reject(all.error ?? new Error('the log could not be read'));
         };
       }),
-    DB_NAME,
+    POUCH_DB_NAME,
   );
 }
 
-/** Deletes the job log's database (the app closes its connection when asked). */
+/** Every job record in the browser's log, exactly as stored, sorted by id. */
+export async function storedRecords(page: Page): Promise<Record<string, unknown>[]> {
+  return (await storedDocs(page)).map((doc) => doc.job as Record<string, unknown>);
+}
+
+/** Deletes the job log's database (PouchDB closes its connection when asked). */
 export function wipeLog(page: Page): Promise<void> {
   return page.evaluate(
     (name) =>
@@ -96,6 +121,11 @@ export function wipeLog(page: Page): Promise<void> {
         request.onsuccess = () => resolve();
         request.onerror = () => reject(request.error ?? new Error('the log could not be deleted'));
       }),
-    DB_NAME,
+    POUCH_DB_NAME,
   );
+}
+
+/** The import report's words for a file that only adds or only repeats (English). */
+export function importReport(added: number, updated: number, unchanged: number, conflicts = 0, clamped = 0): string {
+  return `Backup read: ${added} added, ${updated} merged, ${unchanged} unchanged. Changed on two devices (both values kept, shown on the job): ${conflicts}. Times in the future set to now: ${clamped}.`;
 }

@@ -50,6 +50,8 @@ async function waitForServer(url: string, timeoutMs: number): Promise<void> {
 
 /** `--perf`: the throttled responsiveness measurements (`*.perf.ts`) instead of the browser tests. */
 const SUFFIX = process.argv.includes('--perf') ? '.perf.ts' : '.e2e.ts';
+/** Other arguments: run only the files whose name contains one of them (`npx tsx test/e2e/run.ts log`). */
+const only = process.argv.slice(2).filter((arg) => !arg.startsWith('--'));
 
 const vite = join('node_modules', 'vite', 'bin', 'vite.js');
 if (!existsSync(join('dist', 'index.html'))) {
@@ -72,7 +74,7 @@ const started = Date.now();
 try {
   await waitForServer(url, 20_000);
   const files = readdirSync(join('test', 'e2e'))
-    .filter((f) => f.endsWith(SUFFIX))
+    .filter((f) => f.endsWith(SUFFIX) && (only.length === 0 || only.some((part) => f.includes(part))))
     .sort()
     .map((f) => join('test', 'e2e', f));
   const run = spawnSync(

@@ -24,24 +24,29 @@ describe('JSON backup: export, wipe, import', () => {
       exportedAt: END.toISOString(),
       appVersion: '0.1.0',
     });
-    unwrap(await store.clear());
-    expect(unwrap(await store.count())).toBe(0);
-    expect(unwrap(await importBackup(store, file.text))).toEqual({
+    // A new device (or a wiped one) reads the file back.
+    const other = await freshStore();
+    expect(unwrap(await importBackup(other, file.text))).toEqual({
       added: 121,
       updated: 0,
       unchanged: 0,
-      skippedOlder: 0,
+      conflicts: 0,
+      clamped: 0,
     });
-    expect(await snapshot(store)).toEqual(before);
-    // Importing the same file again changes nothing.
-    expect(unwrap(await importBackup(store, file.text))).toEqual({
-      added: 0,
-      updated: 0,
-      unchanged: 121,
-      skippedOlder: 0,
-    });
-    expect(await snapshot(store)).toEqual(before);
+    expect(await snapshot(other)).toEqual(before);
+    // Importing the same file again changes nothing, here or on the device that wrote it.
+    for (const target of [other, store]) {
+      expect(unwrap(await importBackup(target, file.text))).toEqual({
+        added: 0,
+        updated: 0,
+        unchanged: 121,
+        conflicts: 0,
+        clamped: 0,
+      });
+    }
+    expect(await snapshot(other)).toEqual(before);
     store.close();
+    other.close();
   });
 });
 
@@ -52,42 +57,116 @@ describe('file names', () => {
   });
 });
 
-describe('import merge: same id, newest updatedAt wins', () => {
-  it('counts added, updated, unchanged and skippedOlder, and keeps the newer copy each time', async () => {
+/** Device A's log with one pinion job, and device B holding a copy read from A's backup. */
+async function twoDevices() {
+  const a = await freshStore();
+  const b = await freshStore();
+  const job = unwrap(await a.add(pinionDraft({ status: 'inFurnace' }), { now: new Date('2025-03-05T07:00:00.000Z') }));
+  unwrap(await importBackup(b, unwrap(await exportBackup(a, 'x')).text));
+  return { a, b, job };
+}
+
+describe('import merge: field by field, never by clock', () => {
+  it('the lab result recorded on A and the status set later on B both survive B’s backup read into A', async () => {
+    const { a, b, job } = await twoDevices();
+    unwrap(await a.update(job.id, { lab: { ecdMm: 0.77 } }, { now: new Date('2025-03-05T12:00:00.000Z') }));
+    unwrap(await b.update(job.id, { status: 'done' }, { now: new Date('2025-03-05T13:00:00.000Z') }));
+    const report = unwrap(await importBackup(a, unwrap(await exportBackup(b, 'x')).text));
+    expect(report).toEqual({ added: 0, updated: 1, unchanged: 0, conflicts: 0, clamped: 0 });
+    expect(unwrap(await a.get(job.id))).toMatchObject({ status: 'done', lab: { ecdMm: 0.77 } });
+    // And the other way round.
+    unwrap(await importBackup(b, unwrap(await exportBackup(a, 'x')).text));
+    expect(unwrap(await b.get(job.id))).toMatchObject({ status: 'done', lab: { ecdMm: 0.77 } });
+    expect(unwrap(await b.entry(job.id)).open).toEqual({});
+  });
+
+  it('with A’s clock 2 h fast the outcome is the same: the later lab result on B is not dropped', async () => {
+    const { a, b, job } = await twoDevices();
+    unwrap(await a.update(job.id, { status: 'done' }, { now: new Date('2025-03-05T14:00:00.000Z') })); // 12:00 real
+    unwrap(await b.update(job.id, { lab: { ecdMm: 0.81 } }, { now: new Date('2025-03-05T13:00:00.000Z') }));
+    unwrap(await importBackup(a, unwrap(await exportBackup(b, 'x')).text));
+    unwrap(await importBackup(b, unwrap(await exportBackup(a, 'x')).text));
+    for (const device of [a, b]) {
+      expect(unwrap(await device.get(job.id))).toMatchObject({ status: 'done', lab: { ecdMm: 0.81 } });
+    }
+  });
+
+  it('the same field changed on both keeps both values, shown as open, until a person picks one', async () => {
+    const { a, b, job } = await twoDevices();
+    unwrap(await a.update(job.id, { lab: { ecdMm: 0.77 } }));
+    unwrap(await b.update(job.id, { lab: { ecdMm: 0.79 } }));
+    const report = unwrap(await importBackup(a, unwrap(await exportBackup(b, 'x')).text));
+    expect(report.conflicts).toBe(1);
+    const entry = unwrap(await a.entry(job.id));
+    expect(entry.job.lab).toEqual({ ecdMm: 0.77 });
+    expect(entry.open.lab?.map((alt) => alt.value)).toEqual([{ ecdMm: 0.77 }, { ecdMm: 0.79 }]);
+    // B reads A's file: the same two values, open there too.
+    unwrap(await importBackup(b, unwrap(await exportBackup(a, 'x')).text));
+    expect(
+      unwrap(await b.entry(job.id))
+        .open.lab?.map((alt) => alt.value)
+        .sort((x, y) => JSON.stringify(x).localeCompare(JSON.stringify(y))),
+    ).toEqual([{ ecdMm: 0.77 }, { ecdMm: 0.79 }]);
+    // The person on A picks 0.79; B reads that and agrees, nothing left open anywhere.
+    unwrap(await a.update(job.id, { lab: { ecdMm: 0.79 } }, { baseRev: entry.rev, settle: ['lab'] }));
+    expect(unwrap(await a.entry(job.id)).open).toEqual({});
+    unwrap(await importBackup(b, unwrap(await exportBackup(a, 'x')).text));
+    const settled = unwrap(await b.entry(job.id));
+    expect(settled.open).toEqual({});
+    expect(settled.job.lab).toEqual({ ecdMm: 0.79 });
+  });
+
+  it('a file without change history: equal jobs are unchanged, a differing field is kept both ways', async () => {
     const store = await freshStore();
-    const [a, b, c] = demoJobs({ count: 3, end: END, seed: 4 });
-    unwrap(await store.putMany([a, b, c]));
-    const newerB: Job = { ...b!, notes: 'lab result added on the office PC', updatedAt: '2099-01-01T00:00:00.000Z' };
-    const olderC: Job = { ...c!, notes: 'stale copy', updatedAt: '2000-01-01T00:00:00.000Z' };
-    const sameTimeC: Job = { ...c!, notes: 'different text, same time' };
-    const fresh: Job = { ...a!, id: crypto.randomUUID(), workOrder: 'WO-NEW' };
-    const text = backupToJson(createBackup([a!, newerB, olderC, fresh], 'x'));
-    expect(unwrap(await importBackup(store, text))).toEqual({ added: 1, updated: 1, unchanged: 1, skippedOlder: 1 });
-    expect(unwrap(await store.get(b!.id)).notes).toBe(newerB.notes);
-    expect(unwrap(await store.get(c!.id))).toEqual(c);
-    expect(unwrap(await store.get(fresh.id))).toEqual(fresh);
-    // Equal time but different content is not newer: the local copy stays.
-    expect(unwrap(await importBackup(store, backupToJson(createBackup([sameTimeC], 'x'))))).toEqual({
-      added: 0,
-      updated: 0,
-      unchanged: 0,
-      skippedOlder: 1,
+    const [x, y] = demoJobs({ count: 2, end: END, seed: 4 });
+    unwrap(await store.putMany([x, y]));
+    const edited: Job = { ...y!, notes: 'written on the office PC', updatedAt: '2000-01-01T00:00:00.000Z' };
+    const fresh: Job = { ...x!, id: crypto.randomUUID(), workOrder: 'WO-NEW' };
+    const text = backupToJson(createBackup([x!, edited, fresh], 'x'));
+    expect(unwrap(await importBackup(store, text))).toEqual({
+      added: 1,
+      updated: 1,
+      unchanged: 1,
+      conflicts: 1,
+      clamped: 0,
     });
-    expect(unwrap(await store.get(c!.id))).toEqual(c);
+    const entry = unwrap(await store.entry(y!.id));
+    expect(entry.job.notes).toBe(y!.notes);
+    expect(entry.open.notes?.map((alt) => alt.value)).toEqual([y!.notes, edited.notes]);
+    expect(unwrap(await store.get(fresh.id))).toEqual(fresh);
     store.close();
   });
 
-  it('an id repeated inside the file counts once, with its newest version', async () => {
+  it('timestamps far in the future are set to the time of the import, so the job sorts and edits normally', async () => {
     const store = await freshStore();
-    const [a] = demoJobs({ count: 1, end: END, seed: 8 });
-    const later = { ...a!, status: 'rejected' as const, updatedAt: '2099-01-01T00:00:00.000Z' };
-    expect(unwrap(await importBackup(store, backupToJson(createBackup([later, a!], 'x'))))).toEqual({
+    const [x] = demoJobs({ count: 1, end: END, seed: 8 });
+    const wild: Job = { ...x!, updatedAt: '2099-01-01T00:00:00.000Z' };
+    const now = new Date('2025-07-01T08:00:00.000Z');
+    expect(unwrap(await importBackup(store, backupToJson(createBackup([wild], 'x')), { now }))).toEqual({
       added: 1,
       updated: 0,
       unchanged: 0,
-      skippedOlder: 0,
+      conflicts: 0,
+      clamped: 1,
     });
-    expect(unwrap(await store.get(a!.id)).status).toBe('rejected');
+    expect(unwrap(await store.get(x!.id)).updatedAt).toBe(now.toISOString());
+    const later = new Date('2025-07-01T09:00:00.000Z');
+    expect(unwrap(await store.update(x!.id, { notes: 'checked' }, { now: later })).updatedAt).toBe(later.toISOString());
+    store.close();
+  });
+
+  it('an id repeated inside the file counts once', async () => {
+    const store = await freshStore();
+    const [x] = demoJobs({ count: 1, end: END, seed: 8 });
+    const later = { ...x!, status: 'rejected' as const };
+    expect(unwrap(await importBackup(store, backupToJson(createBackup([x!, later], 'x'))))).toEqual({
+      added: 1,
+      updated: 0,
+      unchanged: 0,
+      conflicts: 0,
+      clamped: 0,
+    });
+    expect(unwrap(await store.count())).toBe(1);
     store.close();
   });
 });

@@ -1,6 +1,7 @@
 /** Shared set-up for the job log tests: a fresh database per test and a valid demo-plant job. */
 import 'fake-indexeddb/auto';
 import { expect } from 'vitest';
+import { memoryPouch } from '../memoryPouch';
 import type { JobDraft } from '../../src/jobs/schema';
 import { openJobStore, type JobStore } from '../../src/jobs/store';
 import type { JobsResult } from '../../src/jobs/result';
@@ -14,8 +15,9 @@ export function unwrap<T>(result: JobsResult<T>): T {
   return result.value;
 }
 
-export async function freshStore(name = uniqueDbName()): Promise<JobStore> {
-  return unwrap(await openJobStore({ name }));
+/** A store on a fresh in-memory database; `legacyName` is the earlier IndexedDB log to move in. */
+export async function freshStore(name = uniqueDbName(), legacyName: string | false = false): Promise<JobStore> {
+  return unwrap(await openJobStore({ name, pouch: memoryPouch, legacyName }));
 }
 
 /** A pinion load on F1 (demo scenario), closed-form time request. */

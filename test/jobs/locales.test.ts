@@ -40,7 +40,8 @@ describe('jobs section of the locales', () => {
     added: 1,
     updated: 2,
     unchanged: 3,
-    skippedOlder: 4,
+    conflicts: 4,
+    clamped: 5,
   };
 
   it.each(LANGUAGES)('every code, status, shift and notice has a full sentence in %s', (language) => {

@@ -1,10 +1,21 @@
 import { openDB } from 'idb';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { INDEX, JOBS_STORE, LATEST_DB_VERSION, runMigrations } from '../../src/jobs/migrations';
+import { JOBS_STORE, LATEST_DB_VERSION, runMigrations } from '../../src/jobs/migrations';
 import { jobFromV1, type JobV1 } from '../../src/jobs/migrations/v1';
 import { JOB_RECORD_VERSION } from '../../src/jobs/schema';
+import { demoJobs } from '../../src/app/log/demo/demoLog';
 import { openJobStore } from '../../src/jobs/store';
+import { memoryPouch, withWrites } from '../memoryPouch';
 import { uniqueDbName, unwrap } from './helpers';
+
+/** Opens the new log on a fresh database, moving in the earlier log named `legacyName`. */
+const openMoving = (legacyName: string, extra: Partial<Parameters<typeof openJobStore>[0]> = {}) =>
+  openJobStore({ name: uniqueDbName(), pouch: memoryPouch, legacyName, ...extra });
+
+/** Whether an IndexedDB database of that name still exists. */
+async function exists(name: string): Promise<boolean> {
+  return (await indexedDB.databases()).some((db) => db.name === name);
+}
 
 const COMPOSITION_8620 = { Si: 0.25, Mn: 0.8, Cr: 0.5, Ni: 0.55, Mo: 0.2 };
 
@@ -120,17 +131,18 @@ async function writeV1Database(name: string, records: readonly unknown[]): Promi
 
 afterEach(() => vi.restoreAllMocks());
 
-describe('job log database: version 1 → 2', () => {
-  it('the record version and the database version agree', () => {
+describe('the earlier log (IndexedDB, version 1 → 2) moved into the new one', () => {
+  it('the record version and the earlier database version agree', () => {
     expect(LATEST_DB_VERSION).toBe(JOB_RECORD_VERSION);
   });
 
   it('migrates every v1 fixture without loss: each v1 value is found at its v2 place', async () => {
     const name = uniqueDbName();
     await writeV1Database(name, V1_FIXTURES);
-    const store = unwrap(await openJobStore({ name }));
+    const store = unwrap(await openMoving(name));
     const { jobs, corrupt } = unwrap(await store.readAll());
     expect(corrupt).toEqual([]);
+    expect(store.migration).toMatchObject({ total: 4, moved: 4, damaged: 0, verified: true });
     expect(jobs).toHaveLength(V1_FIXTURES.length);
     for (const old of V1_FIXTURES) {
       const job = unwrap(await store.get(old.id));
@@ -165,7 +177,7 @@ describe('job log database: version 1 → 2', () => {
   it('maps statuses to the new spelling and grades to id + name (free names kept as written)', async () => {
     const name = uniqueDbName();
     await writeV1Database(name, V1_FIXTURES);
-    const store = unwrap(await openJobStore({ name }));
+    const store = unwrap(await openMoving(name));
     const byId = Object.fromEntries(unwrap(await store.readAll()).jobs.map((j) => [j.id, j]));
     expect(V1_FIXTURES.map((f) => byId[f.id]!.status)).toEqual(['inFurnace', 'onHold', 'done', 'rejected']);
     expect(byId[V1_FIXTURES[0]!.id]!.steel).toEqual({
@@ -179,34 +191,72 @@ describe('job log database: version 1 → 2', () => {
     store.close();
   });
 
-  it('adds the filter indexes, and the filters find migrated records', async () => {
+  it('the filters find moved records; the old database is deleted once every record was found again', async () => {
     const name = uniqueDbName();
     await writeV1Database(name, V1_FIXTURES);
-    const store = unwrap(await openJobStore({ name }));
+    const store = unwrap(await openMoving(name));
     expect(unwrap(await store.list({ status: 'onHold' })).jobs.map((j) => j.id)).toEqual([V1_FIXTURES[1]!.id]);
     expect(unwrap(await store.list({ partNumber: 'KR-2231' })).jobs).toHaveLength(2);
     expect(
       unwrap(await store.list({ furnace: 'F1', fromDate: '2025-01-21', toDate: '2025-01-31' })).jobs.map((j) => j.id),
     ).toEqual([V1_FIXTURES[3]!.id]);
+    expect(await exists(name)).toBe(false);
     store.close();
-    const raw = await openDB(name);
-    expect(raw.version).toBe(LATEST_DB_VERSION);
-    expect([...raw.transaction(JOBS_STORE).store.indexNames].sort()).toEqual(Object.values(INDEX).sort());
-    raw.close();
   });
 
-  it('a v1 record that cannot convert stays stored as it was and is reported, not dropped', async () => {
+  it('a v1 record that cannot convert is kept aside as damaged with its reason, exportable and deletable', async () => {
     const name = uniqueDbName();
     await writeV1Database(name, [...V1_FIXTURES, V1_UNCONVERTIBLE]);
-    const store = unwrap(await openJobStore({ name }));
+    const store = unwrap(await openMoving(name));
+    expect(store.migration).toMatchObject({ total: 5, moved: 4, damaged: 1, verified: true });
     const { jobs, corrupt } = unwrap(await store.readAll());
     expect(jobs).toHaveLength(V1_FIXTURES.length);
-    expect(corrupt).toHaveLength(1);
-    expect(corrupt[0]!.key).toBe(V1_UNCONVERTIBLE.id);
+    // Still in its version 1 shape: the problems name the fields version 2 expects.
+    expect(corrupt).toEqual([
+      {
+        key: V1_UNCONVERTIBLE.id,
+        issues: expect.arrayContaining([expect.objectContaining({ path: 'operator', problem: 'missing' })]),
+        source: 'migration',
+      },
+    ]);
+    const exported = unwrap(await store.damagedExport());
+    expect(exported).toHaveLength(1);
+    expect(exported[0]!.raw).toEqual(V1_UNCONVERTIBLE);
+    unwrap(await store.deleteDamaged(V1_UNCONVERTIBLE.id));
+    expect(unwrap(await store.readAll()).corrupt).toEqual([]);
+    expect((await store.deleteDamaged(V1_UNCONVERTIBLE.id)).ok).toBe(false);
     store.close();
-    const raw = await openDB(name);
-    expect(await raw.get(JOBS_STORE, V1_UNCONVERTIBLE.id)).toEqual(V1_UNCONVERTIBLE);
-    raw.close();
+  });
+
+  it('1 000 version-2 records with 40 damaged: all counted, none twice after a move cut short, old log kept until then', async () => {
+    const name = uniqueDbName();
+    const jobs = demoJobs({ count: 1000, end: new Date('2025-06-30T12:00:00Z'), seed: 9 });
+    const records: Record<string, unknown>[] = jobs.map((job, i) => (i % 25 === 3 ? { ...job, operator: 42 } : job));
+    const db = await openDB(name, 2, { upgrade: (d, old, _n, tx) => void runMigrations(d, tx, old, 2) });
+    for (const record of records) await db.put(JOBS_STORE, record);
+    db.close();
+    // The first attempt stops after the first batch (as a tab closed mid-way would): nothing is lost.
+    const pouchName = uniqueDbName();
+    let writes = 0;
+    const cutShort = (dbName: string) => {
+      const real = memoryPouch(dbName);
+      return withWrites(real, {
+        bulkDocs: (docs, options) =>
+          ++writes === 2 ? Promise.reject(new DOMException('gone', 'AbortError')) : real.bulkDocs(docs, options),
+      });
+    };
+    const first = await openJobStore({ name: pouchName, pouch: cutShort, legacyName: name });
+    expect(first.ok).toBe(false);
+    expect(await exists(name)).toBe(true);
+    const store = unwrap(await openJobStore({ name: pouchName, pouch: memoryPouch, legacyName: name }));
+    expect(store.migration).toMatchObject({ total: 1000, moved: 960, damaged: 40, verified: true });
+    const all = unwrap(await store.readAll());
+    expect(all.jobs).toHaveLength(960);
+    expect(new Set(all.jobs.map((j) => j.id)).size).toBe(960);
+    expect(all.corrupt).toHaveLength(40);
+    expect(all.corrupt.every((c) => c.issues[0]?.path === 'operator')).toBe(true);
+    expect(await exists(name)).toBe(false);
+    store.close();
   });
 
   it('an upgrade that fails part-way is rolled back: still version 1, every record untouched', async () => {
@@ -218,7 +268,7 @@ describe('job log database: version 1 → 2', () => {
       if (++updates === 3) throw new DOMException('simulated failure', 'UnknownError');
       return original.call(this, value);
     });
-    const result = await openJobStore({ name });
+    const result = await openMoving(name);
     expect(result.ok).toBe(false);
     vi.restoreAllMocks();
     const raw = await openDB(name);
@@ -227,7 +277,7 @@ describe('job log database: version 1 → 2', () => {
     expect(stored.sort((a, b) => (a.id < b.id ? -1 : 1))).toEqual(V1_FIXTURES);
     raw.close();
     // Once the fault is gone the upgrade runs normally.
-    const store = unwrap(await openJobStore({ name }));
+    const store = unwrap(await openMoving(name));
     expect(unwrap(await store.readAll()).jobs).toHaveLength(V1_FIXTURES.length);
     store.close();
   });
@@ -237,7 +287,7 @@ describe('job log database: version 1 → 2', () => {
     await writeV1Database(name, V1_FIXTURES);
     const oldTab = await openDB(name, 1);
     const blocked = vi.fn(() => oldTab.close());
-    const store = unwrap(await openJobStore({ name, onBlocked: blocked }));
+    const store = unwrap(await openMoving(name, { onBlocked: blocked }));
     expect(blocked).toHaveBeenCalled();
     expect(unwrap(await store.count())).toBe(V1_FIXTURES.length);
     store.close();

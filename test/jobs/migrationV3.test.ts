@@ -12,7 +12,11 @@ import { JOBS_STORE, LATEST_DB_VERSION, runMigrations } from '../../src/jobs/mig
 import { jobFromV2 } from '../../src/jobs/migrations/v2';
 import { JOB_RECORD_VERSION, type Job } from '../../src/jobs/schema';
 import { openJobStore } from '../../src/jobs/store';
+import { memoryPouch } from '../memoryPouch';
 import { uniqueDbName, unwrap } from './helpers';
+
+/** Opens the log on a fresh database, moving in the earlier IndexedDB log named `legacyName`. */
+const openMoving = (legacyName: string) => openJobStore({ name: uniqueDbName(), pouch: memoryPouch, legacyName });
 
 const END = new Date('2025-06-30T12:00:00.000Z');
 const example = (file: string) =>
@@ -127,7 +131,8 @@ describe('job log database: version 2 → 3', () => {
   it('every v2 fixture migrates with nothing lost or changed, and reads back the same after a write', async () => {
     const name = uniqueDbName();
     await writeV2Database(name, V2_FIXTURES);
-    const store = unwrap(await openJobStore({ name }));
+    const store = unwrap(await openMoving(name));
+    expect(store.migration).toMatchObject({ total: V2_FIXTURES.length, moved: V2_FIXTURES.length, verified: true });
     const { jobs, corrupt } = unwrap(await store.readAll());
     expect(corrupt).toEqual([]);
     expect(jobs).toHaveLength(V2_FIXTURES.length);
@@ -138,22 +143,18 @@ describe('job log database: version 2 → 3', () => {
     unwrap(await store.putMany(jobs));
     expect(byId(unwrap(await store.readAll()).jobs)).toEqual(byId(V2_FIXTURES));
     store.close();
-    const raw = await openDB(name);
-    expect(raw.version).toBe(3);
-    raw.close();
   });
 
-  it('a v2 record version 3 refuses stays stored as it was and is reported, not dropped', async () => {
+  it('a v2 record version 3 refuses is kept aside as it was and reported, not dropped', async () => {
     const name = uniqueDbName();
     await writeV2Database(name, [...V2_FIXTURES, V2_OUT_OF_RANGE]);
-    const store = unwrap(await openJobStore({ name }));
+    const store = unwrap(await openMoving(name));
     const { jobs, corrupt } = unwrap(await store.readAll());
     expect(jobs).toHaveLength(V2_FIXTURES.length);
     expect(corrupt.map((c) => c.key)).toEqual([V2_OUT_OF_RANGE.id]);
+    const exported = unwrap(await store.damagedExport());
+    expect(exported.map((d) => d.raw)).toEqual([V2_OUT_OF_RANGE]);
     store.close();
-    const raw = await openDB(name);
-    expect(await raw.get(JOBS_STORE, V2_OUT_OF_RANGE.id)).toEqual(V2_OUT_OF_RANGE);
-    raw.close();
   });
 
   it('a version-2 backup file imports with the same jobs; a version-3 file of them reads back equal', () => {

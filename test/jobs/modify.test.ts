@@ -1,7 +1,7 @@
 /** store.modify: an edit computed from the stored job at the moment of writing, in one transaction. */
 import { describe, expect, it } from 'vitest';
-import { JOBS_STORE } from '../../src/jobs/migrations';
 import { persistentStorageStatus } from '../../src/jobs/persist';
+import { memoryPouch } from '../memoryPouch';
 import { freshStore, pinionDraft, uniqueDbName, unwrap } from './helpers';
 
 const appendLine = (notes: string, line: string) => (notes ? `${notes}\n${line}` : line);
@@ -42,17 +42,10 @@ describe('JobStore.modify', () => {
     const missing = await store.modify('0b7f3c1e-2a4d-4e5f-8a9b-1c2d3e4f5a6b', () => ({ notes: 'x' }));
     expect(!missing.ok && missing.error.code).toBe('record.notFound');
     const job = unwrap(await store.add(pinionDraft()));
-    // Damage the record behind the store's back (as another program or a bad disk might).
-    const raw = await new Promise<IDBDatabase>((resolve) => {
-      const request = indexedDB.open(name);
-      request.onsuccess = () => resolve(request.result);
-    });
-    await new Promise<void>((resolve) => {
-      const tx = raw.transaction(JOBS_STORE, 'readwrite');
-      tx.objectStore(JOBS_STORE).put({ ...job, operator: 42 });
-      tx.oncomplete = () => resolve();
-    });
-    raw.close();
+    // Damage the record behind the store's back (as another program or a newer app might).
+    const raw = memoryPouch(name);
+    const doc = await raw.get(job.id);
+    await raw.put({ ...doc, job: { ...(doc.job as object), operator: 42 } });
     let called = false;
     const damaged = await store.modify(job.id, () => {
       called = true;

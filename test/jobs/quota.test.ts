@@ -1,113 +1,80 @@
 /**
- * A full disk part-way through a write must leave the log exactly as it was and say so with
- * storage.full. The fault is injected into the Nth put/add of the transaction, in the three
- * ways browsers report it: the request fails (its error event aborts the transaction), the call
- * throws, or the transaction aborts after the request succeeded (as on commit).
+ * A full disk must be reported as storage.full with nothing half-written. PouchDB's IndexedDB
+ * adapter writes each call in one transaction and reports a full disk as its own error whose
+ * `reason` is the browser's `QuotaExceededError`; the fault is injected here at that boundary, on
+ * the database's write calls (the browser's own behaviour is covered by the browser test with
+ * Chromium's quota override).
  */
-import { afterEach, describe, expect, it, vi } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { backupToJson, createBackup } from '../../src/jobs/backup';
+import type { LogDatabase } from '../../src/jobs/pouch';
 import type { Job } from '../../src/jobs/schema';
-import type { JobStore } from '../../src/jobs/store';
+import { openJobStore, type JobStore } from '../../src/jobs/store';
 import { importBackup } from '../../src/jobs/transfer';
-import { freshStore, pinionDraft, snapshot, unwrap } from './helpers';
+import { memoryPouch, withWrites } from '../memoryPouch';
+import { pinionDraft, snapshot, uniqueDbName, unwrap } from './helpers';
 
-type Fault = 'requestFails' | 'callThrows' | 'transactionAborts';
-const FAULTS: Fault[] = ['requestFails', 'callThrows', 'transactionAborts'];
-
-/** fake-indexeddb's transaction internals, used only to fail a request as a browser would. */
-interface FakeTransactionInternals {
-  _execRequestAsync(job: { operation: () => unknown; source: unknown }): IDBRequest;
-  _abort(errorName: string): void;
-}
-
-function failNth(method: 'put' | 'add', n: number, fault: Fault): void {
-  let calls = 0;
-  const original = IDBObjectStore.prototype[method] as (this: IDBObjectStore, ...args: unknown[]) => IDBRequest;
-  vi.spyOn(IDBObjectStore.prototype, method).mockImplementation(function (this: IDBObjectStore, ...args: unknown[]) {
-    if (++calls !== n) return original.apply(this, args);
-    const quota = new DOMException('The quota has been exceeded.', 'QuotaExceededError');
-    const tx = this.transaction as unknown as FakeTransactionInternals;
-    if (fault === 'callThrows') throw quota;
-    if (fault === 'requestFails') {
-      return tx._execRequestAsync({
-        operation: () => {
-          throw quota;
-        },
-        source: this,
-      }) as IDBRequest<IDBValidKey>;
-    }
-    const request = original.apply(this, args);
-    request.addEventListener('success', () => tx._abort('QuotaExceededError'));
-    return request as IDBRequest<IDBValidKey>;
+/** As PouchDB's IndexedDB adapter reports an aborted transaction. */
+const quotaError = () =>
+  Object.assign(new Error('QuotaExceededError'), {
+    status: 500,
+    name: 'indexed_db_went_bad',
+    reason: 'QuotaExceededError',
   });
+
+interface Faults {
+  /** The error the next writes fail with; undefined: writes work. */
+  next?: () => Error;
 }
 
-afterEach(() => vi.restoreAllMocks());
-
-async function storeWithThreeJobs(): Promise<{ store: JobStore; jobs: Job[] }> {
-  const store = await freshStore();
+async function storeWithFaults(): Promise<{ store: JobStore; faults: Faults; jobs: Job[] }> {
+  const faults: Faults = {};
+  const pouch = (name: string): LogDatabase => {
+    const db = memoryPouch(name);
+    return withWrites(db, {
+      put: (doc) => (faults.next ? Promise.reject(faults.next()) : db.put(doc)),
+      bulkDocs: (docs, options) => (faults.next ? Promise.reject(faults.next()) : db.bulkDocs(docs, options)),
+    });
+  };
+  const store = unwrap(await openJobStore({ name: uniqueDbName(), pouch, legacyName: false }));
   const jobs: Job[] = [];
   for (const furnace of ['F1', 'F2', 'F3']) jobs.push(unwrap(await store.add(pinionDraft({ furnace }))));
-  return { store, jobs };
+  return { store, faults, jobs };
 }
 
 const newJob = (base: Job, i: number): Job => ({ ...base, id: crypto.randomUUID(), workOrder: `WO-NEW-${i}` });
 
 const FULL = { ok: false, error: { code: 'storage.full' } };
 
-/** Runs `failingWrites` on a log of three jobs with the fault armed, then checks nothing changed. */
-async function expectUnchangedAfter(failingWrites: (store: JobStore, jobs: Job[]) => Promise<void>): Promise<void> {
-  const { store, jobs } = await storeWithThreeJobs();
-  const before = await snapshot(store);
-  await failingWrites(store, jobs);
-  vi.restoreAllMocks();
-  expect(await snapshot(store)).toEqual(before);
-  store.close();
-}
+describe('storage full: nothing half-written, said in words', () => {
+  it('putMany, an import, an add and an edit: storage.full and every record as before', async () => {
+    const { store, faults, jobs } = await storeWithFaults();
+    const before = await snapshot(store);
+    faults.next = quotaError;
+    const edited = { ...jobs[0]!, notes: 'changed in the failed batch' };
+    expect(await store.putMany([edited, newJob(jobs[0]!, 1), newJob(jobs[0]!, 2)])).toEqual(FULL);
+    const newer = { ...jobs[1]!, status: 'done' as const };
+    const file = backupToJson(createBackup([newer, newJob(jobs[1]!, 1), newJob(jobs[1]!, 2)], 'test'));
+    expect(await importBackup(store, file)).toEqual(FULL);
+    expect(await store.add(pinionDraft())).toEqual(FULL);
+    expect(await store.update(jobs[2]!.id, { status: 'inFurnace' })).toEqual(FULL);
+    faults.next = undefined;
+    expect(await snapshot(store)).toEqual(before);
+    store.close();
+  });
 
-describe.each(FAULTS)('storage full (%s): nothing half-written', (fault) => {
-  it('putMany of five, failing at the third: storage.full and every record as before', () =>
-    expectUnchangedAfter(async (store, jobs) => {
-      const edited = { ...jobs[0]!, notes: 'changed in the failed batch' };
-      failNth('put', 3, fault);
-      const batch = [edited, newJob(jobs[0]!, 1), newJob(jobs[0]!, 2), newJob(jobs[0]!, 3), newJob(jobs[0]!, 4)];
-      expect(await store.putMany(batch)).toEqual(FULL);
-    }));
-
-  it('an import failing part-way: storage.full and the log unchanged', () =>
-    expectUnchangedAfter(async (store, jobs) => {
-      const newer = { ...jobs[1]!, status: 'done' as const, updatedAt: '2099-01-01T00:00:00.000Z' };
-      const file = backupToJson(
-        createBackup([newer, newJob(jobs[1]!, 1), newJob(jobs[1]!, 2), newJob(jobs[1]!, 3)], 'test'),
-      );
-      failNth('put', 3, fault);
-      expect(await importBackup(store, file)).toEqual(FULL);
-    }));
-
-  it('add and update: storage.full and no change', () =>
-    expectUnchangedAfter(async (store, jobs) => {
-      failNth('add', 1, fault);
-      expect(await store.add(pinionDraft())).toEqual(FULL);
-      failNth('put', 1, fault);
-      expect(await store.update(jobs[2]!.id, { status: 'inFurnace' })).toEqual(FULL);
-    }));
-});
-
-describe('after a full-disk failure', () => {
   it('the same write succeeds once space is back', async () => {
-    const { store, jobs } = await storeWithThreeJobs();
-    failNth('put', 1, 'requestFails');
+    const { store, faults, jobs } = await storeWithFaults();
+    faults.next = quotaError;
     expect((await store.update(jobs[0]!.id, { status: 'done' })).ok).toBe(false);
-    vi.restoreAllMocks();
+    faults.next = undefined;
     expect(unwrap(await store.update(jobs[0]!.id, { status: 'done' })).status).toBe('done');
     store.close();
   });
 
   it('other storage failures are reported by name, not as full', async () => {
-    const { store, jobs } = await storeWithThreeJobs();
-    vi.spyOn(IDBObjectStore.prototype, 'put').mockImplementation(() => {
-      throw new DOMException('disk error', 'UnknownError');
-    });
+    const { store, faults, jobs } = await storeWithFaults();
+    faults.next = () => new DOMException('disk error', 'UnknownError');
     expect(await store.update(jobs[0]!.id, { notes: 'x' })).toEqual({
       ok: false,
       error: { code: 'storage.failed', params: { name: 'UnknownError' } },

@@ -64,7 +64,8 @@ const LAZY_ONLY = [
   /node_modules\/idb\//,
   /node_modules\/valibot\//,
   /node_modules\/papaparse\//,
-  /src\/jobs\/(store|schema|migrations)/,
+  /node_modules\/pouchdb/,
+  /src\/jobs\/(store|schema|migrations|logIndex|fieldMerge|legacyLog)/,
 ];
 const misplaced = staticFiles.flatMap((file) => {
   const mapPath = join(dist, `${file}.map`);

@@ -5,6 +5,7 @@ import {
   describeJobsError,
   JOB_STATUSES,
   type Job,
+  type JobEntry,
   type JobStatus,
   type StoredTraverse,
 } from '../../jobs';
@@ -20,7 +21,9 @@ import { FormActions } from './FormActions';
 import { JobFields, jobFieldLabel } from './JobFields';
 import {
   changesOf,
+  EMPTY_JOB_FORM,
   formOfJob,
+  rebasedForm,
   missingFields,
   placeJobsError,
   placeMissing,
@@ -28,15 +31,18 @@ import {
   type PlacedErrors,
 } from './jobForm';
 import { comparisonRows, labRows, planRows, predictionRows } from './jobRows';
-import { hasLabDraft, LabEditor } from './LabEditor';
+import { LabEditor } from './LabEditor';
 import { TraverseFigures } from './traverse/TraverseFigures';
-import { useJob } from './useLog';
+import { clearDraft, hasDraft, readDraft, writeDraft } from './drafts';
+import { staleSentence } from './refusal';
+import { OpenChoices } from './OpenChoices';
+import { useJobEntry } from './useLog';
 
 type Mode = 'view' | 'edit' | 'lab';
 
 export function DetailView({ id }: { id: string }) {
   const { t, locale } = useScreenContext();
-  const loaded = useJob(id);
+  const loaded = useJobEntry(id);
   const back = (
     <a class="back-link" href={hrefFor('log')}>
       {t('app.log.detail.back')}
@@ -56,20 +62,26 @@ export function DetailView({ id }: { id: string }) {
       </>
     );
   }
-  const job = loaded.value;
   return (
     <>
       {back}
-      <JobPage key={job.id} job={job} locale={locale} />
+      <JobPage key={id} entry={loaded.value} locale={locale} />
     </>
   );
 }
 
-function JobPage({ job, locale }: { job: Job; locale: string }) {
+/** The form this tab left open on the job (kept across an update reload), else none. */
+function draftMode(jobId: string): Mode {
+  if (hasDraft('edit', jobId)) return 'edit';
+  if (hasDraft('lab', jobId)) return 'lab';
+  return 'view';
+}
+
+function JobPage({ entry, locale }: { entry: JobEntry; locale: string }) {
   const ctx = useScreenContext();
   const { t } = ctx;
-  // A lab form left unsaved (a reload, an update) opens again as it was typed.
-  const [mode, setMode] = useState<Mode>(() => (hasLabDraft(job) ? 'lab' : 'view'));
+  const job = entry.job;
+  const [mode, setMode] = useState<Mode>(() => draftMode(job.id));
   const [message, setMessage] = useState<string | undefined>(undefined);
   const [error, setError] = useState<string | undefined>(undefined);
   const wording = { t, show: ctx.show, locale };
@@ -79,9 +91,11 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
 
   const setStatus = async (status: JobStatus) => {
     setMessage(undefined);
-    const result = await writeToLog((store) => store.update(job.id, { status }));
+    setError(undefined);
+    // The tap was made on what this page shows: if the job moved on meanwhile, it is not applied blind.
+    const result = await writeToLog((store) => store.update(job.id, { status }, { baseRev: entry.rev }));
     if (result.ok) setMessage(t('app.log.detail.statusSaved', { status: t(`jobs.status.${status}`) }));
-    else setError(describeJobsError(t, result.error));
+    else setError(staleSentence(t, result.error));
   };
   const finish = (saved: boolean, text: string) => {
     setMode('view');
@@ -119,6 +133,7 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
       </p>
       <div aria-live="polite">{message && <p class="log-saved">{message}</p>}</div>
       <ErrorNote message={error} />
+      <OpenChoices entry={entry} onSaved={setMessage} />
 
       <div class="card">
         <Segmented
@@ -132,7 +147,7 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
       </div>
 
       {mode === 'edit' ? (
-        <JobEditor job={job} onDone={(saved) => finish(saved, t('app.log.detail.edited'))} />
+        <JobEditor entry={entry} onDone={(saved) => finish(saved, t('app.log.detail.edited'))} />
       ) : (
         <section class="card" aria-labelledby="job-load">
           <h2 id="job-load">{t('app.log.detail.load')}</h2>
@@ -148,7 +163,7 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
       )}
 
       {mode === 'lab' ? (
-        <LabEditor job={job} onDone={(saved) => finish(saved, t('app.log.lab.saved'))} />
+        <LabEditor entry={entry} onDone={(saved) => finish(saved, t('app.log.lab.saved'))} />
       ) : (
         <section class="card" aria-labelledby="job-lab">
           <h2 id="job-lab">{t('app.log.lab.heading')}</h2>
@@ -185,11 +200,22 @@ function JobPage({ job, locale }: { job: Job; locale: string }) {
   );
 }
 
-function JobEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void }) {
+function JobEditor({ entry, onDone }: { entry: JobEntry; onDone: (saved: boolean) => void }) {
   const { t } = useScreenContext();
-  const [form, setForm] = useState<JobForm>(() => formOfJob(job));
+  const id = entry.job.id;
+  // The copy the form was opened on (or, after a reload, the one its draft started from).
+  const [start] = useState(() => readDraft('edit', id, EMPTY_JOB_FORM));
+  const [base, setBase] = useState<{ rev: string; job: Job }>(() =>
+    start ? { rev: start.baseRev, job: start.base } : { rev: entry.rev, job: entry.job },
+  );
+  const [form, setFormState] = useState<JobForm>(() => (start ? start.form : formOfJob(entry.job)));
   const [placed, setPlaced] = useState<PlacedErrors | undefined>(undefined);
+  const [stale, setStale] = useState(false);
   const [busy, setBusy] = useState(false);
+  const setForm = (next: JobForm, from = base) => {
+    setFormState(next);
+    writeDraft('edit', id, { baseRev: from.rev, base: from.job, form: next });
+  };
   const save = async (event: Event) => {
     event.preventDefault();
     const missing = missingFields(form, true);
@@ -198,13 +224,27 @@ function JobEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void
       return;
     }
     setBusy(true);
-    const result = await writeToLog((store) => store.update(job.id, changesOf(job, form)));
+    const result = await writeToLog((store) => store.update(id, changesOf(base.job, form), { baseRev: base.rev }));
     setBusy(false);
     if (!result.ok) {
-      setPlaced(placeJobsError(t, result.error, jobFieldLabel(t)));
+      const where = placeJobsError(t, result.error, jobFieldLabel(t));
+      setStale(result.error.code === 'record.stale');
+      setPlaced(result.error.code === 'record.stale' ? { ...where, general: staleSentence(t, result.error) } : where);
       return;
     }
+    clearDraft('edit', id);
     onDone(true);
+  };
+  const rebase = () => {
+    const current = { rev: entry.rev, job: entry.job };
+    setBase(current);
+    setForm(rebasedForm(base.job, form, entry.job), current);
+    setStale(false);
+    setPlaced(undefined);
+  };
+  const cancel = () => {
+    clearDraft('edit', id);
+    onDone(false);
   };
   return (
     <form class="card log-form" aria-labelledby="job-edit" onSubmit={(e) => void save(e)} noValidate>
@@ -221,8 +261,13 @@ function JobEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void
         error={placed?.general}
         submitLabel={t('app.log.detail.saveEdit')}
         disabled={busy}
-        onCancel={() => onDone(false)}
+        onCancel={cancel}
       />
+      {stale && entry.rev !== base.rev && (
+        <button type="button" class="button button-wide" onClick={rebase}>
+          {t('app.log.detail.staleAgain')}
+        </button>
+      )}
     </form>
   );
 }

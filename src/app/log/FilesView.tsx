@@ -10,8 +10,10 @@ import {
   exportCsv,
   exportFileName,
   importBackup,
+  succeed,
   type ExportFile,
   type JobsResult,
+  type JobStore,
 } from '../../jobs';
 import { language } from '../../i18n/useT';
 import { ErrorNote } from '../ui/Notices';
@@ -19,7 +21,9 @@ import { Segmented } from '../ui/Segmented';
 import { useScreenContext } from '../settings/screenContext';
 import { APP_VERSION } from '../version';
 import { jobStore, writeToLog } from './db';
+import { formatMoment } from './dates';
 import { DemoData } from './DemoData';
+import { useLogRead } from './useLog';
 import { downloadText } from './download';
 
 type DecimalMark = '.' | ',';
@@ -38,6 +42,8 @@ export function FilesView() {
   const [exported, setExported] = useState<Outcome | undefined>(undefined);
   const [imported, setImported] = useState<Outcome | undefined>(undefined);
   const [busy, setBusy] = useState(false);
+  const [progress, setProgress] = useState<{ done: number; total: number } | undefined>(undefined);
+  const { locale } = useScreenContext();
 
   const download = async (kind: 'csv' | 'json') => {
     setBusy(true);
@@ -72,8 +78,11 @@ export function FilesView() {
     setBusy(true);
     setImported(undefined);
     const text = await file.text();
-    const result = await writeToLog((store) => importBackup(store, text));
+    const result = await writeToLog((store) =>
+      importBackup(store, text, { onProgress: (done, total) => setProgress({ done, total }) }),
+    );
     setBusy(false);
+    setProgress(undefined);
     setImported(
       result.ok
         ? { ok: true, text: t('jobs.importReport', { ...result.value }) }
@@ -122,12 +131,38 @@ export function FilesView() {
             onChange={(e) => void pick(e.currentTarget)}
           />
         </label>
+        {progress && (
+          <p class="note import-progress">
+            <progress max={progress.total} value={progress.done} />{' '}
+            {t('app.log.files.importProgress', { done: progress.done, total: progress.total })}
+          </p>
+        )}
         <div aria-live="polite">
           {imported && (imported.ok ? <p class="log-saved">{imported.text}</p> : <ErrorNote message={imported.text} />)}
         </div>
       </section>
+      <MigrationNote locale={locale} />
 
       <DemoData />
     </>
+  );
+}
+
+const readMigration = (store: JobStore) => Promise.resolve(succeed(store.migration));
+
+/** What the one-time move from the earlier log on this device found, once it has run. */
+function MigrationNote({ locale }: { locale: string }) {
+  const { t } = useScreenContext();
+  const loaded = useLogRead(null, readMigration);
+  if (loaded.state !== 'ready' || !loaded.value || loaded.value.total === 0) return null;
+  const report = loaded.value;
+  return (
+    <p class="note migration-note">
+      {t('app.log.files.migrated', {
+        moved: report.moved,
+        damaged: report.damaged,
+        date: formatMoment(report.at, locale),
+      })}
+    </p>
   );
 }

@@ -1,98 +1,105 @@
 /**
  * Recording (or correcting) the lab's result for a job: the traverse first (typed point by point or
  * pasted from the tester), read at the case criterion of the settings; then what the traverse does
- * not give, typed. What is typed is kept across a reload until it is saved or cancelled.
+ * not give, typed. What is typed is kept per tab across a reload until it is saved or cancelled.
  */
 import { useState } from 'preact/hooks';
-import { HARDNESS_UNITS, type HardnessUnit, type Job } from '../../jobs';
+import { HARDNESS_UNITS, type HardnessUnit, type Job, type JobEntry } from '../../jobs';
 import { CASE_CRITERIA } from '../../physics';
 import { caseCriterion } from '../settings/state';
+import { ResultList } from '../ui/ResultList';
 import type { FieldText } from '../ui/fieldText';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
-import { persisted } from '../ui/persist';
 import { Segmented } from '../ui/Segmented';
 import { TextField } from '../ui/TextField';
 import { useScreenContext } from '../settings/screenContext';
 import { writeToLog } from './db';
+import { staleSentence } from './refusal';
+import { clearDraft, readDraft, writeDraft } from './drafts';
+import { labRows } from './jobRows';
 import { FormActions } from './FormActions';
 import { placeJobsError, type PlacedErrors } from './jobForm';
 import { LAB_FIELDS, labFieldOf, labFormOf, readLabForm, type LabForm } from './labForm';
-import { emptyRow, EMPTY_TRAVERSE_FORM } from './traverse/traverseForm';
+import { emptyRow } from './traverse/traverseForm';
 import { TraverseEditor } from './traverse/TraverseEditor';
 import { TraverseFigures } from './traverse/TraverseFigures';
 
-interface LabDraft {
-  jobId: string;
-  form: LabForm;
-}
+/** A form to check a stored draft against: one traverse row, the template every stored row is merged over (persist.ts). */
+const draftTemplate = (form: LabForm): LabForm => ({
+  ...form,
+  traverse: { ...form.traverse, rows: [emptyRow({ text: '', unit: '' })] },
+});
 
-const EMPTY_DRAFT: LabDraft = {
-  jobId: '',
-  // One row as the template every stored row is checked against (persist.ts).
-  form: {
-    ...labFormOf(undefined, new Date(0)),
-    traverse: { ...EMPTY_TRAVERSE_FORM, rows: [emptyRow({ text: '', unit: '' })] },
-  },
-};
-
-/** The lab form being typed, kept across reloads (one job at a time). */
-const draft = persisted<LabDraft>('log.labDraft', EMPTY_DRAFT);
-
-const keepDraft = (jobId: string, form: LabForm) => {
-  draft.value = { jobId, form };
-};
-const clearDraft = () => {
-  draft.value = EMPTY_DRAFT;
-};
-
-/** Whether a lab form for this job was left unsaved (it is resumed as it was typed). */
-export const hasLabDraft = (job: Job) => draft.value.jobId === job.id;
-
-export function LabEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) => void }) {
-  const { t, units, word, locale } = useScreenContext();
-  const [form, setForm] = useState<LabForm>(() =>
-    hasLabDraft(job) ? draft.value.form : labFormOf(job.lab, new Date(), units.depth, locale),
+export function LabEditor({ entry, onDone }: { entry: JobEntry; onDone: (saved: boolean) => void }) {
+  const ctx = useScreenContext();
+  const { t, units, word, locale } = ctx;
+  const id = entry.job.id;
+  const opened = () => labFormOf(entry.job.lab, new Date(), units.depth, locale);
+  // The copy the form was opened on; after an update reload, the one its draft started from.
+  const [start] = useState(() => readDraft('lab', id, draftTemplate(opened())));
+  const [base, setBase] = useState<{ rev: string; job: Job }>(() =>
+    start ? { rev: start.baseRev, job: start.base } : { rev: entry.rev, job: entry.job },
   );
+  const [form, setForm] = useState<LabForm>(() => start?.form ?? opened());
   const [placed, setPlaced] = useState<PlacedErrors | undefined>(undefined);
+  const [stale, setStale] = useState(false);
   const [busy, setBusy] = useState(false);
   const limit = CASE_CRITERIA[caseCriterion.value];
   const set = (changes: Partial<LabForm>) => {
     const next = { ...form, ...changes };
     setForm(next);
-    keepDraft(job.id, next);
+    writeDraft('lab', id, { baseRev: base.rev, base: base.job, form: next });
   };
   const read = readLabForm(form, limit);
   const fieldError = (name: string) => word(read.errors[name]) ?? placed?.fields[name];
-  const finish = (saved: boolean) => {
-    clearDraft();
-    onDone(saved);
-  };
 
   const save = async (event: Event) => {
     event.preventDefault();
     if (Object.keys(read.errors).length > 0) return;
     setBusy(true);
-    const result = await writeToLog((store) => store.update(job.id, { lab: read.lab }));
+    const result = await writeToLog((store) => store.update(id, { lab: read.lab }, { baseRev: base.rev }));
     setBusy(false);
     if (!result.ok) {
       const labels = (f: string) => ((LAB_FIELDS as readonly string[]).includes(f) ? t(`app.log.lab.${f}`) : undefined);
-      const placedError = placeJobsError(t, result.error, labels, labFieldOf);
-      // Only the lab result was being written: say that, not that "the job" was lost.
+      const where = placeJobsError(t, result.error, labels, labFieldOf);
+      setStale(result.error.code === 'record.stale');
       setPlaced(
-        result.error.code === 'record.invalid' ? { ...placedError, general: t('app.log.lab.notSaved') } : placedError,
+        result.error.code === 'record.stale'
+          ? { fields: {}, general: staleSentence(t, result.error) }
+          : // Only the lab result was being written: say that, not that "the job" was lost.
+            result.error.code === 'record.invalid'
+            ? { ...where, general: t('app.log.lab.notSaved') }
+            : where,
       );
       return;
     }
-    finish(true);
+    clearDraft('lab', id);
+    onDone(true);
   };
-
+  // The lab result is one field: moving onto the newer copy keeps everything typed here.
+  const rebase = () => {
+    const current = { rev: entry.rev, job: entry.job };
+    setBase(current);
+    writeDraft('lab', id, { baseRev: current.rev, base: current.job, form });
+    setStale(false);
+    setPlaced(undefined);
+  };
+  const cancel = () => {
+    clearDraft('lab', id);
+    onDone(false);
+  };
+  const wording = { t, show: ctx.show, locale };
   const { points, analysis } = read.traverse;
+
   return (
     <form class="card log-form" aria-labelledby="lab-title" onSubmit={(e) => void save(e)} noValidate>
       <h2 id="lab-title">{t('app.log.lab.title')}</h2>
+      {stale && entry.job.lab && (
+        <ResultList rows={labRows(entry.job.lab, wording)} label={t('app.log.lab.nowInLog')} />
+      )}
       <TraverseEditor form={form.traverse} onChange={(traverse) => set({ traverse })} outcome={read.traverse} />
-      {points && analysis && <TraverseFigures job={job} points={points} analysis={analysis} withRows />}
+      {points && analysis && <TraverseFigures job={entry.job} points={points} analysis={analysis} withRows />}
       {read.typed.ecd && (
         <NumberField
           id="lab-ecd"
@@ -153,12 +160,12 @@ export function LabEditor({ job, onDone }: { job: Job; onDone: (saved: boolean) 
         onInput={(v) => set({ at: v })}
         error={fieldError('at')}
       />
-      <FormActions
-        error={placed?.general}
-        submitLabel={t('app.log.lab.save')}
-        disabled={busy}
-        onCancel={() => finish(false)}
-      />
+      <FormActions error={placed?.general} submitLabel={t('app.log.lab.save')} disabled={busy} onCancel={cancel} />
+      {stale && entry.rev !== base.rev && (
+        <button type="button" class="button button-wide" onClick={rebase}>
+          {t('app.log.detail.staleAgain')}
+        </button>
+      )}
     </form>
   );
 }

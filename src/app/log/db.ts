@@ -8,8 +8,10 @@ import {
   openJobStore,
   persistentStorageStatus,
   requestPersistentStorage,
+  failWith,
   type JobsResult,
   type JobStore,
+  type LogDatabase,
   type PersistOutcome,
 } from '../../jobs';
 import { persisted } from '../ui/persist';
@@ -29,11 +31,21 @@ export function announceChange(): void {
   channel?.postMessage('changed');
 }
 
+/** The browser's document database (IndexedDB underneath), loaded with the first use of the log. */
+async function browserPouch(): Promise<(name: string) => LogDatabase> {
+  const { default: PouchDB } = await import('pouchdb-browser');
+  return (name) => new PouchDB(name) as LogDatabase;
+}
+
 /** The open store; a failed or closed one is opened again on the next call. */
 export async function jobStore(): Promise<JobsResult<JobStore>> {
   const current = opening ? await opening : undefined;
   if (current?.ok && !current.value.closed) return current;
-  opening = openJobStore();
+  if (typeof indexedDB === 'undefined') return failWith('storage.unavailable');
+  opening = browserPouch().then(
+    (pouch) => openJobStore({ pouch }),
+    () => failWith<JobStore>('storage.failed', { name: 'LoadFailed' }),
+  );
   const result = await opening;
   if (!result.ok) opening = undefined;
   return result;

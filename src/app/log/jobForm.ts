@@ -85,7 +85,10 @@ export function formOfJob(job: Job): JobForm {
   };
 }
 
-/** Only the fields the person changed, so an edit made meanwhile in another tab to other fields is kept. */
+/**
+ * Only the fields the person changed from `job`, the copy the form was opened on (never a newer one
+ * read meanwhile: comparing with that would write the form's old values back over it).
+ */
 export function changesOf(job: Job, form: JobForm): JobChanges {
   const before = formOfJob(job);
   const changes: Record<string, unknown> = {};
@@ -154,4 +157,17 @@ export function placeJobsError(
         ? t(`jobs.errors.${error.code}`, error.params ?? {})
         : describeJobsError(t, error),
   };
+}
+
+/**
+ * The form moved onto a newer copy of the job: what the person changed from the old copy stays,
+ * every other field shows the newer copy's value.
+ */
+export function rebasedForm(oldBase: Job, form: JobForm, current: Job): JobForm {
+  const before = formOfJob(oldBase);
+  const next = formOfJob(current);
+  for (const field of JOB_FORM_FIELDS) {
+    if (form[field] !== before[field]) (next as unknown as Record<string, string>)[field] = form[field];
+  }
+  return next;
 }

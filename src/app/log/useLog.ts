@@ -1,6 +1,6 @@
 /** Reading the log from a view: reads again when its query changes or the log changes (here or in another tab). */
 import { useEffect, useState } from 'preact/hooks';
-import type { Job, JobFilter, JobList, JobsError, JobsResult, JobStore } from '../../jobs';
+import type { JobEntry, JobFilter, JobList, JobsError, JobsResult, JobStore } from '../../jobs';
 import { jobStore, logChanges } from './db';
 
 export type Loaded<T> = { state: 'loading' } | { state: 'ready'; value: T } | { state: 'failed'; error: JobsError };
@@ -10,20 +10,20 @@ export function useJobList(filter: JobFilter): Loaded<JobList> {
   return useLogRead(filter, listJobs);
 }
 
-/** One job by id. */
-export function useJob(id: string): Loaded<Job> {
-  return useLogRead(id, getJob);
+/** One job by id, with its revision (an edit starts from it) and the fields kept from two devices. */
+export function useJobEntry(id: string): Loaded<JobEntry> {
+  return useLogRead(id, getEntry);
 }
 
 const listJobs = (store: JobStore, filter: JobFilter) => store.list(filter);
-const getJob = (store: JobStore, id: string) => store.get(id);
+const getEntry = (store: JobStore, id: string) => store.entry(id);
 
 /**
  * The latest answer of `read` for `query`. The query is plain data and the read gets it as its
  * argument (never from a closure), so what is read is always what was asked; its JSON text decides
  * when to read again, so a filter rebuilt on every render reads once.
  */
-function useLogRead<Q, T>(query: Q, read: (store: JobStore, query: Q) => Promise<JobsResult<T>>): Loaded<T> {
+export function useLogRead<Q, T>(query: Q, read: (store: JobStore, query: Q) => Promise<JobsResult<T>>): Loaded<T> {
   const [loaded, setLoaded] = useState<Loaded<T>>({ state: 'loading' });
   const changes = logChanges.value;
   const queryText = JSON.stringify(query);

@@ -15,6 +15,7 @@ export * from './calibration';
 export * from './labFigures';
 export * from './rerun';
 export * from './predictedProfile';
+export * from './plantThreshold';
 export { JOBS_STORE, LATEST_DB_VERSION } from './migrations';
 export type { Alternative } from './documents';
 export type { LogDatabase, PouchFactory } from './pouch';

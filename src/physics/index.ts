@@ -134,7 +134,7 @@ export {
   TEMPERATURE_REQUEST,
   TIME_REQUEST,
 } from './requestTables';
-export { runCycle, simulateCycle } from './cycle/simulate';
+export { carbonDepthsOfCycle, runCycle, simulateCycle } from './cycle/simulate';
 export { cycleDepthBand, type CycleBand, type CycleBandOptions } from './cycle/band';
 /** Reproducible pseudo-random numbers, for synthetic data (the demo log), never for anything secret. */
 export { mulberry32 } from './random';

@@ -4,7 +4,11 @@
  * figures from the traverse and its unit checks.
  */
 import { describe, expect, it } from 'vitest';
+import { comparisonRows } from '../../src/app/log/jobRows';
 import { labFormOf, readLabForm } from '../../src/app/log/labForm';
+import { makeShow } from '../../src/app/ui/show';
+import { createI18n } from '../../src/i18n/i18n';
+import type { Job } from '../../src/jobs';
 import { readPaste } from '../../src/app/log/traverse/pasteTraverse';
 import {
   nextRow,
@@ -208,5 +212,29 @@ describe('the lab form', () => {
     const judged = readLabForm({ ...empty, traverse: soft, ecd: field('0,05', 'mm') }, ISO);
     expect(judged.typed.ecd).toBe(true);
     expect(judged.lab?.ecdMm).toBe(0.05);
+  });
+});
+
+describe('the range verdict on the job page', () => {
+  const t = createI18n('en').t;
+  const job = {
+    id: '00000000-0000-4000-8000-000000000009',
+    prediction: {
+      effectiveCaseDepthMm: 0.85,
+      totalCaseDepthMm: 1.3,
+      surfaceCarbonPct: 0.8,
+      model: 'agren',
+      ecdBandMm: { minMm: 0.7504, maxMm: 0.93 },
+      appVersion: '0.1.0',
+    },
+    lab: { ecdMm: 0.7496 },
+  } as unknown as Job;
+
+  it('reads inside when the lab depth and the band’s end show the same figure (0.75 mm, 0.030 in)', () => {
+    for (const depth of ['mm', 'in'] as const) {
+      const show = makeShow({ temperature: 'C', depth, time: 'h' }, 'en');
+      const rows = comparisonRows(job, { t, show, locale: 'en' });
+      expect(rows.find((r) => r.key === 'band')?.value).toBe(t('app.log.compare.inside'));
+    }
   });
 });

@@ -157,7 +157,7 @@ export function signedPercent(pct: number, locale: string): string {
 
 /** Predicted against measured, when both are known. */
 export function comparisonRows(job: Job, { t, show, locale }: Wording): ResultRow[] {
-  const pair = ecdComparison(job);
+  const pair = ecdComparison(job, show.depthAsShown);
   if (!pair) return [];
   const rows = [
     row(

@@ -6,6 +6,7 @@ import { Answer } from '../ui/Answer';
 import { Deferred } from '../ui/Deferred';
 import { CycleBand } from '../range/CycleBand';
 import { FurnaceField } from '../fields/FurnaceField';
+import { learntFurnaces } from '../settings/plantThreshold';
 import { ModelField } from '../fields/ModelField';
 import { patch } from '../ui/persist';
 import { ResultsCard } from '../ui/ResultsCard';
@@ -158,7 +159,12 @@ function CyclePart() {
         error={word(errors.threshold)}
         show={show}
       />
-      <FurnaceField id="cycle-furnace" model={isModelId(form.model) ? form.model : model.value} ctx={ctx} />
+      <FurnaceField
+        id="cycle-furnace"
+        model={isModelId(form.model) ? form.model : model.value}
+        ctx={ctx}
+        more={learntFurnaces.value}
+      />
     </section>
   );
 }

@@ -17,6 +17,7 @@ import {
   factorOf,
   type CalibrationState,
 } from '../settings/calibration';
+import { appliedThreshold, plantThresholds } from '../settings/plantThreshold';
 import { BETA_INPUT_SCALE, defaults, model } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
 import { deferred } from '../ui/Deferred';
@@ -33,8 +34,11 @@ export interface CycleDefaults {
   ecdHardnessLimit?: Hardness;
   totalCaseMarginPct: number;
   betaMPerS: number;
-  /** The chosen furnace's calibration for a model (none: uncalibrated). */
-  calibrationFor?: (model: DiffusivityModelId) => CalibrationState;
+  /**
+   * The chosen furnace's correction for a model: for a grade (given when no threshold is typed), a
+   * threshold learnt for it and turned on; else the depth correction (none: uncalibrated).
+   */
+  calibrationFor?: (model: DiffusivityModelId, grade?: string) => CalibrationState;
 }
 
 export interface CycleResult {
@@ -67,6 +71,14 @@ export function formFields(form: CycleForm): ReadonlySet<string> {
 /** The form fields a cycle and a plan share: steel, model, ECD threshold, shape. */
 export type BaseForm = Pick<CycleForm, 'steel' | 'model' | 'threshold' | 'shape' | 'size'>;
 
+const modelOf = (form: BaseForm, settings: CycleDefaults) => (isModelId(form.model) ? form.model : settings.model);
+
+/** The chosen furnace's correction for this form: a learnt threshold for its grade when none is typed, else the depth correction. */
+export function formCalibration(form: BaseForm, settings: CycleDefaults): CalibrationState {
+  const grade = form.threshold.text.trim() === '' ? form.steel.grade : undefined;
+  return settings.calibrationFor?.(modelOf(form, settings), grade) ?? { kind: 'none' };
+}
+
 /** Steel, model, threshold, case criterion and shape of a cycle or plan request (errors into `read`); undefined when a field cannot be read. */
 export function readBaseFields(
   form: BaseForm,
@@ -78,10 +90,12 @@ export function readBaseFields(
   const threshold = read.value(readOptionalField(form.threshold, 'threshold'));
   const shape = readShape(form.shape, form.size, read);
   if (coreCarbonPct === undefined || !shape) return undefined;
+  const correction = formCalibration(form, settings);
   return {
     steel: { grade: form.steel.grade, coreCarbonPct, ...(composition ? { composition } : {}) },
-    model: isModelId(form.model) ? form.model : settings.model,
-    thresholdCarbonPct: threshold ?? settings.ecdThresholdPct,
+    model: modelOf(form, settings),
+    thresholdCarbonPct:
+      threshold ?? (correction.kind === 'learnt' ? correction.learnt.thresholdPct : settings.ecdThresholdPct),
     ...(settings.ecdHardnessLimit ? { ecdHardnessLimit: settings.ecdHardnessLimit } : {}),
     totalCaseMarginPct: settings.totalCaseMarginPct,
     shape,
@@ -125,7 +139,7 @@ export function buildRecipe(
 export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<CycleResult> {
   const { recipe, errors } = buildRecipe(form, settings);
   if (!recipe) return { errors };
-  const calibration: CalibrationState = settings.calibrationFor?.(recipe.model ?? settings.model) ?? { kind: 'none' };
+  const calibration = formCalibration(form, settings);
   const factor = factorOf(calibration);
   const calibrated: Recipe = factor === 1 ? recipe : { ...recipe, diffusivityFactor: factor };
   const simulation = simulateCycle(calibrated);
@@ -136,6 +150,7 @@ export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<
 /** The settings a cycle calculation reads, with the chosen furnace's calibration (shared by the planner). */
 export const cycleDefaults = computed<CycleDefaults>(() => {
   const list = calibrations.value;
+  const learnt = plantThresholds.value;
   const furnace = chosenFurnace.value;
   return {
     model: model.value,
@@ -143,7 +158,10 @@ export const cycleDefaults = computed<CycleDefaults>(() => {
     ecdHardnessLimit: defaults.value.ecdHardnessLimit,
     totalCaseMarginPct: defaults.value.totalCaseMarginPct,
     betaMPerS: defaults.value.betaMPerS,
-    calibrationFor: (m) => calibrationState(list, furnace, m),
+    calibrationFor: (m, grade) => {
+      const applied = appliedThreshold(learnt, furnace, grade, m);
+      return applied ? { kind: 'learnt', furnace, learnt: applied } : calibrationState(list, furnace, m);
+    },
   };
 });
 

@@ -2,7 +2,7 @@
 import type { TFunction } from 'i18next';
 import { convert, findGradeByIdOrName, type IndicativeHardnessBasis } from '../../physics';
 import { ecdLabel } from '../fields/ecdLabel';
-import { calibrationWords } from '../fields/calibrationWords';
+import { resultCalibrationWords } from '../fields/learntWords';
 import { UNIT_SYMBOLS } from '../ui/format';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
@@ -66,14 +66,21 @@ export function cycleView(
 ): CycleView {
   const totalH = recipe.steps.reduce((sum, s) => sum + s.durationH, 0);
   const threshold = recipe.thresholdCarbonPct ?? 0;
-  const calibrated = calibrationWords(calibration, t, show);
+  const calibrated = resultCalibrationWords(calibration, t, show);
   const basis = simulation.hardnessBasis;
   return {
     answer: show.depth(simulation.effectiveCaseDepthMm),
     ...(calibrated?.short ? { answerNote: calibrated.short } : {}),
     rows: [
       ...(calibrated
-        ? [{ key: 'calibration', label: t('app.calibration.label'), value: calibrated.sentence, text: true }]
+        ? [
+            {
+              key: 'calibration',
+              label: calibrated.label ?? t('app.calibration.label'),
+              value: calibrated.sentence,
+              text: true,
+            },
+          ]
         : []),
       {
         key: 'ecd',

@@ -4,8 +4,8 @@
  * you type; the screen keeps the last plan, marked updating, until the newest request is answered.
  */
 import { computed, effect } from '@preact/signals';
-import { ALLOY_ELEMENTS, isModelId, planTwoStepCycle, type PlanResult, type Result } from '../../physics';
-import { CYCLE_FIELD_MAP, cycleDefaults, readBaseFields, type CycleDefaults } from '../cycle/results';
+import { ALLOY_ELEMENTS, planTwoStepCycle, type PlanResult, type Result } from '../../physics';
+import { CYCLE_FIELD_MAP, cycleDefaults, formCalibration, readBaseFields, type CycleDefaults } from '../cycle/results';
 import { factorOf, type CalibrationState } from '../settings/calibration';
 import { BETA_INPUT_SCALE } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
@@ -98,8 +98,7 @@ export interface PlanRequest {
 export function planRequestOf(form: PlanForm, settings: CycleDefaults): Outcome<PlanRequest> {
   const built = buildPlanRequest(form, settings);
   if (!built.request) return { errors: built.errors };
-  const model = isModelId(built.request.model) ? built.request.model : settings.model;
-  const calibration: CalibrationState = settings.calibrationFor?.(model) ?? { kind: 'none' };
+  const calibration = formCalibration(form, settings);
   const factor = factorOf(calibration);
   const request = factor === 1 ? built.request : { ...built.request, diffusivityFactor: factor };
   return { errors: NO_ERRORS, result: { request, calibration } };

@@ -54,6 +54,9 @@ const RESULT_DIGITS: Record<string, number> = {
   pctC: 2,
 };
 
+/** Decimals a result in `unit` is shown with (a verdict on shown figures rounds to them). */
+export const resultDigits = (unit: string): number => RESULT_DIGITS[unit] ?? 2;
+
 /** Decimals offered when a typed value is shown in another unit. */
 const INPUT_DIGITS: Record<string, number> = { C: 1, F: 1, mm: 3, in: 4, h: 3, min: 1 };
 

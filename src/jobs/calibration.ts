@@ -12,14 +12,11 @@ import {
   depthFigures,
   type DiffusivityModelId,
   fitDiffusivityFactor,
-  readCaseSpec,
-  checkTemperatureC,
-  checkTimeH,
-  readRecipe,
   type Result,
   runCycle,
 } from '../physics';
-import { physicsRequestOf } from './inputs';
+import { measuredEcdMm } from './labFigures';
+import { jobRun, type SkipReason } from './rerun';
 import { compareNewestFirst } from './query';
 import type { Job } from './schema';
 
@@ -32,13 +29,6 @@ export interface CalibrationOptions {
   /** Use only the newest this many usable jobs (default DEFAULT_CALIBRATION_JOBS). */
   maxJobs?: number;
 }
-
-/**
- * Why a measured job of the furnace is left out of the fit: no recorded calculation, no time or
- * temperature it ran at, inputs today's checks refuse (2000 °C, 5000 h), or a calculation that
- * gives no case to compare.
- */
-export type SkipReason = 'noInputs' | 'noRunConditions' | 'invalidInputs' | 'noCase';
 
 export interface SkippedJob {
   id: string;
@@ -58,32 +48,16 @@ export interface FurnaceCalibration {
 
 type Predictor = (factor: number) => number;
 
-const measuredEcdMm = (job: Job): number | undefined => {
-  const ecd = job.lab?.ecdMm;
-  return ecd !== undefined && ecd > 0 ? ecd : undefined;
-};
-
-/** A closed-form job: re-run at the temperature and time it ran (for a time or temperature request: the answer). */
-function closedFormPredictor(job: Job, model: DiffusivityModelId | undefined): Predictor | SkipReason {
-  const inputs = job.inputs!;
-  if (inputs.kind === 'cycle') return 'invalidInputs';
-  const temperatureC = inputs.kind === 'temperature' ? job.prediction?.temperatureC : inputs.temperatureC;
-  const timeH = inputs.kind === 'time' ? job.prediction?.timeH : inputs.timeH;
-  if (temperatureC === undefined || timeH === undefined) return 'noRunConditions';
-  if (!checkTemperatureC(temperatureC, 'temperatureC').ok || !checkTimeH(timeH, 'timeH').ok) return 'invalidInputs';
-  const spec = readCaseSpec({ ...physicsRequestOf(inputs), ...(model ? { model } : {}), diffusivityFactor: 1 });
-  if (!spec.ok) return 'invalidInputs';
-  return (factor) =>
-    depthFigures({ ...spec.value, diffusivityFactor: factor }, temperatureC, timeH).effectiveCaseDepthMm;
-}
-
-/** A cycle job: the recorded recipe through the simulator with D × k (k replaces the factor it was planned with). */
-function cyclePredictor(job: Job, model: DiffusivityModelId | undefined): Predictor | SkipReason {
-  const inputs = job.inputs!;
-  if (inputs.kind !== 'cycle') return 'invalidInputs';
-  const recipe = readRecipe(model ? { ...inputs.recipe, model } : inputs.recipe);
-  if (!recipe.ok) return 'invalidInputs';
-  return (factor) => runCycle({ ...recipe.value, diffusivityFactor: factor }).effectiveCaseDepthMm;
+/** The job's ECD as a function of the factor on D: its closed-form request or its cycle re-run with D × k. */
+function predictorOf(job: Job, model: DiffusivityModelId | undefined): Predictor | SkipReason {
+  const run = jobRun(job, model ? { model } : {});
+  if (typeof run === 'string') return run;
+  if (run.kind === 'closedForm') {
+    return (factor) =>
+      depthFigures({ ...run.spec, diffusivityFactor: factor }, run.temperatureC, run.timeH).effectiveCaseDepthMm;
+  }
+  // k replaces the factor the cycle was planned with.
+  return (factor) => runCycle({ ...run.recipe, diffusivityFactor: factor }).effectiveCaseDepthMm;
 }
 
 /**
@@ -106,11 +80,7 @@ export function calibrationSamples(jobs: readonly Job[], furnace: string, option
   const skipped: SkippedJob[] = [];
   for (const job of measured) {
     if (samples.length >= maxJobs) break;
-    const predictor = !job.inputs
-      ? 'noInputs'
-      : job.inputs.kind === 'cycle'
-        ? cyclePredictor(job, options.model)
-        : closedFormPredictor(job, options.model);
+    const predictor = predictorOf(job, options.model);
     const usable = typeof predictor === 'string' ? predictor : withCase(predictor);
     if (typeof usable === 'string') skipped.push({ id: job.id, reason: usable });
     else samples.push({ id: job.id, measuredEcdMm: measuredEcdMm(job)!, predictEcdMm: usable });

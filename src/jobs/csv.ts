@@ -9,6 +9,7 @@
  * validated numeric fields, never from text.
  */
 import { OUTPUT_PRECISION, roundForOutput, type OutputPrecision } from '../physics';
+import { labFigures } from './labFigures';
 import { ecdComparison } from './summary';
 import type { Job } from './schema';
 
@@ -87,13 +88,13 @@ export const CSV_COLUMNS: readonly CsvColumn[] = [
   { header: 'predicted_surface_carbon_pct', value: (j) => j.prediction?.surfaceCarbonPct },
   { header: 'model', value: (j) => j.prediction?.model },
   { header: 'app_version', value: (j) => j.prediction?.appVersion },
-  { header: 'measured_ecd_mm', value: (j) => j.lab?.ecdMm },
+  { header: 'measured_ecd_mm', value: (j) => labFigures(j.lab).ecdMm },
   { header: 'ecd_difference_mm', value: (j) => ecdComparison(j)?.differenceMm },
   { header: 'ecd_difference_pct', value: (j) => ecdComparison(j)?.differencePct },
-  { header: 'surface_hardness', value: (j) => j.lab?.surfaceHardness?.value },
-  { header: 'surface_hardness_unit', value: (j) => j.lab?.surfaceHardness?.unit },
-  { header: 'core_hardness', value: (j) => j.lab?.coreHardness?.value },
-  { header: 'core_hardness_unit', value: (j) => j.lab?.coreHardness?.unit },
+  { header: 'surface_hardness', value: (j) => labFigures(j.lab).surfaceHardness?.value },
+  { header: 'surface_hardness_unit', value: (j) => labFigures(j.lab).surfaceHardness?.unit },
+  { header: 'core_hardness', value: (j) => labFigures(j.lab).coreHardness?.value },
+  { header: 'core_hardness_unit', value: (j) => labFigures(j.lab).coreHardness?.unit },
   { header: 'measured_surface_carbon_pct', value: (j) => j.lab?.surfaceCarbonPct },
   { header: 'measured_at', value: (j) => j.lab?.measuredAt },
   { header: 'measured_by', value: (j) => j.lab?.by },

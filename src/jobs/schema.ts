@@ -4,7 +4,7 @@
  * stored records are checked with it on read, and backup files on import.
  */
 import * as v from 'valibot';
-import { MAX_DEPTH_MM } from '../physics';
+import { MAX_DEPTH_MM, readTraverse } from '../physics';
 import {
   CarbonPctSchema,
   CompositionSchema,
@@ -99,7 +99,29 @@ export const HardnessSchema = v.pipe(
   ),
 );
 
+const finiteNumber = () => v.pipe(v.number(), v.finite());
+const TraverseHardnessSchema = v.strictObject({ value: finiteNumber(), unit: v.picklist(HARDNESS_UNITS) });
+
+/**
+ * The lab's traverse as measured: the points of a physics `traverse` request and the limit its
+ * ECD is read at (the job's criterion when it was entered). Checked by the physics reader itself,
+ * so a stored traverse is one the analysis accepts (depths increasing, hardness within its scale).
+ */
+export const TraverseSchema = v.pipe(
+  v.strictObject({
+    points: v.array(v.strictObject({ depthMm: finiteNumber(), ...TraverseHardnessSchema.entries })),
+    limit: TraverseHardnessSchema,
+  }),
+  v.check((traverse) => readTraverse(traverse).ok, 'a traverse the physics reader accepts'),
+);
+
+/**
+ * What the lab found. With a traverse, its ECD, surface and core hardness come from the points
+ * (`labFigures`); the typed `ecdMm`, `surfaceHardness` and `coreHardness` stand only where the
+ * traverse gives none (no single crossing, no levelled core) or there is no traverse.
+ */
 export const LabResultSchema = v.strictObject({
+  traverse: v.optional(TraverseSchema),
   ecdMm: v.optional(v.pipe(positiveNumber(), v.maxValue(MAX_DEPTH_MM))),
   surfaceHardness: v.optional(HardnessSchema),
   coreHardness: v.optional(HardnessSchema),
@@ -138,6 +160,7 @@ export type Steel = v.InferOutput<typeof SteelSchema>;
 export type Prediction = v.InferOutput<typeof PredictionSchema>;
 export type LabResult = v.InferOutput<typeof LabResultSchema>;
 export type Hardness = v.InferOutput<typeof HardnessSchema>;
+export type StoredTraverse = v.InferOutput<typeof TraverseSchema>;
 
 /** A new job as entered; `shift`/`shiftDate` default to the shift of its creation time. */
 export const JobDraftSchema = v.strictObject({

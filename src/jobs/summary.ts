@@ -2,6 +2,7 @@
  * The supervisor's view of a shift: how many loads, which furnaces, what is still open,
  * and how each prediction compares with the lab's traverse. Pure functions over jobs.
  */
+import { measuredEcdMm } from './labFigures';
 import { OPEN_STATUSES, type Job, type JobStatus } from './schema';
 import { DEFAULT_SHIFT_CONFIG, slotBefore, type ShiftConfig, type ShiftSlot } from './shift';
 
@@ -33,11 +34,19 @@ export interface ShiftSummary {
   meanAbsDifferencePct?: number;
 }
 
-/** Prediction against the lab for one job, when both depths are known. */
-export function ecdComparison(job: Job): EcdComparison | undefined {
+/** A depth as a verdict compares it: the screens pass the rounding of the figures they show. */
+export type DepthRounding = (mm: number) => number;
+const asIs: DepthRounding = (mm) => mm;
+
+/**
+ * Prediction against the lab for one job, when both depths are known. Inside or outside the band is
+ * judged on the depths as `round` gives them, so a lab depth shown as 0.75 mm is inside a band shown
+ * as 0.75–1.00 mm.
+ */
+export function ecdComparison(job: Job, round: DepthRounding = asIs): EcdComparison | undefined {
   const predictedMm = job.prediction?.effectiveCaseDepthMm;
-  const measuredMm = job.lab?.ecdMm;
-  if (predictedMm === undefined || measuredMm === undefined || !(measuredMm > 0)) return undefined;
+  const measuredMm = measuredEcdMm(job);
+  if (predictedMm === undefined || measuredMm === undefined) return undefined;
   const differenceMm = predictedMm - measuredMm;
   const band = job.prediction?.ecdBandMm;
   return {
@@ -48,7 +57,7 @@ export function ecdComparison(job: Job): EcdComparison | undefined {
     measuredMm,
     differenceMm,
     differencePct: (differenceMm / measuredMm) * 100,
-    ...(band ? { withinBand: measuredMm >= band.minMm && measuredMm <= band.maxMm } : {}),
+    ...(band ? { withinBand: round(measuredMm) >= round(band.minMm) && round(measuredMm) <= round(band.maxMm) } : {}),
   };
 }
 
@@ -76,10 +85,14 @@ export function carriedOverLoads(
 }
 
 /** The summary of one shift's `jobs`; `carriedOver` (see carriedOverLoads) heads its open items. */
-export function summarizeShift(jobs: readonly Job[], carriedOver: readonly Job[] = []): ShiftSummary {
+export function summarizeShift(
+  jobs: readonly Job[],
+  carriedOver: readonly Job[] = [],
+  round: DepthRounding = asIs,
+): ShiftSummary {
   const byStatus: Record<JobStatus, number> = { planned: 0, inFurnace: 0, done: 0, onHold: 0, rejected: 0 };
   for (const job of jobs) byStatus[job.status]++;
-  const ecdPairs = jobs.map(ecdComparison).filter((pair): pair is EcdComparison => pair !== undefined);
+  const ecdPairs = jobs.map((job) => ecdComparison(job, round)).filter((pair): pair is EcdComparison => !!pair);
   return {
     loads: jobs.length,
     furnaces: [...new Set(jobs.map((job) => job.furnace))].sort(),

@@ -86,11 +86,13 @@ export {
   depthFigures,
   readCaseSpec,
   temperatureForCaseDepth,
+  type CaseSpec,
   timeForCaseDepth,
   type CaseDepthResult,
   type TemperatureResult,
   type TimeResult,
 } from './caseDepth';
+export { closedFormProfile, type ClosedFormProfile } from './closedFormProfile';
 export { equivalentTime, type EquivalentTimeResult } from './equivalentTime';
 export { convertRequest, type ConversionResult } from './conversions';
 export { DEFAULT_BETA_RANGE_M_PER_S, DEFAULT_TEMPERATURE_TOLERANCE_C, type DepthBand, type Range } from './uncertainty';
@@ -132,7 +134,7 @@ export {
 } from './requestTables';
 export { PLAN_REQUEST, RECIPE_REQUEST } from './cycle/requestTables';
 export { REQUESTS } from './requests';
-export { runCycle, simulateCycle } from './cycle/simulate';
+export { carbonDepthsOfCycle, runCycle, simulateCycle } from './cycle/simulate';
 export { cycleDepthBand, type CycleBand, type CycleBandOptions } from './cycle/band';
 /** Reproducible pseudo-random numbers, for synthetic data (the demo log), never for anything secret. */
 export { mulberry32 } from './random';

@@ -32,10 +32,13 @@ import { wordError } from '../../src/app/ui/fieldError';
 import { APP_VERSION } from '../../src/app/version';
 import { createI18n } from '../../src/i18n/i18n';
 import { JobDraftSchema, JobSchema, OPEN_STATUSES } from '../../src/jobs';
-import { TOTAL_CASE_MARGIN_PCT } from '../../src/physics';
+import { CASE_CRITERIA, TOTAL_CASE_MARGIN_PCT } from '../../src/physics';
 import * as v from 'valibot';
 import { readFileSync } from 'node:fs';
 import { sourceFiles } from '../sourceFiles';
+
+/** The default case criterion: 550 HV, ISO 18203. */
+const ISO = CASE_CRITERIA['iso-18203'];
 
 const settings = {
   model: 'agren' as const,
@@ -214,7 +217,7 @@ describe('job and lab forms', () => {
       coreUnit: 'HV' as const,
       by: ' QL ',
     };
-    const { lab, errors } = readLabForm(form);
+    const { lab, errors } = readLabForm(form, ISO);
     expect(errors).toEqual({});
     expect(lab?.ecdMm).toBeCloseTo(0.8636, 12);
     expect(lab).toMatchObject({
@@ -227,8 +230,8 @@ describe('job and lab forms', () => {
   });
 
   it('an empty lab form removes the result; an unreadable number is an error on its field', () => {
-    expect(readLabForm(labFormOf(undefined)).lab).toBeUndefined();
-    const bad = readLabForm({ ...labFormOf(undefined), surfaceCarbon: field('0.8x') });
+    expect(readLabForm(labFormOf(undefined), ISO).lab).toBeUndefined();
+    const bad = readLabForm({ ...labFormOf(undefined), surfaceCarbon: field('0.8x') }, ISO);
     expect(bad.lab).toBeUndefined();
     expect(bad.errors.surfaceCarbon?.code).toBe('number.invalid');
     expect(labFieldOf('lab.surfaceHardness')).toBe('surfaceHardness');
@@ -237,24 +240,28 @@ describe('job and lab forms', () => {
 
   it('a lab value out of bounds is worded beside its field with the allowed range and unit, before any store', () => {
     const es = createI18n('es').t;
-    const bad = readLabForm({
-      ...labFormOf(undefined),
-      ecd: field('0', 'mm'),
-      surfaceHardness: field('85'),
-      coreHardness: field('366,7'),
-      surfaceCarbon: field('2,5'),
-    });
+    const bad = readLabForm(
+      {
+        ...labFormOf(undefined),
+        ecd: field('0', 'mm'),
+        surfaceHardness: field('85'),
+        coreHardness: field('366,7'),
+        surfaceCarbon: field('2,5'),
+      },
+      ISO,
+    );
     expect(bad.lab).toBeUndefined();
     const metric = { temperature: 'C', depth: 'mm', time: 'h' } as const;
     expect(wordError(t, bad.errors.ecd!, metric, 'en')).toBe('Depth must be more than zero.');
+    // The physics scale (20–68 HRC), and the scale 85 fits named.
     expect(wordError(t, bad.errors.surfaceHardness!, metric, 'en')).toBe(
-      '85 HRC is outside 0–80 HRC; check the entry.',
+      '85 HRC is outside 20–68 HRC. Did you mean 85 HV?',
     );
     expect(bad.errors.coreHardness).toBeUndefined();
     expect(wordError(es, bad.errors.surfaceCarbon!, metric, 'es')).toBe(
       'El carbono 2,5\u202f%C supera 2,11\u202f%C, lo máximo que admite la austenita.',
     );
-    const deep = readLabForm({ ...labFormOf(undefined), ecd: field('0,5', 'in') });
+    const deep = readLabForm({ ...labFormOf(undefined), ecd: field('0,5', 'in') }, ISO);
     expect(wordError(t, deep.errors.ecd!, { ...metric, depth: 'in' }, 'en')).toBe(
       'Depth 0.5\u202fin is deeper than 0.394\u202fin; check the entry.',
     );
@@ -267,7 +274,7 @@ describe('job and lab forms', () => {
       measuredAt: '2025-03-06T10:00:00.000Z',
       by: 'QL',
     };
-    expect(readLabForm(labFormOf(lab)).lab).toEqual({ ...lab, measuredAt: '2025-03-06' });
+    expect(readLabForm(labFormOf(lab), ISO).lab).toEqual({ ...lab, measuredAt: '2025-03-06' });
   });
 });
 

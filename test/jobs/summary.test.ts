@@ -53,6 +53,18 @@ describe('shift summary', () => {
     expect(ecdComparison(make({ prediction: predicted(0.85), lab: { ecdMm: 0.8 } }))).not.toHaveProperty('withinBand');
   });
 
+  it('judges inside or outside on the depths as the screen rounds them', () => {
+    const job = make({
+      prediction: { ...predicted(0.85), ecdBandMm: { minMm: 0.7504, maxMm: 0.93 } },
+      lab: { ecdMm: 0.7496 },
+    });
+    // Unrounded 0.7496 lies below 0.7504; both read 0.75 mm to two decimals.
+    expect(ecdComparison(job)?.withinBand).toBe(false);
+    const toHundredths = (mm: number) => Number(mm.toFixed(2));
+    expect(ecdComparison(job, toHundredths)?.withinBand).toBe(true);
+    expect(summarizeShift([job], [], toHundredths).ecdPairs[0]?.withinBand).toBe(true);
+  });
+
   it('no pairs without both depths; an empty shift gives zeros and no means', () => {
     expect(ecdComparison(make({ prediction: undefined, lab: { ecdMm: 0.8 } }))).toBeUndefined();
     const empty = summarizeShift([]);

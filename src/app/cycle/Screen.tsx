@@ -8,6 +8,7 @@ import { calibrationWords } from '../fields/calibrationWords';
 import { Deferred } from '../ui/Deferred';
 import { CycleBand } from '../range/CycleBand';
 import { FurnaceField } from '../fields/FurnaceField';
+import { learntFurnaces } from '../settings/plantThreshold';
 import { ModelField } from '../fields/ModelField';
 import { patch } from '../ui/persist';
 import { ResultsCard } from '../ui/ResultsCard';
@@ -212,7 +213,12 @@ function CyclePart() {
         error={word(errors.thresholdCarbonPct)}
         show={show}
       />
-      <FurnaceField id="cycle-furnace" model={isModelId(form.model) ? form.model : model.value} ctx={ctx} />
+      <FurnaceField
+        id="cycle-furnace"
+        model={isModelId(form.model) ? form.model : model.value}
+        ctx={ctx}
+        more={learntFurnaces.value}
+      />
     </section>
   );
 }

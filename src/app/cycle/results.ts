@@ -18,6 +18,7 @@ import {
   factorOf,
   type CalibrationState,
 } from '../settings/calibration';
+import { appliedThreshold, plantThresholds } from '../settings/plantThreshold';
 import { defaults, model } from '../settings/state';
 import { deferred } from '../ui/Deferred';
 import { NO_ERRORS, type Outcome } from '../ui/outcome';
@@ -33,8 +34,11 @@ export interface CycleDefaults {
   ecdHardnessLimit?: Hardness;
   totalCaseMarginPct: number;
   betaMPerS: number;
-  /** The chosen furnace's calibration for a model (none: uncalibrated). */
-  calibrationFor?: (model: DiffusivityModelId) => CalibrationState;
+  /**
+   * The chosen furnace's correction for a model: for a grade (given when no threshold is typed), a
+   * threshold learnt for it and turned on; else the depth correction (none: uncalibrated).
+   */
+  calibrationFor?: (model: DiffusivityModelId, grade?: string) => CalibrationState;
 }
 
 export interface CycleResult {
@@ -46,12 +50,24 @@ export interface CycleResult {
 /** The form fields a cycle and a plan share: steel, model, ECD threshold, shape. */
 export type BaseForm = Pick<CycleForm, 'steel' | 'model' | 'threshold' | 'shape' | 'size'>;
 
+const modelOf = (form: BaseForm, settings: CycleDefaults) => (isModelId(form.model) ? form.model : settings.model);
+
+/** The chosen furnace's correction for this form: a learnt threshold for its grade when none is typed, else the depth correction. */
+export function formCalibration(form: BaseForm, settings: CycleDefaults): CalibrationState {
+  const grade = form.threshold.text.trim() === '' ? form.steel.grade : undefined;
+  return settings.calibrationFor?.(modelOf(form, settings), grade) ?? { kind: 'none' };
+}
+
 /** Steel, model, threshold, case criterion, margin and shape of a cycle or plan, laid out as the request (physics `RECIPE_REQUEST`). */
 export function baseValues(form: BaseForm, settings: CycleDefaults): FormValues {
+  const correction = formCalibration(form, settings);
   return {
     steel: { grade: form.steel.grade, coreCarbonPct: form.steel.coreCarbon, composition: steelComposition(form.steel) },
-    model: isModelId(form.model) ? form.model : settings.model,
-    thresholdCarbonPct: orDefault(form.threshold, settings.ecdThresholdPct),
+    model: modelOf(form, settings),
+    thresholdCarbonPct: orDefault(
+      form.threshold,
+      correction.kind === 'learnt' ? correction.learnt.thresholdPct : settings.ecdThresholdPct,
+    ),
     ...(settings.ecdHardnessLimit ? { ecdHardnessLimit: settings.ecdHardnessLimit } : {}),
     totalCaseMarginPct: settings.totalCaseMarginPct,
     shape: shapeValues(form.shape, form.size),
@@ -86,9 +102,7 @@ export function buildRecipe(
 }
 
 export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<CycleResult> {
-  const calibration: CalibrationState = settings.calibrationFor?.(
-    isModelId(form.model) ? form.model : settings.model,
-  ) ?? { kind: 'none' };
+  const calibration = formCalibration(form, settings);
   const factor = factorOf(calibration);
   const read = readForm(RECIPE_REQUEST, {
     ...cycleValues(form, settings),
@@ -105,6 +119,7 @@ export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<
 /** The settings a cycle calculation reads, with the chosen furnace's calibration (shared by the planner). */
 export const cycleDefaults = computed<CycleDefaults>(() => {
   const list = calibrations.value;
+  const learnt = plantThresholds.value;
   const furnace = chosenFurnace.value;
   return {
     model: model.value,
@@ -112,7 +127,10 @@ export const cycleDefaults = computed<CycleDefaults>(() => {
     ecdHardnessLimit: defaults.value.ecdHardnessLimit,
     totalCaseMarginPct: defaults.value.totalCaseMarginPct,
     betaMPerS: defaults.value.betaMPerS,
-    calibrationFor: (m) => calibrationState(list, furnace, m),
+    calibrationFor: (m, grade) => {
+      const applied = appliedThreshold(learnt, furnace, grade, m);
+      return applied ? { kind: 'learnt', furnace, learnt: applied } : calibrationState(list, furnace, m);
+    },
   };
 });
 

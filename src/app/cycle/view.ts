@@ -2,7 +2,7 @@
 import type { TFunction } from 'i18next';
 import { findGradeByIdOrName, type IndicativeHardnessBasis } from '../../physics';
 import { ecdLabel } from '../fields/ecdLabel';
-import { calibrationWords } from '../fields/calibrationWords';
+import { resultCalibrationWords } from '../fields/learntWords';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
 import { stepCautions } from '../ui/warningText';
@@ -23,11 +23,18 @@ export interface CycleView {
   hardnessMethod: string;
 }
 
-function coreSourceWords(basis: IndicativeHardnessBasis, grade: string | undefined, t: TFunction): string {
+/** Where a given core hardness came from: typed with the steel, or the lab's traverse. */
+export type GivenCore = 'steel' | 'lab';
+
+function coreSourceWords(
+  basis: IndicativeHardnessBasis,
+  grade: string | undefined,
+  t: TFunction,
+  given: GivenCore,
+): string {
   const listed = grade === undefined ? undefined : findGradeByIdOrName(grade);
-  return basis.coreSource === 'grade' && listed
-    ? t('app.cycle.coreSource.grade', { grade: listed.name })
-    : t(basis.coreSource === 'steel' ? 'app.cycle.coreSource.steel' : 'app.cycle.coreSource.default');
+  if (basis.coreSource === 'grade' && listed) return t('app.cycle.coreSource.grade', { grade: listed.name });
+  return t(basis.coreSource === 'steel' ? `app.cycle.coreSource.${given}` : 'app.cycle.coreSource.default');
 }
 
 /** The method of the indicative hardness in words, with the figures it was drawn through. */
@@ -36,10 +43,11 @@ export function hardnessMethodText(
   grade: string | undefined,
   t: TFunction,
   show: Show,
+  given: GivenCore = 'steel',
 ): string {
   return t('app.cycle.hardnessMethod', {
     core: show.hardness({ value: basis.coreHardnessHrc, unit: 'HRC' }),
-    coreSource: coreSourceWords(basis, grade, t),
+    coreSource: coreSourceWords(basis, grade, t, given),
     limit: show.hardness(basis.limit),
     limitHrc: show.hardness({ value: basis.limitHrc, unit: 'HRC' }, 1),
     threshold: show.carbon(basis.thresholdCarbonPct),
@@ -54,14 +62,21 @@ export function cycleView(
 ): CycleView {
   const totalH = recipe.steps.reduce((sum, s) => sum + s.durationH, 0);
   const threshold = recipe.thresholdCarbonPct ?? 0;
-  const calibrated = calibrationWords(calibration, t, show);
+  const calibrated = resultCalibrationWords(calibration, t, show);
   const basis = simulation.hardnessBasis;
   return {
     answer: show.depth(simulation.effectiveCaseDepthMm),
     ...(calibrated?.short ? { answerNote: calibrated.short } : {}),
     rows: [
       ...(calibrated
-        ? [{ key: 'calibration', label: t('app.calibration.label'), value: calibrated.sentence, text: true }]
+        ? [
+            {
+              key: 'calibration',
+              label: calibrated.label ?? t('app.calibration.label'),
+              value: calibrated.sentence,
+              text: true,
+            },
+          ]
         : []),
       {
         key: 'ecd',

@@ -5,12 +5,23 @@ import { calibrationWords } from './calibrationWords';
 import { ChoiceField } from '../ui/ChoiceField';
 import type { ScreenContext } from '../settings/screenContext';
 
-export function FurnaceField({ id, model, ctx }: { id: string; model: DiffusivityModelId; ctx: ScreenContext }) {
+export function FurnaceField({
+  id,
+  model,
+  ctx,
+  more = [],
+}: {
+  id: string;
+  model: DiffusivityModelId;
+  ctx: ScreenContext;
+  /** Furnaces with other figures of their own (a learnt threshold, on the cycle and planner screens). */
+  more?: readonly string[];
+}) {
   const { t, show } = ctx;
   const list = calibrations.value;
   const furnace = chosenFurnace.value;
-  if (list.length === 0 && furnace === '') return null;
-  const names = list.map((c) => c.furnace);
+  const names = [...new Set([...list.map((c) => c.furnace), ...more])].sort();
+  if (names.length === 0 && furnace === '') return null;
   const choices = [
     { value: '', label: t('app.calibration.noFurnace') },
     ...(furnace !== '' && !names.includes(furnace) ? [furnace] : [])

@@ -8,6 +8,8 @@ export interface CalibrationWords {
   sentence: string;
   /** The short form beside a main answer (only when the factor is applied). */
   short?: string;
+  /** The row's label when it is not the depth correction's (a learnt threshold). */
+  label?: string;
 }
 
 /** The placeholders of a diffusion-speed factor: the factor and the 1.00 of the published model, both in the user's locale. */
@@ -20,6 +22,8 @@ export function calibrationWords(state: CalibrationState, t: TFunction, show: Sh
   if (state.kind === 'none') return undefined;
   const { furnace } = state;
   if (state.kind === 'uncalibrated') return { sentence: t('app.calibration.notFitted', { furnace }) };
+  // A learnt threshold is used only by the cycle and planner screens, which word it (fields/learntWords.ts).
+  if (state.kind === 'learnt') return undefined;
   const c = state.calibration;
   if (state.kind === 'off') return { sentence: t('app.calibration.off', { furnace }) };
   if (state.kind === 'otherModel')

@@ -21,6 +21,7 @@ import { calibrationFurnaces, cardsOf, measuredJobs, type FurnaceCard } from './
 import { latestRun } from '../worker/client';
 import type { CalibrationInput } from '../worker/tasks';
 import { formatMoment } from './dates';
+import { ThresholdView } from './ThresholdView';
 import { useJobList } from './useLog';
 
 /** A calibration input told apart by model, furnaces and each job's id and last change (not its whole text). */
@@ -68,6 +69,7 @@ export function CalibrationView() {
       {cards.map((card) => (
         <FurnaceCalibrationCard key={card.furnace} card={card} byId={byId} ctx={ctx} />
       ))}
+      {list.state === 'ready' && <ThresholdView jobs={jobs} model={current} />}
     </>
   );
 }

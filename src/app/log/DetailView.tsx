@@ -1,6 +1,14 @@
 /** One job: what was logged, its status (changed with one tap), an edit form, the plan and prediction, the lab's result. */
 import { useState } from 'preact/hooks';
-import { describeJobsError, JOB_STATUSES, type Job, type JobEntry, type JobStatus } from '../../jobs';
+import {
+  analyseStoredTraverse,
+  describeJobsError,
+  JOB_STATUSES,
+  type Job,
+  type JobEntry,
+  type JobStatus,
+  type StoredTraverse,
+} from '../../jobs';
 import { ErrorNote } from '../ui/Notices';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { Segmented } from '../ui/Segmented';
@@ -24,6 +32,7 @@ import {
 } from './jobForm';
 import { comparisonRows, labRows, planRows, predictionRows } from './jobRows';
 import { LabEditor } from './LabEditor';
+import { TraverseFigures } from './traverse/TraverseFigures';
 import { clearDraft, hasDraft, readDraft, writeDraft } from './drafts';
 import { staleSentence } from './refusal';
 import { OpenChoices } from './OpenChoices';
@@ -166,6 +175,7 @@ function JobPage({ entry, locale }: { entry: JobEntry; locale: string }) {
           ) : (
             <p class="note">{t('app.log.lab.none')}</p>
           )}
+          {job.lab?.traverse && <LabTraverse job={job} traverse={job.lab.traverse} />}
           <button type="button" class="button button-primary" onClick={() => setMode('lab')}>
             {job.lab ? t('app.log.lab.change') : t('app.log.lab.record')}
           </button>
@@ -262,4 +272,11 @@ function JobEditor({ entry, onDone }: { entry: JobEntry; onDone: (saved: boolean
       )}
     </form>
   );
+}
+
+/** The stored traverse over the prediction (the figures are in the rows above). */
+function LabTraverse({ job, traverse }: { job: Job; traverse: StoredTraverse }) {
+  const analysis = analyseStoredTraverse(traverse);
+  if (!analysis) return null;
+  return <TraverseFigures job={job} points={traverse.points} analysis={analysis} withRows={false} />;
 }

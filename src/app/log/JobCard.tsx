@@ -1,5 +1,5 @@
 /** A job in a list: one large link to its page with work order, part, furnace, status and depths. */
-import type { Job } from '../../jobs';
+import { measuredEcdMm, type Job } from '../../jobs';
 import { hrefFor } from '../shell/route';
 import type { Show } from '../ui/show';
 import type { TFunction } from 'i18next';
@@ -29,7 +29,8 @@ export function StatusBadge({ status, t }: { status: Job['status']; t: TFunction
 
 export function JobCard({ job, t, show, locale }: { job: Job; t: TFunction; show: Show; locale: string }) {
   const predicted = job.prediction ? show.depth(job.prediction.effectiveCaseDepthMm) : undefined;
-  const measured = job.lab?.ecdMm === undefined ? undefined : show.depth(job.lab.ecdMm);
+  const measuredMm = measuredEcdMm(job);
+  const measured = measuredMm === undefined ? undefined : show.depth(measuredMm);
   return (
     <li>
       <a class="job-card" href={hrefFor('log', 'job', job.id)} data-job={job.id}>

@@ -22,7 +22,7 @@ export function SummaryView() {
   const list = useJobList(filter);
   const jobs: Job[] = list.state === 'ready' ? list.value.jobs : [];
   const carried = useCarriedOver(form);
-  const summary = summarizeShift(jobs, carried);
+  const summary = summarizeShift(jobs, carried, show.depthAsShown);
   // The carried-over loads have their own section above.
   const ownOpen = summary.openItems.slice(summary.carriedOver);
   const inBand = summary.ecdPairs.filter((p) => p.withinBand === true).length;

@@ -3,7 +3,7 @@
  * fit from the log as it is now, the figures kept in the settings, and whether those are out of
  * date. Pure: the view renders it and stores figures only when the person asks.
  */
-import { calibrateFurnace, furnacesWithLabDepth, type FurnaceCalibration, type Job } from '../../jobs';
+import { calibrateFurnace, furnacesWithLabDepth, measuredEcdMm, type FurnaceCalibration, type Job } from '../../jobs';
 import type { CalibrationFit, DiffusivityModelId } from '../../physics';
 import type { StoredCalibration } from '../settings/calibration';
 
@@ -52,8 +52,7 @@ export function calibrationFurnaces(jobs: readonly Job[], stored: readonly Store
 }
 
 /** The jobs a calibration reads: those with a lab ECD (the only ones worth sending to the worker). */
-export const measuredJobs = (jobs: readonly Job[]): Job[] =>
-  jobs.filter((job) => job.lab?.ecdMm !== undefined && job.lab.ecdMm > 0);
+export const measuredJobs = (jobs: readonly Job[]): Job[] => jobs.filter((job) => measuredEcdMm(job) !== undefined);
 
 /** One card per fitted furnace, beside the figures the settings keep. */
 export function cardsOf(

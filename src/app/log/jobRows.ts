@@ -2,6 +2,7 @@
 import type { TFunction } from 'i18next';
 import {
   ecdComparison,
+  labFigures,
   type Hardness,
   type Job,
   type JobInputs,
@@ -124,14 +125,23 @@ export function hardnessText(hardness: Hardness, locale: string): string {
   return formatQuantity(hardness.value, hardness.unit, locale, hardness.unit === 'HRC' ? 1 : 0);
 }
 
-/** What the lab measured. */
+/** What the lab measured: the traverse's figures where it gives them (saying so), else those typed. */
 export function labRows(lab: LabResult, { t, show, locale }: Wording): ResultRow[] {
   const rows: ResultRow[] = [];
-  if (lab.ecdMm !== undefined) rows.push({ ...row('ecd', t('app.log.lab.ecd'), show.depth(lab.ecdMm)), main: true });
-  if (lab.surfaceHardness)
-    rows.push(row('surfaceHardness', t('app.log.lab.surfaceHardness'), hardnessText(lab.surfaceHardness, locale)));
-  if (lab.coreHardness)
-    rows.push(row('coreHardness', t('app.log.lab.coreHardness'), hardnessText(lab.coreHardness, locale)));
+  const figures = labFigures(lab);
+  const limit = lab.traverse ? hardnessText(lab.traverse.limit, locale) : '';
+  const fromTraverse = (yes: boolean) => (yes ? t('app.log.lab.fromTraverse', { limit }) : undefined);
+  if (figures.ecdMm !== undefined)
+    rows.push({
+      ...row('ecd', t('app.log.lab.ecd'), show.depth(figures.ecdMm), fromTraverse(figures.fromTraverse.ecd)),
+      main: true,
+    });
+  for (const key of ['surfaceHardness', 'coreHardness'] as const) {
+    const hardness = figures[key];
+    const fromIt = figures.fromTraverse[key === 'surfaceHardness' ? 'surface' : 'core'];
+    if (hardness) rows.push(row(key, t(`app.log.lab.${key}`), hardnessText(hardness, locale), fromTraverse(fromIt)));
+  }
+  if (lab.traverse) rows.push(row('points', t('app.log.lab.points'), String(lab.traverse.points.length)));
   if (lab.surfaceCarbonPct !== undefined)
     rows.push(row('surfaceCarbon', t('app.log.lab.surfaceCarbon'), show.carbon(lab.surfaceCarbonPct)));
   if (lab.by) rows.push(wordRow('by', t('app.log.lab.by'), lab.by));
@@ -147,7 +157,7 @@ export function signedPercent(pct: number, locale: string): string {
 
 /** Predicted against measured, when both are known. */
 export function comparisonRows(job: Job, { t, show, locale }: Wording): ResultRow[] {
-  const pair = ecdComparison(job);
+  const pair = ecdComparison(job, show.depthAsShown);
   if (!pair) return [];
   const rows = [
     row(

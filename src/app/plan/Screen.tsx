@@ -22,6 +22,7 @@ import { fieldSetters } from '../ui/setters';
 import { CycleBand } from '../range/CycleBand';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { FurnaceField } from '../fields/FurnaceField';
+import { learntFurnaces } from '../settings/plantThreshold';
 import { ModelField } from '../fields/ModelField';
 import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
@@ -294,7 +295,7 @@ function PlanPart() {
         word={word}
       />
       <ModelField id="plan-model" value={form.model} onChange={setPlan('model')} ctx={ctx} />
-      <FurnaceField id="plan-furnace" model={formModel} ctx={ctx} />
+      <FurnaceField id="plan-furnace" model={formModel} ctx={ctx} more={learntFurnaces.value} />
     </section>
   );
 }

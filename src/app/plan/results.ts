@@ -4,15 +4,8 @@
  * you type; the screen keeps the last plan, marked updating, until the newest request is answered.
  */
 import { computed, effect } from '@preact/signals';
-import {
-  type InputError,
-  isModelId,
-  PLAN_REQUEST,
-  planTwoStepCycle,
-  type PlanResult,
-  type Result,
-} from '../../physics';
-import { baseValues, cycleDefaults, type CycleDefaults } from '../cycle/results';
+import { type InputError, PLAN_REQUEST, planTwoStepCycle, type PlanResult, type Result } from '../../physics';
+import { baseValues, cycleDefaults, formCalibration, type CycleDefaults } from '../cycle/results';
 import { factorOf, type CalibrationState } from '../settings/calibration';
 import { deferred } from '../ui/Deferred';
 import { NO_ERRORS, type Outcome } from '../ui/outcome';
@@ -68,8 +61,7 @@ export interface PlanRequest {
 export function planRequestOf(form: PlanForm, settings: CycleDefaults): Outcome<PlanRequest> {
   const built = buildPlanRequest(form, settings);
   if (!built.request) return { errors: built.errors };
-  const model = isModelId(built.request.model) ? built.request.model : settings.model;
-  const calibration: CalibrationState = settings.calibrationFor?.(model) ?? { kind: 'none' };
+  const calibration = formCalibration(form, settings);
   const factor = factorOf(calibration);
   const request = factor === 1 ? built.request : { ...built.request, diffusivityFactor: factor };
   return { errors: NO_ERRORS, result: { request, calibration, fields: built.fields } };

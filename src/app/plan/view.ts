@@ -1,7 +1,7 @@
 /** The planner's worded results: times, predictions, what binds and what would help (kept out of the JSX). */
 import type { TFunction } from 'i18next';
 import type { Hardness } from '../../physics';
-import { calibrationWords } from '../fields/calibrationWords';
+import { resultCalibrationWords } from '../fields/learntWords';
 import { ecdLabel } from '../fields/ecdLabel';
 import type { ResultRow } from '../ui/ResultList';
 import type { Show } from '../ui/show';
@@ -31,12 +31,19 @@ const timeRow = (key: string, label: string, hours: number, show: Show, main = f
 });
 
 export function planView({ plan, request, calibration }: PlanOutcome, t: TFunction, show: Show): PlanView {
-  const calibrated = calibrationWords(calibration, t, show);
+  const calibrated = resultCalibrationWords(calibration, t, show);
   const threshold = typeof request.thresholdCarbonPct === 'number' ? request.thresholdCarbonPct : Number.NaN;
   const range = plan.surfaceRangePct;
   const rows: ResultRow[] = [
     ...(calibrated
-      ? [{ key: 'calibration', label: t('app.calibration.label'), value: calibrated.sentence, text: true }]
+      ? [
+          {
+            key: 'calibration',
+            label: calibrated.label ?? t('app.calibration.label'),
+            value: calibrated.sentence,
+            text: true,
+          },
+        ]
       : []),
     {
       key: 'status',

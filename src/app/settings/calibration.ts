@@ -80,7 +80,19 @@ export function setApplied(furnace: string, apply: boolean): void {
 export type CalibrationState =
   | { kind: 'none' }
   | { kind: 'uncalibrated'; furnace: string }
-  | { kind: 'off' | 'otherModel' | 'applied'; furnace: string; calibration: StoredCalibration };
+  | { kind: 'off' | 'otherModel' | 'applied'; furnace: string; calibration: StoredCalibration }
+  /** The steel's threshold learnt in this furnace, with the diffusion speed fitted with it (settings/plantThreshold.ts). */
+  | { kind: 'learnt'; furnace: string; learnt: LearntThreshold };
+
+/** What a calculation takes from a learnt threshold (its full record is StoredThreshold). */
+export interface LearntThreshold {
+  grade: string;
+  thresholdPct: number;
+  low: number;
+  high: number;
+  factor: number;
+  loadCount: number;
+}
 
 /** What the chosen furnace's calibration means for a calculation with `model`. */
 export function calibrationState(
@@ -96,4 +108,5 @@ export function calibrationState(
 }
 
 /** The factor on D a calculation uses (1 unless a calibration is applied). */
-export const factorOf = (state: CalibrationState): number => (state.kind === 'applied' ? state.calibration.factor : 1);
+export const factorOf = (state: CalibrationState): number =>
+  state.kind === 'applied' ? state.calibration.factor : state.kind === 'learnt' ? state.learnt.factor : 1;

@@ -11,6 +11,7 @@ export {
   formatScientific,
   localizeTyped,
   NO_VALUE,
+  resultDigits,
   UNIT_SYMBOLS,
   unitSymbol,
 } from '../../i18n/format';

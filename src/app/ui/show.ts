@@ -3,7 +3,15 @@
  * Every figure on a screen goes through here, so every figure has its unit.
  */
 import { convert, convertTemperatureDifference, hrcToHv, type Hardness } from '../../physics';
-import { formatHoursMinutes, formatNumber, formatQuantity, formatRange, formatScientific, NO_VALUE } from './format';
+import {
+  formatHoursMinutes,
+  formatNumber,
+  formatQuantity,
+  formatRange,
+  formatScientific,
+  NO_VALUE,
+  resultDigits,
+} from './format';
 import { messageFigures, type Figures } from '../../i18n/wording';
 import type { DisplayUnits } from './units';
 
@@ -12,6 +20,8 @@ export interface Show {
   depthRange(minMm: number, maxMm: number): string;
   /** A signed depth change, e.g. "+0.05 mm". */
   depthChange(mm: number): string;
+  /** A depth as `depth` shows it: in the user's unit, rounded to the decimals shown (for verdicts on shown figures). */
+  depthAsShown: (mm: number) => number;
   temperature(tempC: number): string;
   temperatureRange(minC: number, maxC: number): string;
   temperatureDifference(deltaC: number): string;
@@ -43,6 +53,7 @@ export function makeShow(units: DisplayUnits, locale: string): Show {
   return {
     depth: (mm) => formatQuantity(depth(mm), units.depth, locale),
     depthRange: (a, b) => formatRange(depth(a), depth(b), units.depth, locale),
+    depthAsShown: (mm) => Number(depth(mm).toFixed(resultDigits(units.depth))),
     depthChange: (mm) => {
       const text = formatQuantity(depth(mm), units.depth, locale);
       return text === NO_VALUE || mm < 0 || text.startsWith('\u2212') ? text : `+${text}`;

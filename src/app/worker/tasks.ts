@@ -6,6 +6,7 @@
 import type { Job } from '../../jobs';
 // Straight from the module, so the worker does not carry the log's store along.
 import { calibrateFurnace, type FurnaceCalibration } from '../../jobs/calibration';
+import { plantThresholds, type PlantThreshold } from '../../jobs/plantThreshold';
 import {
   cycleDepthBand,
   planTwoStepCycle,
@@ -29,6 +30,12 @@ export interface CalibrationInput {
   model: DiffusivityModelId;
 }
 
+export interface ThresholdInput {
+  /** The jobs with a traverse (the others are not sent). */
+  jobs: readonly Job[];
+  model: DiffusivityModelId;
+}
+
 export const TASKS = {
   /** The two-step planner's search (about 20 simulator runs). */
   plan: (request: Record<string, unknown>): Result<PlanResult> => planTwoStepCycle(request),
@@ -37,6 +44,8 @@ export const TASKS = {
   /** A furnace calibration per furnace (up to 30 lab results each, every one re-run while fitting). */
   calibrate: ({ jobs, furnaces, model }: CalibrationInput): FurnaceCalibration[] =>
     furnaces.map((furnace) => calibrateFurnace(jobs, furnace, { model })),
+  /** The plant's threshold per furnace and grade (each traverse's load re-run at every trial factor). */
+  plantThresholds: ({ jobs, model }: ThresholdInput): PlantThreshold[] => plantThresholds(jobs, model),
 };
 
 export type TaskName = keyof typeof TASKS;

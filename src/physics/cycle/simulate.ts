@@ -87,6 +87,15 @@ export function runCycle(
   };
 }
 
+/**
+ * The depth (mm) at which a validated recipe's final carbon profile falls to any level: one solve,
+ * then read off at as many levels as asked (the plant threshold's fit reads two per load and factor).
+ */
+export function carbonDepthsOfCycle(recipe: Recipe, resolution = 1): (carbonPct: number) => number {
+  const run = solveRecipe(recipe, { resolution });
+  return (carbonPct) => depthToCarbonM(run, carbonPct) * 1e3;
+}
+
 /** Every number a result shows is finite (a last guard; the scheme keeps carbon bounded). */
 function allFinite(result: SimulationResult): boolean {
   const { effectiveCaseDepthMm, totalCaseDepthMm, surfaceCarbonPct, profile, surfaceHistory: history } = result;

@@ -14,4 +14,4 @@ export * from './transfer';
 export * from './calibration';
 export { JOBS_STORE, LATEST_DB_VERSION } from './migrations';
 export type { Alternative } from './documents';
-export type { LogDatabase, PouchFactory } from './pouch';
+export type { Emitter, LogDatabase, PouchFactory } from './pouch';

@@ -20,6 +20,8 @@ export interface ShopSetup {
   people: ShopPerson[];
   /** pouchdb-server starts with no admin: create this one first. CouchDB 3 has one from its install. */
   createAdmin?: boolean;
+  /** Load the rules design document (default true; see test/server/shopServer.ts for why tests may not). */
+  rules?: boolean;
 }
 
 function authHeader(admin: ShopSetup['admin']): string {
@@ -65,7 +67,7 @@ export async function setUpShop(setup: ShopSetup): Promise<void> {
     ),
     'setting who may use the database',
   );
-  await upsert(`${db}/${designDocument()._id}`, designDocument(), auth);
+  if (setup.rules !== false) await upsert(`${db}/${designDocument()._id}`, designDocument(), auth);
   for (const person of setup.people) {
     await upsert(
       `${base}_users/org.couchdb.user:${encodeURIComponent(person.name)}`,

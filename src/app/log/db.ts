@@ -14,6 +14,7 @@ import {
   type LogDatabase,
   type PersistOutcome,
 } from '../../jobs';
+import { currentUser } from '../sync/session';
 import { persisted } from '../ui/persist';
 
 let opening: Promise<JobsResult<JobStore>> | undefined;
@@ -43,7 +44,7 @@ export async function jobStore(): Promise<JobsResult<JobStore>> {
   if (current?.ok && !current.value.closed) return current;
   if (typeof indexedDB === 'undefined') return failWith('storage.unavailable');
   opening = browserPouch().then(
-    (pouch) => openJobStore({ pouch }),
+    (pouch) => openJobStore({ pouch, user: currentUser }),
     () => failWith<JobStore>('storage.failed', { name: 'LoadFailed' }),
   );
   const result = await opening;

@@ -11,7 +11,10 @@ import {
   convertRequest,
   equivalentTime,
   type InputError,
+  OUTPUT_PRECISION,
+  type OutputPrecision,
   planTwoStepCycle,
+  roundForOutput,
   type Result,
   simulateCycle,
   temperatureForCaseDepth,
@@ -46,7 +49,10 @@ interface CliError {
 const WORDED_LISTS = new Set(['warnings', 'suggestions']);
 const WORDED_ITEMS = new Set(['binding']);
 
-const worded = (w: Warning) => ({ ...w, message: warningMessage(t, w) });
+/** Plain spaces in the CLI's sentences: the screen's narrow no-break space between figure and unit gets in the way of grep. */
+const plainSpaces = (text: string) => text.replace(/\u202f/gu, ' ');
+
+const worded = (w: Warning) => ({ ...w, message: plainSpaces(warningMessage(t, w)) });
 
 /** Adds the English sentence to every warning and planner finding in a result, wherever it sits. */
 function wordWarnings(value: unknown): unknown {
@@ -61,25 +67,26 @@ function wordWarnings(value: unknown): unknown {
 }
 
 /**
- * Decimals kept in the JSON output by the unit a key names (depthMm, carbonPct, tempC, timeH,
- * hardnessHrc): finer than any figure the trade reads, without floating noise (900.0000000000001).
- * Keys without a unit keep 6 significant digits; very small quantities (D, β) 4 significant.
+ * Precision of the JSON output by the unit a key names (depthMm, carbonPct, tempC, timeH, hardnessHrc):
+ * finer than any figure the trade reads, without floating noise (900.0000000000001). Keys without a
+ * unit keep 6 significant digits; very small quantities (D, β) 4 significant.
  */
-const DECIMALS_BY_UNIT: readonly [RegExp, number][] = [
-  [/Mm$/u, 4],
-  [/Pct$/u, 4],
-  [/(?:^|[a-z])C$/u, 2],
-  [/(?:^|[a-z])H$/u, 4],
-  [/Hrc$/u, 1],
-  [/Hv$/u, 0],
+const PRECISION_BY_UNIT: readonly [RegExp, OutputPrecision][] = [
+  [/Mm$/u, OUTPUT_PRECISION.mm],
+  [/Pct$/u, OUTPUT_PRECISION.pct],
+  [/(?:^|[a-z])C$/u, OUTPUT_PRECISION.C],
+  [/(?:^|[a-z])H$/u, OUTPUT_PRECISION.h],
+  [/Hrc$/u, OUTPUT_PRECISION.hrc],
+  [/Hv$/u, OUTPUT_PRECISION.hv],
+  [/(?:M2PerS|MPerS)$/u, OUTPUT_PRECISION.small],
 ];
-const SIGNIFICANT_SMALL = /(?:M2PerS|MPerS)$/u;
+
+const precisionOf = (key: string | undefined) =>
+  key === undefined ? undefined : PRECISION_BY_UNIT.find(([pattern]) => pattern.test(key))?.[1];
 
 function roundFor(key: string | undefined, value: number): number {
-  if (Number.isInteger(value) || value === 0) return value;
-  if (key !== undefined && SIGNIFICANT_SMALL.test(key)) return Number(value.toPrecision(4));
-  const decimals = key === undefined ? undefined : DECIMALS_BY_UNIT.find(([pattern]) => pattern.test(key))?.[1];
-  return decimals === undefined ? Number(value.toPrecision(6)) : Number(value.toFixed(decimals));
+  if (value === 0) return value;
+  return roundForOutput(value, precisionOf(key) ?? OUTPUT_PRECISION.plain);
 }
 
 /** Every number of a result rounded by the unit of its own key, or of the nearest enclosing key that names one. */
@@ -92,11 +99,11 @@ export function roundOutput(value: unknown, key?: string): unknown {
   );
 }
 
-const hasUnit = (key: string) => SIGNIFICANT_SMALL.test(key) || DECIMALS_BY_UNIT.some(([pattern]) => pattern.test(key));
+const hasUnit = (key: string) => precisionOf(key) !== undefined;
 
 const inputError = (error: InputError): CliError => ({
   code: error.code,
-  message: errorMessage(t, error),
+  message: plainSpaces(errorMessage(t, error)),
   ...(error.field === undefined ? {} : { field: error.field }),
 });
 

@@ -22,7 +22,7 @@ describe('CLI (runCli)', () => {
       error: {
         code: 'temperature.outOfRange',
         field: 'temperatureC',
-        message: 'Temperature 1200 °C is outside 727–1150 °C.',
+        message: 'Temperature 1200 °C: it must be between 727 °C and 1150 °C.',
       },
     });
   });

@@ -7,6 +7,7 @@ import de from '../../locales/de/translation.json';
 import en from '../../locales/en/translation.json';
 import es from '../../locales/es/translation.json';
 import type { InputError, Warning } from '../physics';
+import { messageFigures, PHYSICS_MESSAGE_UNITS, wordError, wordWarning } from './wording';
 
 export const LANGUAGES = ['en', 'es', 'de'] as const;
 export type Language = (typeof LANGUAGES)[number];
@@ -31,12 +32,12 @@ export function createI18n(language: Language = 'en'): i18n {
   return instance;
 }
 
-/** The sentence for a physics error, in the instance's language. */
-export function errorMessage(t: TFunction, error: InputError): string {
-  return t(`errors.${error.code}`, error.params ?? {});
+/** The sentence for a physics error, figures in physics' units (°C, mm, h) and the locale's notation. */
+export function errorMessage(t: TFunction, error: InputError, locale = 'en'): string {
+  return wordError(t, error, messageFigures(PHYSICS_MESSAGE_UNITS, locale));
 }
 
-/** The sentence for a physics caution, in the instance's language. */
-export function warningMessage(t: TFunction, warning: Warning): string {
-  return t(`warnings.${warning.code}`, warning.params ?? {});
+/** The sentence for a physics caution, figures in physics' units and the locale's notation. */
+export function warningMessage(t: TFunction, warning: Warning, locale = 'en'): string {
+  return wordWarning(t, warning, messageFigures(PHYSICS_MESSAGE_UNITS, locale));
 }

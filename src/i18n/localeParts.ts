@@ -28,9 +28,6 @@ export const FIRST_SCREEN_KEYS: readonly string[] = [
   'app.steel',
   'app.models',
   'app.depth',
-  'app.unitErrors',
-  // Cautions are worded by one function for every screen (ui/warningText.ts), so all of them.
-  'app.unitWarnings',
   'app.cycle.stepCaution',
   'app.band.label',
   'app.band.models',

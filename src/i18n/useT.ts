@@ -118,8 +118,33 @@ export function useT(): TFunction {
   return currentTranslator.value.t;
 }
 
+/** Texts remembered per translator before the memory starts again (a session types many different figures). */
+const REMEMBERED_TEXTS = 2000;
+
+/**
+ * The translator with each text remembered by its key and options: a screen asks for the same
+ * words on every keystroke, and i18next resolves, nests and interpolates every call afresh.
+ * A new one is made whenever the language changes or a part arrives, so nothing stale is kept.
+ */
+export function rememberingT(t: TFunction): TFunction {
+  const texts = new Map<string, unknown>();
+  const remembering = (key: unknown, options?: unknown, ...rest: unknown[]): unknown => {
+    const call = t as unknown as (...args: unknown[]) => unknown;
+    // Only the plain forms (a key, optionally with an options object of data) are remembered.
+    if (typeof key !== 'string' || rest.length > 0 || (options !== undefined && typeof options !== 'object'))
+      return call(key, options, ...rest);
+    const id = options === undefined ? key : `${key}\u0000${JSON.stringify(options)}`;
+    if (texts.has(id)) return texts.get(id);
+    const text = call(key, options);
+    if (texts.size >= REMEMBERED_TEXTS) texts.clear();
+    texts.set(id, text);
+    return text;
+  };
+  return remembering as unknown as TFunction;
+}
+
 /** A new value whenever the language changes or a part arrives, so reading it subscribes a component to both. */
-const currentTranslator = computed(() => ({ t: tFor(language.value), parts: loadedParts.value }));
+const currentTranslator = computed(() => ({ t: rememberingT(tFor(language.value)), parts: loadedParts.value }));
 
 export function initialLanguage(stored: unknown): Language {
   if (isLanguage(stored)) return stored;

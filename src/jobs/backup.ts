@@ -70,13 +70,14 @@ export function parseBackup(text: string): JobsResult<Backup> {
     return failWith('import.notJson');
   }
   if (!isObject(data) || data.format !== BACKUP_FORMAT) return failWith('import.wrongFormat');
-  if (data.version !== JOB_RECORD_VERSION) {
+  if (data.version !== JOB_RECORD_VERSION && data.version !== 2) {
     return failWith('import.unsupportedVersion', {
       version: typeof data.version === 'number' ? data.version : String(data.version),
       supported: JOB_RECORD_VERSION,
     });
   }
-  const parsed = v.safeParse(BackupSchema, data);
+  // A version-2 file's jobs are read as the upgrade reads a version-2 database (jobFromV2: no field moves).
+  const parsed = v.safeParse(BackupSchema, { ...data, version: JOB_RECORD_VERSION });
   if (parsed.success) return succeed(parsed.output);
   const issues = issuesOf(parsed.issues);
   return failWith('import.invalid', { count: parsed.issues.length }, issues);

@@ -8,6 +8,7 @@
  * written unguarded (a negative difference stays -0.05 and stays a number); they come from
  * validated numeric fields, never from text.
  */
+import { OUTPUT_PRECISION, roundForOutput, type OutputPrecision } from '../physics';
 import { ecdComparison } from './summary';
 import type { Job } from './schema';
 
@@ -99,12 +100,25 @@ export const CSV_COLUMNS: readonly CsvColumn[] = [
   { header: 'notes', value: (j) => j.notes },
 ];
 
-/** One row of cells as written: text guarded, numbers in the chosen decimal mark. */
+/** How finely a column's numbers are written, by the unit its name ends in (no 0.30000000000000004). */
+function precisionOfColumn(header: string): OutputPrecision {
+  if (header.endsWith('_mm')) return OUTPUT_PRECISION.mm;
+  if (header.endsWith('_pct')) return OUTPUT_PRECISION.pct;
+  if (header.endsWith('_c')) return OUTPUT_PRECISION.C;
+  if (header.endsWith('_h')) return OUTPUT_PRECISION.h;
+  if (header.endsWith('hardness')) return OUTPUT_PRECISION.hrc;
+  return OUTPUT_PRECISION.plain;
+}
+
+/** One row of cells as written: text guarded, numbers rounded by their column's unit, in the chosen decimal mark. */
 export function csvRow(job: Job, decimalMark: '.' | ',' = '.'): string[] {
-  return CSV_COLUMNS.map(({ value }) => {
+  return CSV_COLUMNS.map(({ header, value }) => {
     const cell = value(job);
     if (cell === undefined) return '';
-    if (typeof cell === 'number') return decimalMark === ',' ? String(cell).replace('.', ',') : String(cell);
+    if (typeof cell === 'number') {
+      const text = String(roundForOutput(cell, precisionOfColumn(header)));
+      return decimalMark === ',' ? text.replace('.', ',') : text;
+    }
     return guardText(cell);
   });
 }

@@ -1,5 +1,5 @@
 /**
- * The job record (record version 2): one load on one shift, from the plan to the lab's
+ * The job record (record version 3): one load on one shift, from the plan to the lab's
  * traverse. The valibot schema is the single source: the TypeScript type is derived from it,
  * stored records are checked with it on read, and backup files on import.
  */
@@ -18,7 +18,7 @@ import { FURNACE_NAME_MAX, NOTES_MAX, SHORT_TEXT_MAX } from './limits';
 import { SHIFT_IDS } from './shift';
 
 /** Version of the record shape; also the IndexedDB version and the backup `version`. */
-export const JOB_RECORD_VERSION = 2;
+export const JOB_RECORD_VERSION = 3;
 
 /** Status ids (English code; the words are under `jobs.status.` in the locales). */
 export const JOB_STATUSES = ['planned', 'inFurnace', 'done', 'onHold', 'rejected'] as const;

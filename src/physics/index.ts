@@ -11,12 +11,14 @@ export {
   ok,
   type ErrorCode,
   type InputError,
+  type Params,
   type Result,
   type Warning,
   type WarningCode,
 } from './result';
 export { UNITS, convert, convertTemperatureDifference, parseNumber, quantityOf, type TimeUnit } from './units';
 export { parseDuration } from './duration';
+export { OUTPUT_PRECISION, roundForOutput, type OutputPrecision } from './precision';
 export {
   CARBON_DEPENDENCE_POINT,
   DEFAULT_MODEL,
@@ -42,6 +44,7 @@ export {
   CASE_CRITERIA,
   CASE_CRITERION_IDS,
   DEFAULT_CASE_CRITERION,
+  CONVERTIBLE_RANGE as CONVERTIBLE_HARDNESS_RANGE,
   HARDNESS_SCALE_RANGE,
   HARDNESS_UNITS,
   hardnessIn,
@@ -72,6 +75,7 @@ export {
   MAX_TOTAL_CASE_MARGIN_PCT,
   checkBeta,
   checkCarbonPct,
+  checkDepthMm,
   checkTemperatureC,
   checkTemperatureTolerance,
   checkTimeH,
@@ -109,6 +113,25 @@ export {
 } from './cycle/recipe';
 export { readRecipe } from './cycle/readRecipe';
 export { LIMITS, MAX_STEPS, TEXT_LENGTH_LIMITS, checkLimit, withinLimit, type Limit, type ValueUnit } from './limits';
+export {
+  readRequest,
+  specAt,
+  type FieldSpec,
+  type FieldsSpec,
+  type NumberSpec,
+  type ReadOf,
+  type RequestOf,
+} from './requestSpec';
+export {
+  CONVERT_REQUEST,
+  DEPTH_REQUEST,
+  EQUIVALENT_TIME_REQUEST,
+  PLAN_REQUEST,
+  RECIPE_REQUEST,
+  REQUESTS,
+  TEMPERATURE_REQUEST,
+  TIME_REQUEST,
+} from './requestTables';
 export { runCycle, simulateCycle } from './cycle/simulate';
 export { cycleDepthBand, type CycleBand, type CycleBandOptions } from './cycle/band';
 /** Reproducible pseudo-random numbers, for synthetic data (the demo log), never for anything secret. */

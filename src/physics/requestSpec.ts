@@ -242,6 +242,7 @@ function readVariant(spec: VariantSpec, raw: unknown): Result<Fields> {
   const fields = asFields(raw);
   if (!fields.ok) return fail(spec.unknown, 'kind', { kind: shownValue(raw) });
   const kind = fields.value.kind;
+  if (kind === undefined || kind === null || kind === '') return fail('field.missing', 'kind');
   const option = typeof kind === 'string' && Object.hasOwn(spec.options, kind) ? spec.options[kind] : undefined;
   if (!option) return fail(spec.unknown, 'kind', { kind: shownValue(kind) });
   const read = readFields(option, fields.value);

@@ -27,6 +27,7 @@ export const ERROR_CODES = [
   'depth.tooDeep',
   'model.unknown',
   'composition.outOfRange',
+  'composition.notObject',
   'composition.unknownElement',
   'beta.notPositive',
   'diffusivityFactor.outOfRange',

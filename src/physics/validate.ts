@@ -100,7 +100,7 @@ export function readComposition(fields: Fields, field = 'composition'): Result<C
   const raw = fields[field];
   if (raw === undefined || raw === null) return ok(undefined);
   const obj = asFields(raw);
-  if (!obj.ok) return fail('composition.outOfRange', field);
+  if (!obj.ok) return fail('composition.notObject', field);
   const unknown = Object.keys(obj.value).find((k) => !(ALLOY_ELEMENTS as readonly string[]).includes(k));
   if (unknown !== undefined) return fail('composition.unknownElement', `${field}.${unknown}`, { element: unknown });
   const composition: Composition = { Si: 0, Mn: 0, Cr: 0, Ni: 0, Mo: 0 };

@@ -28,6 +28,7 @@ import { hrefFor, screenFromHash, subPathFromHash } from '../../src/app/shell/ro
 import { CUSTOM_STEEL } from '../../src/app/fields/steel';
 import { field } from '../../src/app/ui/fieldText';
 import { makeShow } from '../../src/app/ui/show';
+import { wordError } from '../../src/app/ui/fieldError';
 import { APP_VERSION } from '../../src/app/version';
 import { createI18n } from '../../src/i18n/i18n';
 import { JobDraftSchema, JobSchema, OPEN_STATUSES } from '../../src/jobs';
@@ -110,7 +111,7 @@ describe('what the calculators hand to the log', () => {
     const outcome = computeRecovery(DEFAULT_RECOVERY_FORM, 'agren');
     const line = recoveryNote(outcome.result!, t, makeShow({ temperature: 'F', depth: 'mm', time: 'h' }, 'en'));
     expect(line).toMatch(
-      /^Upset: 0\s?h 40\s?min on the clock counted as .* at 1,697\s?°F; still needed at 1,697\s?°F: \d+\s?h \d+\s?min\.$/u,
+      /^Upset: 0\s?h 40\s?min on the clock counted as .* at 1697\s?°F; still needed at 1697\s?°F: \d+\s?h \d+\s?min\.$/u,
     );
     expect(appendLine('', line)).toBe(line);
     expect(appendLine('Coupon in basket 3.\n', line)).toBe(`Coupon in basket 3.\n${line}`);
@@ -232,6 +233,31 @@ describe('job and lab forms', () => {
     expect(bad.errors.surfaceCarbon?.code).toBe('number.invalid');
     expect(labFieldOf('lab.surfaceHardness')).toBe('surfaceHardness');
     expect(labFieldOf('lab.measuredAt')).toBe('at');
+  });
+
+  it('a lab value out of bounds is worded beside its field with the allowed range and unit, before any store', () => {
+    const es = createI18n('es').t;
+    const bad = readLabForm({
+      ...labFormOf(undefined),
+      ecd: field('0', 'mm'),
+      surfaceHardness: field('85'),
+      coreHardness: field('366,7'),
+      surfaceCarbon: field('2,5'),
+    });
+    expect(bad.lab).toBeUndefined();
+    const metric = { temperature: 'C', depth: 'mm', time: 'h' } as const;
+    expect(wordError(t, bad.errors.ecd!, metric, 'en')).toBe('Depth must be more than zero.');
+    expect(wordError(t, bad.errors.surfaceHardness!, metric, 'en')).toBe(
+      '85 HRC is outside 0–80 HRC; check the entry.',
+    );
+    expect(bad.errors.coreHardness).toBeUndefined();
+    expect(wordError(es, bad.errors.surfaceCarbon!, metric, 'es')).toBe(
+      'El carbono 2,5\u202f%C supera 2,11\u202f%C, lo máximo que admite la austenita.',
+    );
+    const deep = readLabForm({ ...labFormOf(undefined), ecd: field('0,5', 'in') });
+    expect(wordError(t, deep.errors.ecd!, { ...metric, depth: 'in' }, 'en')).toBe(
+      'Depth 0.5\u202fin is deeper than 0.394\u202fin; check the entry.',
+    );
   });
 
   it('a stored lab result comes back into the form as it was', () => {

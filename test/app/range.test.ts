@@ -4,7 +4,7 @@ import { defaults, readBetaRange, readTolerance, settings } from '../../src/app/
 import { field, readTemperatureDifferenceC, temperatureDifferenceText } from '../../src/app/ui/fieldText';
 import { makeShow } from '../../src/app/ui/show';
 import { timed } from '../../src/app/ui/timing';
-import { UNIT_WARNINGS, wordWarning } from '../../src/app/ui/warningText';
+import { wordWarning } from '../../src/app/ui/warningText';
 import { createI18n, warningMessage } from '../../src/i18n/i18n';
 
 describe('furnace temperature tolerance', () => {
@@ -66,17 +66,20 @@ describe('warnings in the user’s units', () => {
       'Raise the boost and diffuse temperatures by about 18\u202f°F (estimate).',
     );
     expect(wordWarning(en, { code: 'shape.throughCarburizing', params: { depthMm: 2.54, limitMm: 5.08 } }, us)).toBe(
-      'The case reaches 0.100\u202fin, more than a third of the 0.200\u202fin available: risk of through-carburizing.',
+      'The case reaches 0.1\u202fin, more than a third of the 0.2\u202fin available: risk of through-carburizing.',
     );
   });
-  it('formats figures the user’s way (decimal comma in Spanish) and leaves messages without units as physics words them', () => {
+  it('formats figures the user’s way (decimal comma in Spanish), in every message, the CLI’s way in physics units', () => {
     const show = makeShow({ temperature: 'C', depth: 'mm', time: 'h' }, 'es');
     expect(
       wordWarning(es, { code: 'plan.missedInFinalCheck', params: { ecdMm: 0.748, surfacePct: 0.905 } }, show),
-    ).toMatch(/^La comprobación final del plan da 0,75\u202fmm y 0,91\u202f%C/u);
-    const plain = { code: 'plan.lowerBoostPotential' as const, params: { potentialPct: 1.15 } };
-    expect(UNIT_WARNINGS[plain.code]).toBeUndefined();
-    expect(wordWarning(en, plain, show)).toBe(warningMessage(en, plain));
+    ).toMatch(/^La comprobación final del plan da 0,748\u202fmm y 0,905\u202f%C/u);
+    const finding = { code: 'plan.lowerBoostPotential' as const, params: { potentialPct: 1.1500000000000001 } };
+    expect(wordWarning(es, finding, show)).toMatch(/ 1,15\u202f%C\b/u);
+    // Metric units and English: the same sentence as the CLI's.
+    expect(wordWarning(en, finding, makeShow({ temperature: 'C', depth: 'mm', time: 'h' }, 'en'))).toBe(
+      warningMessage(en, finding),
+    );
   });
 });
 

@@ -46,7 +46,7 @@ describe('errors worded in the chosen units', () => {
       { temperature: 'F', depth: 'in', time: 'h' },
       'en',
     );
-    expect(message).toBe('Temperature 2,192\u202f°F is outside 1,292\u202f°F to 2,102\u202f°F.');
+    expect(message).toBe('Temperature 2192\u202f°F: it must be between 1292\u202f°F and 2102\u202f°F.');
   });
   it('errors without unit-bearing figures use the physics message', () => {
     expect(wordError(t, { code: 'number.empty' }, { temperature: 'C', depth: 'mm', time: 'h' }, 'en')).toBe(

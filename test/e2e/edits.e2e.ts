@@ -73,6 +73,8 @@ describe('edits never write old values over newer ones, and half-typed entries s
     await tab1.click('button:has-text("Edit the current version, keeping my entries")');
     assert.equal(await tab1.inputValue('#job-edit-notes'), 'Typed in tab 1.');
     await tab1.click('button:has-text("Save changes")');
+    // The earlier "Changes saved." may still be on the page: the form closing is what says this save went in.
+    await tab1.waitForSelector('#job-edit-notes', { state: 'detached' });
     await tab1.waitForSelector('.log-saved:has-text("Changes saved.")');
     assert.equal((await stored(tab1, id)).notes, 'Typed in tab 1.');
     assert.deepEqual(recorder.problems, []);
@@ -112,11 +114,11 @@ describe('edits never write old values over newer ones, and half-typed entries s
     assert.equal((await stored(page, id)).notes, 'Half a sentence about the quench');
 
     await page.click('button:has-text("lab result")');
-    await page.fill('#lab-ecd', '0,83');
+    await page.fill('#lab-ecd', '0.83');
     await page.fill('#lab-by', 'QL');
     await page.reload();
     await page.waitForSelector('#lab-ecd');
-    assert.equal(await page.inputValue('#lab-ecd'), '0,83');
+    assert.equal(await page.inputValue('#lab-ecd'), '0.83');
     assert.equal(await page.inputValue('#lab-by'), 'QL');
     // Another tab of the same browser does not inherit this tab's draft.
     const other = await context.newPage();

@@ -31,7 +31,9 @@ describe('offline', () => {
     // Chromium 150 reports navigator.onLine true in a page reloaded under offline emulation: the app
     // must find out from its own server not answering (src/pwa/reachability.ts).
     await page.waitForSelector('.offline-status[data-offline-state="offline"]');
-    assert.equal(await page.inputValue('#depth-time'), '7,5');
+    // Kept as typed; shown, when not being typed in, in the page's notation (English: a point).
+    assert.equal(await page.inputValue('#depth-time'), '7.5');
+    assert.match((await page.evaluate(() => localStorage.getItem('casefront.form.depth'))) ?? '', /"7,5"/u);
     assert.equal(await page.textContent('.answer-value'), online);
     // Chromium 150 keeps the page offline across the reload (a request fails) but reports
     // navigator.onLine true on the new document until the emulation changes: change it again.
@@ -94,11 +96,12 @@ describe('update prompt', () => {
         await page.evaluate(() => navigator.serviceWorker.getRegistration().then((r) => Boolean(r?.waiting))),
         true,
       );
-      assert.equal(await page.inputValue('#recovery-required'), '5,5');
+      assert.equal(await page.inputValue('#recovery-required'), '5,5'); // still being typed in: as typed
 
       await Promise.all([page.waitForEvent('load'), page.click('.update-prompt .button-primary')]);
       await page.waitForSelector('main h1');
-      assert.equal(await page.inputValue('#recovery-required'), '5,5');
+      assert.equal(await page.inputValue('#recovery-required'), '5.5');
+      assert.match((await page.evaluate(() => localStorage.getItem('casefront.form.recovery'))) ?? '', /"5,5"/u);
       assert.equal(await page.locator('.update-prompt').count(), 0);
       assert.equal(
         await page.evaluate(() => navigator.serviceWorker.getRegistration().then((r) => Boolean(r?.waiting))),

@@ -79,9 +79,9 @@ describe('planning a two-step cycle', () => {
     await page.waitForSelector('.plan-findings');
     assert.match(
       (await page.textContent('.plan-binding')) ?? '',
-      /^Surface carbon of at least 0.85 % is above what the diffuse potential 0.8 %/u,
+      /^Surface carbon of at least 0.85\s?%C is above what the diffuse potential 0.8\s?%C/u,
     );
-    assert.equal(await page.textContent('.plan-suggestions li'), 'Raise the diffuse potential to about 0.88 %.');
+    assert.equal(await page.textContent('.plan-suggestions li'), 'Raise the diffuse potential to about 0.88\u202f%C.');
     assert.equal(await page.isDisabled('#log-save button'), true);
     const planMs = await measures(page, 'plan');
     // At most one plan per change: a change typed while one is worked out replaces the one waiting.

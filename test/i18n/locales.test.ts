@@ -6,7 +6,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { LANGUAGES, RESOURCES } from '../../src/i18n/i18n';
 import { CASE_CRITERION_IDS, ERROR_CODES, WARNING_CODES } from '../../src/physics';
-import { UNIT_WARNINGS } from '../../src/app/ui/warningText';
+import { figureKind } from '../../src/i18n/wording';
 import { sourceFiles } from '../sourceFiles';
 import { HEADER_SCREEN, NAV_SCREENS } from '../../src/app/shell/screens';
 
@@ -49,6 +49,23 @@ describe('locales', () => {
     expect(missing).toEqual([]);
   });
 
+  it.each(LANGUAGES)('%s writes no unit after a figure that brings its own (errors and cautions)', (lng) => {
+    // "{{value}} mm" would print "10 mm mm": the formatter attaches the unit of depths, temperatures, times, carbon.
+    const doubled: string[] = [];
+    for (const [top, codes] of [
+      ['errors', ERROR_CODES],
+      ['warnings', WARNING_CODES],
+    ] as const) {
+      for (const code of codes) {
+        const message = String(lookup(RESOURCES[lng], `${top}.${code}`));
+        for (const match of message.matchAll(/\{\{(\w+)\}\}\s*(°C|°F|mm|h\b|%)/gu)) {
+          if (figureKind(code, match[1]!) !== 'number') doubled.push(`${top}.${code}: ${match[0]}`);
+        }
+      }
+    }
+    expect(doubled).toEqual([]);
+  });
+
   it.each(LANGUAGES)('%s uses the same {{placeholders}} as en in every message', (lng) => {
     const placeholders = (text: unknown) => [...String(text).matchAll(/{{\s*(\w+)/g)].map((m) => m[1]).sort();
     const differing = [...english].filter(
@@ -74,7 +91,6 @@ describe('locales', () => {
       ['app.log.tabs.', ['list', 'summary', 'files']],
       ['app.cycleTabs.', ['cycle', 'plan']],
       ['app.plan.steps.', ['boost', 'diffuse', 'hardening']],
-      ['app.unitWarnings.', Object.keys(UNIT_WARNINGS)],
       ['app.log.fields.', ['workOrder', 'partNumber', 'furnace', 'operator', 'status', 'notes', 'gradeName']],
       ['app.log.lab.', ['ecd', 'surfaceHardness', 'coreHardness', 'surfaceCarbon', 'by', 'at']],
       ['app.models.', ['agren', 'tibbetts', 'wells-batz-mehl']],
@@ -117,16 +133,6 @@ describe('locales', () => {
       .flatMap(([prefix, values]) => values.map((v) => prefix + v))
       .filter((key) => !english.has(key));
     expect(missing).toEqual([]);
-    // A unit-aware warning takes exactly the placeholders of the physics message it replaces.
-    const placeholders = (key: string) =>
-      [...String(lookup(RESOURCES.en, key)).matchAll(/{{\s*(\w+)/g)]
-        .map((m) => m[1])
-        .sort()
-        .join();
-    const mismatched = Object.keys(UNIT_WARNINGS).filter(
-      (code) => placeholders(`app.unitWarnings.${code}`) !== placeholders(`warnings.${code}`),
-    );
-    expect(mismatched).toEqual([]);
     const notes = ['atmosphere', 'purge', 'quench', 'estimates'].flatMap((n) => [
       `app.safety.notes.${n}.title`,
       `app.safety.notes.${n}.text`,

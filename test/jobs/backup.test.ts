@@ -3,7 +3,7 @@ import { createI18n, LANGUAGES } from '../../src/i18n/i18n';
 import { backupToJson, createBackup, parseBackup } from '../../src/jobs/backup';
 import { demoJobs } from '../../src/app/log/demo/demoLog';
 import { describeJobsError } from '../../src/jobs/result';
-import type { Job } from '../../src/jobs/schema';
+import { JOB_RECORD_VERSION, type Job } from '../../src/jobs/schema';
 import { exportBackup, exportFileName, importBackup } from '../../src/jobs/transfer';
 import { freshStore, pinionDraft, snapshot, unwrap } from './helpers';
 
@@ -20,7 +20,7 @@ describe('JSON backup: export, wipe, import', () => {
     const data = JSON.parse(file.text);
     expect(data).toMatchObject({
       format: 'casefront-job-log',
-      version: 2,
+      version: JOB_RECORD_VERSION,
       exportedAt: END.toISOString(),
       appVersion: '0.1.0',
     });
@@ -178,7 +178,11 @@ describe('invalid imports leave the log unchanged and say what is wrong', () => 
     ['a CSV file', () => 'id,created_at\n1,2', 'import.notJson'],
     ["another program's JSON", () => JSON.stringify({ rows: [] }), 'import.wrongFormat'],
     ['an array', () => '[]', 'import.wrongFormat'],
-    ['a newer version', () => JSON.stringify({ ...valid(), version: 3 }), 'import.unsupportedVersion'],
+    [
+      'a newer version',
+      () => JSON.stringify({ ...valid(), version: JOB_RECORD_VERSION + 1 }),
+      'import.unsupportedVersion',
+    ],
     [
       'one bad initials among good records',
       () => {

@@ -38,13 +38,22 @@ describe('CSV formula-injection guard (text cells only)', () => {
     expect(row.part_number).toBe("'+KR-2231");
     expect(row.notes).toBe("'-10 °C dip at 2 h");
     expect(row.measured_by).toBe("'@lab");
-    expect(Number(row.ecd_difference_mm)).toBeCloseTo(-0.05, 12);
+    // 0.8 − 0.85 is −0.04999999999999993 in floating point: written rounded to the column's unit.
+    expect(row.ecd_difference_mm).toBe('-0.05');
     expect(row.ecd_difference_mm!.startsWith('-')).toBe(true);
     expect(row.ecd_difference_pct!.startsWith('-')).toBe(true);
   });
 });
 
 describe('CSV export', () => {
+  it('no number cell of 200 demo jobs carries floating noise (at most 4 decimals, or 6 significant digits)', () => {
+    const noisy = demoJobs({ count: 200, end: new Date('2025-05-01T12:00:00Z'), seed: 9 })
+      .flatMap((job) => csvRow(job))
+      .filter((cell) => /^-?\d+\.\d+$/u.test(cell))
+      .filter((cell) => cell.split('.')[1]!.length > 4 && cell.replace(/[-.]/gu, '').replace(/^0+/u, '').length > 6);
+    expect(noisy).toEqual([]);
+  });
+
   it('header row with units in the names, one row per job, ISO 8601 dates', async () => {
     const jobs = demoJobs({ count: 25, end: new Date('2025-05-01T12:00:00Z'), seed: 9 });
     const text = await jobsToCsv(jobs);

@@ -11,8 +11,8 @@ export function ProfileChart({ data, label, theme }: { data: ProfileChartData; l
     let cancelled = false;
     void import('./chart').then(({ mountProfileChart }) => {
       if (cancelled || !box.current) return;
-      if (chart.current) chart.current.update(data);
-      else chart.current = mountProfileChart(box.current, data);
+      if (chart.current) chart.current.update(data, theme);
+      else chart.current = mountProfileChart(box.current, data, theme);
     });
     return () => {
       cancelled = true;

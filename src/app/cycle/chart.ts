@@ -28,7 +28,9 @@ export interface ProfileChartData {
 
 const cssVar = (name: string) => getComputedStyle(document.documentElement).getPropertyValue(name).trim() || '#888';
 
-function options(data: ProfileChartData, width: number): uPlot.Options {
+/** `shown()` is the data drawn now: the ECD mark reads it on every draw, so new data needs no new chart. */
+function options(shown: () => ProfileChartData, width: number): uPlot.Options {
+  const data = shown();
   const text = cssVar('--text');
   const grid = cssVar('--line');
   const carbon = cssVar('--chart-carbon');
@@ -66,7 +68,8 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
     hooks: {
       draw: [
         (u) => {
-          const x = u.valToPos(data.ecd, 'x', true);
+          const { ecd, labels } = shown();
+          const x = u.valToPos(ecd, 'x', true);
           if (!Number.isFinite(x)) return;
           const ctx = u.ctx;
           ctx.save();
@@ -79,7 +82,7 @@ function options(data: ProfileChartData, width: number): uPlot.Options {
           ctx.stroke();
           ctx.fillStyle = mark;
           ctx.font = `600 ${12 * devicePixelRatio}px system-ui, sans-serif`;
-          ctx.fillText(data.labels.ecd, x + 4 * devicePixelRatio, u.bbox.top + 14 * devicePixelRatio);
+          ctx.fillText(labels.ecd, x + 4 * devicePixelRatio, u.bbox.top + 14 * devicePixelRatio);
           ctx.restore();
         },
       ],
@@ -98,14 +101,28 @@ function series(data: ProfileChartData): uPlot.AlignedData {
 }
 
 /** Draws the chart into `el`; returns a function that redraws with new data or removes it. */
-export function mountProfileChart(el: HTMLElement, data: ProfileChartData) {
+export function mountProfileChart(el: HTMLElement, data: ProfileChartData, look = '') {
   let current = data;
-  let plot = new uPlot(options(current, el.clientWidth || 320), series(current), el);
+  let drawnLook = look;
+  const make = () =>
+    new uPlot(
+      options(() => current, el.clientWidth || 320),
+      series(current),
+      el,
+    );
+  let plot = make();
   return {
-    update(next: ProfileChartData) {
+    /** New figures are drawn into the same chart; new words or another theme (`look`) make a new one. */
+    update(next: ProfileChartData, nextLook = drawnLook) {
+      const sameWords = JSON.stringify(next.labels) === JSON.stringify(current.labels);
       current = next;
+      if (sameWords && nextLook === drawnLook) {
+        plot.setData(series(current));
+        return;
+      }
+      drawnLook = nextLook;
       plot.destroy();
-      plot = new uPlot(options(current, el.clientWidth || 320), series(current), el);
+      plot = make();
     },
     resize() {
       plot.setSize({ width: el.clientWidth || 320, height: plot.height });

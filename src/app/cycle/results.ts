@@ -19,7 +19,8 @@ import {
 } from '../settings/calibration';
 import { BETA_INPUT_SCALE, defaults, model } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
-import { FieldReader, placeError, type Outcome } from '../ui/outcome';
+import { deferred } from '../ui/Deferred';
+import { FieldReader, NO_ERRORS, placeError, type Outcome } from '../ui/outcome';
 import { readShape } from '../fields/shape';
 import { readComposition } from '../fields/steel';
 import { PHYSICS_UNITS } from '../ui/units';
@@ -118,7 +119,7 @@ export function buildRecipe(
   });
   const base = readBaseFields(form, settings, read);
   if (read.failed || !base) return { errors: read.errors };
-  return { errors: {}, recipe: { ...base, steps: steps as RecipeStep[] } };
+  return { errors: NO_ERRORS, recipe: { ...base, steps: steps as RecipeStep[] } };
 }
 
 export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<CycleResult> {
@@ -129,7 +130,7 @@ export function computeCycle(form: CycleForm, settings: CycleDefaults): Outcome<
   const calibrated: Recipe = factor === 1 ? recipe : { ...recipe, diffusivityFactor: factor };
   const simulation = simulateCycle(calibrated);
   if (!simulation.ok) return placeError(simulation.error, CYCLE_FIELD_MAP, formFields(form));
-  return { errors: {}, result: { recipe: calibrated, simulation: simulation.value, calibration } };
+  return { errors: NO_ERRORS, result: { recipe: calibrated, simulation: simulation.value, calibration } };
 }
 
 /** The settings a cycle calculation reads, with the chosen furnace's calibration (shared by the planner). */
@@ -146,4 +147,7 @@ export const cycleDefaults = computed<CycleDefaults>(() => {
   };
 });
 
-export const cycleOutcome = computed(() => computeCycle(cycleForm.value, cycleDefaults.value));
+/** The form as the results show it: one task behind the typing (ui/Deferred.tsx). */
+export const shownCycleForm = deferred(cycleForm);
+
+export const cycleOutcome = computed(() => computeCycle(shownCycleForm.value, cycleDefaults.value));

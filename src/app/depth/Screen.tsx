@@ -1,9 +1,11 @@
 /** Case depth: from time and temperature, or the time or the temperature for a target depth. */
+import { useMemo } from 'preact/hooks';
 import { Answer } from '../ui/Answer';
+import { Deferred } from '../ui/Deferred';
 import { BandMethod } from '../range/BandMethod';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { FurnaceField } from '../fields/FurnaceField';
-import { patch } from '../ui/persist';
+import { fieldSetters } from '../ui/setters';
 import { defaults, model } from '../settings/state';
 import { NumberField } from '../ui/NumberField';
 import { ResultsCard } from '../ui/ResultsCard';
@@ -13,23 +15,23 @@ import { SteelFields } from '../fields/SteelFields';
 import { useScreenContext } from '../settings/screenContext';
 import { LogSaveButton } from '../log/save/LogActions';
 import { depthLogEntry } from './logEntry';
-import { depthOutcome, solveFor, usesField } from './results';
+import { depthOutcome, shownDepthForm, solveFor, usesField } from './results';
 import { depthView } from './rows';
 import { CARBON_SOURCES, depthForm, SOLVE_FOR } from './state';
 import './screen.css';
 
 export default function DepthScreen() {
   const ctx = useScreenContext();
-  const { t, units, show, word } = ctx;
-  const form = depthForm.value;
-  const mode = solveFor(form);
+  const { t, show, word } = ctx;
+  // What was typed is drawn at once (DepthInputs); the answer and results follow in the next task.
   const outcome = depthOutcome.value;
-  const errors = outcome.errors;
-  const view = outcome.result ? depthView(outcome.result, t, show, defaults.value.totalCaseMarginPct) : undefined;
-  const logEntry = outcome.result ? depthLogEntry(outcome.result, form.steel.grade) : undefined;
-  const modeChoices = SOLVE_FOR.map((m) => ({ value: m, label: t(`app.depth.solveFor.${m}`) }));
-  const carbonChoices = CARBON_SOURCES.map((c) => ({ value: c, label: t(`app.depth.carbonSource.${c}`) }));
-  const carbonLabel = form.carbonSource === 'surface' ? t('app.fields.surfaceCarbon') : t('app.fields.carbonPotential');
+  const marginPct = defaults.value.totalCaseMarginPct;
+  const view = useMemo(
+    () => (outcome.result ? depthView(outcome.result, t, show, marginPct) : undefined),
+    [outcome, t, show, marginPct],
+  );
+  const grade = shownDepthForm.value.steel.grade;
+  const logEntry = useMemo(() => (outcome.result ? depthLogEntry(outcome.result, grade) : undefined), [outcome, grade]);
 
   return (
     <div class="screen depth">
@@ -40,13 +42,41 @@ export default function DepthScreen() {
         detail={view?.answerDetail}
         note={view?.answerNote}
       />
+      <DepthInputs />
+      <Deferred>
+        <ResultsCard id="depth-results" error={word(outcome.general)} view={view}>
+          {view && <BandMethod show={show} withBeta={false} />}
+        </ResultsCard>
+        <LogSaveButton entry={logEntry} />
+      </Deferred>
+    </div>
+  );
+}
 
+const setDepth = fieldSetters(depthForm);
+
+/** The form: redrawn on every keystroke, each field only when its own props change (stable handlers). */
+function DepthInputs() {
+  const ctx = useScreenContext();
+  const { t, units, show, word } = ctx;
+  const form = depthForm.value;
+  const mode = solveFor(form);
+  const errors = depthOutcome.value.errors;
+  const modeChoices = useMemo(() => SOLVE_FOR.map((m) => ({ value: m, label: t(`app.depth.solveFor.${m}`) })), [t]);
+  const carbonChoices = useMemo(
+    () => CARBON_SOURCES.map((c) => ({ value: c, label: t(`app.depth.carbonSource.${c}`) })),
+    [t],
+  );
+  const carbonLabel = form.carbonSource === 'surface' ? t('app.fields.surfaceCarbon') : t('app.fields.carbonPotential');
+
+  return (
+    <>
       <Segmented
         name="depth-mode"
         legend={t('app.depth.solveForLegend')}
         value={mode}
         choices={modeChoices}
-        onChange={(v) => patch(depthForm, { solveFor: v })}
+        onChange={setDepth('solveFor')}
       />
 
       <section class="card" aria-labelledby="depth-inputs">
@@ -58,7 +88,7 @@ export default function DepthScreen() {
               label={t('app.fields.temperature')}
               unit={units.temperature}
               value={form.temperature}
-              onInput={(v) => patch(depthForm, { temperature: v })}
+              onInput={setDepth('temperature')}
               error={word(errors.temperature)}
             />
           )}
@@ -68,7 +98,7 @@ export default function DepthScreen() {
               label={t('app.fields.time')}
               unit={units.time}
               value={form.time}
-              onInput={(v) => patch(depthForm, { time: v })}
+              onInput={setDepth('time')}
               error={word(errors.time)}
             />
           )}
@@ -78,7 +108,7 @@ export default function DepthScreen() {
               label={t('app.fields.targetDepth')}
               unit={units.depth}
               value={form.targetDepth}
-              onInput={(v) => patch(depthForm, { targetDepth: v })}
+              onInput={setDepth('targetDepth')}
               error={word(errors.targetDepth)}
             />
           )}
@@ -88,7 +118,7 @@ export default function DepthScreen() {
           legend={t('app.depth.carbonSourceLegend')}
           value={form.carbonSource === 'surface' ? 'surface' : 'potential'}
           choices={carbonChoices}
-          onChange={(v) => patch(depthForm, { carbonSource: v })}
+          onChange={setDepth('carbonSource')}
         />
         <div class="field-grid">
           <NumberField
@@ -96,13 +126,13 @@ export default function DepthScreen() {
             label={carbonLabel}
             unitLabel={UNIT_SYMBOLS.pctC}
             value={form.carbon}
-            onInput={(v) => patch(depthForm, { carbon: v })}
+            onInput={setDepth('carbon')}
             error={word(errors.carbon)}
           />
           <ThresholdField
             id="depth-threshold"
             value={form.threshold}
-            onInput={(v) => patch(depthForm, { threshold: v })}
+            onInput={setDepth('threshold')}
             error={word(errors.threshold)}
             show={show}
           />
@@ -110,17 +140,12 @@ export default function DepthScreen() {
         <SteelFields
           idPrefix="depth-steel"
           steel={form.steel}
-          onChange={(s) => patch(depthForm, { steel: s })}
+          onChange={setDepth('steel')}
           errors={errors}
           word={word}
         />
         <FurnaceField id="depth-furnace" model={model.value} ctx={ctx} />
       </section>
-
-      <ResultsCard id="depth-results" error={word(outcome.general)} view={view}>
-        {view && <BandMethod show={show} withBeta={false} />}
-      </ResultsCard>
-      <LogSaveButton entry={logEntry} />
-    </div>
+    </>
   );
 }

@@ -24,7 +24,8 @@ import {
 } from '../settings/calibration';
 import { defaults, model } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
-import { FieldReader, placeError, type Outcome } from '../ui/outcome';
+import { deferred } from '../ui/Deferred';
+import { FieldReader, NO_ERRORS, placeError, type Outcome } from '../ui/outcome';
 import { readComposition } from '../fields/steel';
 import { PHYSICS_UNITS } from '../ui/units';
 import { depthForm, type DepthForm, type SolveFor } from './state';
@@ -142,13 +143,16 @@ export function computeDepth(form: DepthForm, settings: DepthDefaults): Outcome<
   if (!calculated.ok) return placeError(calculated.error, FIELD_MAP, FORM_FIELDS);
   const limit = settings.ecdHardnessLimit ? { ecdHardnessLimit: settings.ecdHardnessLimit } : {};
   return {
-    errors: {},
+    errors: NO_ERRORS,
     result: { solveFor: mode, figures: calculated.value, request, calibration, ...limit } as DepthResult,
   };
 }
 
+/** The form as the results show it: one task behind the typing (ui/Deferred.tsx). */
+export const shownDepthForm = deferred(depthForm);
+
 export const depthOutcome = computed(() =>
-  computeDepth(depthForm.value, {
+  computeDepth(shownDepthForm.value, {
     model: model.value,
     ecdThresholdPct: defaults.value.ecdThresholdPct,
     totalCaseMarginPct: defaults.value.totalCaseMarginPct,

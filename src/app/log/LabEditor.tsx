@@ -47,7 +47,14 @@ export function LabEditor({ entry, onDone }: { entry: JobEntry; onDone: (saved: 
       const labels = (f: string) => ((LAB_FIELDS as readonly string[]).includes(f) ? t(`app.log.lab.${f}`) : undefined);
       const where = placeJobsError(t, result.error, labels, labFieldOf);
       setStale(result.error.code === 'record.stale');
-      setPlaced(result.error.code === 'record.stale' ? { fields: {}, general: staleSentence(t, result.error) } : where);
+      setPlaced(
+        result.error.code === 'record.stale'
+          ? { fields: {}, general: staleSentence(t, result.error) }
+          : // Only the lab result was being written: say that, not that "the job" was lost.
+            result.error.code === 'record.invalid'
+            ? { ...where, general: t('app.log.lab.notSaved') }
+            : where,
+      );
       return;
     }
     clearDraft('lab', id);

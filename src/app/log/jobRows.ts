@@ -47,7 +47,8 @@ export function planRows(
   if (inputs.kind === 'cycle') {
     const steps = inputs.recipe.steps;
     const totalH = steps.reduce((sum, s) => sum + s.durationH, 0);
-    const hottestC = Math.max(...steps.map((s) => Math.max(s.startTempC, s.endTempC)));
+    // A soak may be stored with its start temperature only.
+    const hottestC = Math.max(...steps.map((s) => Math.max(s.startTempC, s.endTempC ?? s.startTempC)));
     rows.push(
       row(
         'steps',

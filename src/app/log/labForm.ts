@@ -1,10 +1,11 @@
 /**
  * The lab result form: the traverse's depth in the user's depth unit, hardness in HRC or HV,
  * surface carbon, who measured and when. Numbers are read like every other field (decimal
- * comma or point); plausibility is checked by the job schema when it is stored.
+ * comma or point) and checked here against the record's own bounds, so a slip is worded beside
+ * its field with the allowed range before anything is stored.
  */
-import { HARDNESS_UNITS, localIsoDate, type HardnessUnit, type LabResult } from '../../jobs';
-import type { InputError } from '../../physics';
+import { HARDNESS_LIMITS, HARDNESS_UNITS, localIsoDate, type HardnessUnit, type LabResult } from '../../jobs';
+import { checkCarbonPct, checkDepthMm, fail, type InputError, type Result } from '../../physics';
 import { field, readOptionalField, type FieldText } from '../ui/fieldText';
 import { FieldReader } from '../ui/outcome';
 
@@ -54,13 +55,44 @@ export function labFormOf(lab: LabResult | undefined, today: Date = new Date()):
   };
 }
 
+/** A hardness within the record's plausible bounds for its unit (they catch slips, not judge parts). */
+function checkLabHardness(value: number | undefined, unit: HardnessUnit, name: string): Result<number | undefined> {
+  if (value === undefined) return { ok: true, value };
+  const { min, max } = HARDNESS_LIMITS[unit];
+  return value >= min && value <= max
+    ? { ok: true, value }
+    : fail('hardness.outsideScale', name, { value, unit, min, max });
+}
+
+function optional(
+  value: number | undefined,
+  check: (v: number, name: string) => Result<number>,
+  name: string,
+): Result<number | undefined> {
+  return value === undefined ? { ok: true, value } : check(value, name);
+}
+
 /** The lab result to store, undefined when nothing was entered, or the fields' errors. */
 export function readLabForm(form: LabForm): { lab?: LabResult | undefined; errors: Record<string, InputError> } {
   const read = new FieldReader();
-  const ecdMm = read.value(readOptionalField(form.ecd, 'ecd', 'mm'));
-  const surface = read.value(readOptionalField(form.surfaceHardness, 'surfaceHardness'));
-  const core = read.value(readOptionalField(form.coreHardness, 'coreHardness'));
-  const surfaceCarbonPct = read.value(readOptionalField(form.surfaceCarbon, 'surfaceCarbon'));
+  const typedEcd = readOptionalField(form.ecd, 'ecd', 'mm');
+  const ecdMm = read.value(typedEcd.ok ? optional(typedEcd.value, checkDepthMm, 'ecd') : typedEcd);
+  const typedSurface = readOptionalField(form.surfaceHardness, 'surfaceHardness');
+  const surface = read.value(
+    typedSurface.ok && isHardnessUnit(form.surfaceUnit)
+      ? checkLabHardness(typedSurface.value, form.surfaceUnit, 'surfaceHardness')
+      : typedSurface,
+  );
+  const typedCore = readOptionalField(form.coreHardness, 'coreHardness');
+  const core = read.value(
+    typedCore.ok && isHardnessUnit(form.coreUnit)
+      ? checkLabHardness(typedCore.value, form.coreUnit, 'coreHardness')
+      : typedCore,
+  );
+  const typedCarbon = readOptionalField(form.surfaceCarbon, 'surfaceCarbon');
+  const surfaceCarbonPct = read.value(
+    typedCarbon.ok ? optional(typedCarbon.value, checkCarbonPct, 'surfaceCarbon') : typedCarbon,
+  );
   if (read.failed) return { errors: read.errors };
   const by = form.by.trim();
   const measured = ecdMm !== undefined || surface !== undefined || core !== undefined || surfaceCarbonPct !== undefined;

@@ -9,7 +9,8 @@ import { CYCLE_FIELD_MAP, cycleDefaults, readBaseFields, type CycleDefaults } fr
 import { factorOf, type CalibrationState } from '../settings/calibration';
 import { BETA_INPUT_SCALE } from '../settings/state';
 import { readField, readOptionalField } from '../ui/fieldText';
-import { FieldReader, placeError, type Outcome } from '../ui/outcome';
+import { deferred } from '../ui/Deferred';
+import { FieldReader, NO_ERRORS, placeError, type Outcome } from '../ui/outcome';
 import { PHYSICS_UNITS } from '../ui/units';
 import { latestRun } from '../worker/client';
 import { planForm, type PlanForm, type PotentialStepForm } from './state';
@@ -76,7 +77,7 @@ export function buildPlanRequest(
   };
   if (read.failed || !base) return { errors: read.errors };
   return {
-    errors: {},
+    errors: NO_ERRORS,
     request: {
       ...base,
       boost,
@@ -101,13 +102,13 @@ export function planRequestOf(form: PlanForm, settings: CycleDefaults): Outcome<
   const calibration: CalibrationState = settings.calibrationFor?.(model) ?? { kind: 'none' };
   const factor = factorOf(calibration);
   const request = factor === 1 ? built.request : { ...built.request, diffusivityFactor: factor };
-  return { errors: {}, result: { request, calibration } };
+  return { errors: NO_ERRORS, result: { request, calibration } };
 }
 
 /** What the screen shows for a planned request: the plan, or its error placed on the field that caused it. */
 export function planOutcomeOf({ request, calibration }: PlanRequest, plan: Result<PlanResult>): Outcome<PlanOutcome> {
   if (!plan.ok) return placeError(plan.error, FIELD_MAP, PLAN_FORM_FIELDS);
-  return { errors: {}, result: { request, plan: plan.value, calibration } };
+  return { errors: NO_ERRORS, result: { request, plan: plan.value, calibration } };
 }
 
 /** Plans the form here and now (the tests; the screen plans in the worker). */
@@ -116,8 +117,11 @@ export function computePlan(form: PlanForm, settings: CycleDefaults): Outcome<Pl
   return asked.result ? planOutcomeOf(asked.result, planTwoStepCycle(asked.result.request)) : { errors: asked.errors };
 }
 
+/** The form as the plan shows it: one task behind the typing (ui/Deferred.tsx). */
+export const shownPlanForm = deferred(planForm);
+
 /** The request of the form as typed (cheap: reading and checking fields). */
-export const planRequest = computed(() => planRequestOf(planForm.value, cycleDefaults.value));
+export const planRequest = computed(() => planRequestOf(shownPlanForm.value, cycleDefaults.value));
 
 const planner = latestRun('plan');
 // Every new request goes to the worker; the newest one wins.
@@ -132,7 +136,7 @@ export const planOutcome = computed((): Outcome<PlanOutcome> & { updating: boole
   if (!asked.result) return { errors: asked.errors, updating: false };
   const answer = planner.answer.value;
   const updating = planner.updating.value;
-  if (!answer || 'failed' in answer) return { errors: {}, updating };
+  if (!answer || 'failed' in answer) return { errors: NO_ERRORS, updating };
   const calibration = asked.result.calibration;
   return { ...planOutcomeOf({ request: answer.input, calibration }, answer.output), updating };
 });

@@ -4,7 +4,8 @@ import { Icon } from '../ui/Icon';
 import { NO_VALUE, UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
 import { ErrorNote } from '../ui/Notices';
-import { patch } from '../ui/persist';
+import type { FieldText } from '../ui/fieldText';
+import { fieldSetters } from '../ui/setters';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { useScreenContext } from '../settings/screenContext';
 import { LogNoteButton } from '../log/save/LogActions';
@@ -14,8 +15,8 @@ import { addReading, MAX_READINGS, recoveryForm, removeReading, setReading } fro
 import './screen.css';
 
 export default function RecoveryScreen() {
-  const { t, units, show, word } = useScreenContext();
-  const form = recoveryForm.value;
+  const { t, show } = useScreenContext();
+  // What was typed is drawn at once (RecoveryInputs); the answer and results follow in the next task.
   const outcome = recoveryOutcome.value;
   const r = outcome.result;
   const rows: ResultRow[] = r
@@ -43,7 +44,7 @@ export default function RecoveryScreen() {
       ]
     : [];
   const note = r ? recoveryNote(r, t, show) : undefined;
-  const generalReadingsError = word(outcome.general ?? outcome.errors.history);
+  const generalReadingsError = useGeneralReadingsError();
   return (
     <div class="screen recovery">
       <h1 tabIndex={-1}>{t('app.recovery.title')}</h1>
@@ -56,6 +57,56 @@ export default function RecoveryScreen() {
         </span>
         <span class="answer-value">{r ? show.hoursMinutes(r.extraTimeH ?? 0) : NO_VALUE}</span>
       </div>
+      <RecoveryInputs />
+      <section class="card" aria-labelledby="recovery-results">
+        <h2 id="recovery-results">{t('app.common.results')}</h2>
+        {r && <ResultList rows={rows} label={t('app.common.results')} />}
+        {!r && !generalReadingsError && <p class="note">{t('app.common.fixInputs')}</p>}
+        <p class="note">{t('app.recovery.method', { limit: show.temperature(EUTECTOID_TEMP_C) })}</p>
+      </section>
+      <LogNoteButton note={note} />
+    </div>
+  );
+}
+
+function useGeneralReadingsError(): string | undefined {
+  const { word } = useScreenContext();
+  const outcome = recoveryOutcome.value;
+  return word(outcome.general ?? outcome.errors.history);
+}
+
+const setRecovery = fieldSetters(recoveryForm);
+const addOne = () => (recoveryForm.value = addReading(recoveryForm.peek()));
+
+interface ReadingHandlers {
+  time: (value: FieldText) => void;
+  temperature: (value: FieldText) => void;
+  remove: () => void;
+}
+
+/** Per reading position, handlers that read the form when called: the same functions on every render. */
+const readingHandlers = new Map<number, ReadingHandlers>();
+function readingHandlersOf(i: number): ReadingHandlers {
+  let handlers = readingHandlers.get(i);
+  if (!handlers) {
+    handlers = {
+      time: (time) => (recoveryForm.value = setReading(recoveryForm.peek(), i, { time })),
+      temperature: (temperature) => (recoveryForm.value = setReading(recoveryForm.peek(), i, { temperature })),
+      remove: () => (recoveryForm.value = removeReading(recoveryForm.peek(), i)),
+    };
+    readingHandlers.set(i, handlers);
+  }
+  return handlers;
+}
+
+/** The set point and the readings: a keystroke redraws only its own field. */
+function RecoveryInputs() {
+  const { t, units, word } = useScreenContext();
+  const form = recoveryForm.value;
+  const outcome = recoveryOutcome.value;
+  const generalReadingsError = useGeneralReadingsError();
+  return (
+    <>
       <section class="card" aria-labelledby="recovery-plan">
         <h2 id="recovery-plan">{t('app.recovery.planHeading')}</h2>
         <div class="field-grid">
@@ -64,7 +115,7 @@ export default function RecoveryScreen() {
             label={t('app.recovery.setTemperature')}
             unit={units.temperature}
             value={form.setTemperature}
-            onInput={(v) => patch(recoveryForm, { setTemperature: v })}
+            onInput={setRecovery('setTemperature')}
             error={word(outcome.errors.setTemperatureC)}
           />
           <NumberField
@@ -72,7 +123,7 @@ export default function RecoveryScreen() {
             label={t('app.recovery.requiredTime')}
             unit={units.time}
             value={form.requiredTime}
-            onInput={(v) => patch(recoveryForm, { requiredTime: v })}
+            onInput={setRecovery('requiredTime')}
             error={word(outcome.errors.requiredTimeH)}
           />
         </div>
@@ -99,7 +150,7 @@ export default function RecoveryScreen() {
                 label={t('app.recovery.readingTime', { n: i + 1 })}
                 unit={units.time}
                 value={reading.time}
-                onInput={(v) => (recoveryForm.value = setReading(form, i, { time: v }))}
+                onInput={readingHandlersOf(i).time}
                 error={word(outcome.errors[`history.${i}.timeH`])}
               />
               <NumberField
@@ -109,14 +160,14 @@ export default function RecoveryScreen() {
                 label={t('app.recovery.readingTemperature', { n: i + 1 })}
                 unit={units.temperature}
                 value={reading.temperature}
-                onInput={(v) => (recoveryForm.value = setReading(form, i, { temperature: v }))}
+                onInput={readingHandlersOf(i).temperature}
                 error={word(outcome.errors[`history.${i}.temperatureC`])}
               />
               <button
                 type="button"
                 class="button reading-remove"
                 aria-label={t('app.recovery.removeReading', { n: i + 1 })}
-                onClick={() => (recoveryForm.value = removeReading(form, i))}
+                onClick={readingHandlersOf(i).remove}
               >
                 <Icon name="remove" />
               </button>
@@ -124,22 +175,10 @@ export default function RecoveryScreen() {
           ))}
         </ol>
         <ErrorNote message={generalReadingsError} />
-        <button
-          type="button"
-          class="button"
-          disabled={form.readings.length >= MAX_READINGS}
-          onClick={() => (recoveryForm.value = addReading(form))}
-        >
+        <button type="button" class="button" disabled={form.readings.length >= MAX_READINGS} onClick={addOne}>
           {t('app.recovery.addReading')}
         </button>
       </section>
-      <section class="card" aria-labelledby="recovery-results">
-        <h2 id="recovery-results">{t('app.common.results')}</h2>
-        {r && <ResultList rows={rows} label={t('app.common.results')} />}
-        {!r && !generalReadingsError && <p class="note">{t('app.common.fixInputs')}</p>}
-        <p class="note">{t('app.recovery.method', { limit: show.temperature(EUTECTOID_TEMP_C) })}</p>
-      </section>
-      <LogNoteButton note={note} />
-    </div>
+    </>
   );
 }

@@ -3,7 +3,8 @@ import { computed } from '@preact/signals';
 import { equivalentTime, type DiffusivityModelId, type EquivalentTimeResult } from '../../physics';
 import { model } from '../settings/state';
 import { readField } from '../ui/fieldText';
-import { FieldReader, placeError, type Outcome } from '../ui/outcome';
+import { deferred } from '../ui/Deferred';
+import { FieldReader, NO_ERRORS, placeError, type Outcome } from '../ui/outcome';
 import { PHYSICS_UNITS } from '../ui/units';
 import { recoveryForm, type RecoveryForm } from './state';
 
@@ -18,7 +19,7 @@ export function computeRecovery(form: RecoveryForm, modelId: DiffusivityModelId)
   if (read.failed) return { errors: read.errors };
   const result = equivalentTime({ history, setTemperatureC, requiredTimeH, model: modelId });
   if (!result.ok) return placeError(result.error, {}, formFields(form));
-  return { errors: {}, result: result.value };
+  return { errors: NO_ERRORS, result: result.value };
 }
 
 /** Field names of the form, as physics names them. */
@@ -30,4 +31,7 @@ export function formFields(form: RecoveryForm): ReadonlySet<string> {
   ]);
 }
 
-export const recoveryOutcome = computed(() => computeRecovery(recoveryForm.value, model.value));
+/** The form as the results show it: one task behind the typing (ui/Deferred.tsx). */
+export const shownRecoveryForm = deferred(recoveryForm);
+
+export const recoveryOutcome = computed(() => computeRecovery(shownRecoveryForm.value, model.value));

@@ -1,8 +1,9 @@
 /** A labelled numeric input: accepts a decimal comma, shows its unit and its error in words beside it. */
+import { useState } from 'preact/hooks';
 import { language } from '../../i18n/useT';
 import { displayText, takesDuration, type FieldText } from './fieldText';
 import { describedBy, FieldNotes } from './FieldNotes';
-import { UNIT_SYMBOLS } from './format';
+import { localizeTyped, UNIT_SYMBOLS } from './format';
 
 export interface NumberFieldProps {
   id: string;
@@ -33,7 +34,11 @@ export function NumberField({
   compact,
   hideLabel,
 }: NumberFieldProps) {
-  const shown = displayText(value, unit, language.value);
+  // While a person types, exactly what they typed; otherwise a plain number with the locale's decimal
+  // mark (a default "0.75" reads "0,75" in German), which reads back as the same value.
+  const [typing, setTyping] = useState(false);
+  const asTyped = displayText(value, unit, language.value);
+  const shown = typing ? asTyped : localizeTyped(asTyped, language.value);
   const symbol = unitLabel ?? (unit ? (UNIT_SYMBOLS[unit] ?? unit) : '');
   return (
     <div class={compact ? 'field field-compact' : 'field'}>
@@ -53,7 +58,11 @@ export function NumberField({
           placeholder={placeholder}
           aria-invalid={error ? 'true' : undefined}
           aria-describedby={describedBy(id, hint, error)}
-          onInput={(e) => onInput({ text: e.currentTarget.value, unit })}
+          onInput={(e) => {
+            setTyping(true);
+            onInput({ text: e.currentTarget.value, unit });
+          }}
+          onBlur={() => setTyping(false)}
         />
         {symbol && (
           <span class="field-unit" aria-hidden="true">

@@ -12,6 +12,9 @@ export interface Outcome<T> {
   result?: T;
 }
 
+/** The errors of an outcome without any: one object, so fields given it are not redrawn for a new result. */
+export const NO_ERRORS: Record<string, InputError> = Object.freeze({});
+
 /** Collects field reads; `value` returns undefined for a failed read and records its error. */
 export class FieldReader {
   readonly errors: Record<string, InputError> = {};
@@ -39,5 +42,5 @@ export function placeError<T>(
 ): Outcome<T> {
   const raw = error.field ?? '';
   const mapped = fieldMap[raw] ?? raw;
-  return formFields.has(mapped) ? { errors: { [mapped]: error } } : { errors: {}, general: error };
+  return formFields.has(mapped) ? { errors: { [mapped]: error } } : { errors: NO_ERRORS, general: error };
 }

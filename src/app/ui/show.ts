@@ -4,6 +4,7 @@
  */
 import { convert, convertTemperatureDifference, hrcToHv, type Hardness } from '../../physics';
 import { formatHoursMinutes, formatNumber, formatQuantity, formatRange, formatScientific, NO_VALUE } from './format';
+import { messageFigures, type Figures } from '../../i18n/wording';
 import type { DisplayUnits } from './units';
 
 export interface Show {
@@ -26,6 +27,8 @@ export interface Show {
   /** A hardness in its own scale (whole numbers unless `digits` says otherwise). */
   hardness(h: Hardness, digits?: number): string;
   number(value: number, digits: number): string;
+  /** Figures inside sentences (errors, cautions): the unit's precision without trailing zeros. */
+  figures: Figures;
 }
 
 function to(value: number, from: string, unit: string): number {
@@ -58,5 +61,6 @@ export function makeShow(units: DisplayUnits, locale: string): Show {
     hardnessHv: (hrc) => formatQuantity(hrcToHv(hrc) ?? Number.NaN, 'HV', locale),
     hardness: (h, digits) => formatQuantity(h.value, h.unit, locale, digits),
     number: (value, digits) => formatNumber(value, locale, { digits }),
+    figures: messageFigures(units, locale),
   };
 }

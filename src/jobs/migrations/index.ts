@@ -9,6 +9,7 @@
  */
 import type { IDBPDatabase, IDBPTransaction } from 'idb';
 import { jobFromV1 } from './v1';
+import { jobFromV2 } from './v2';
 
 export const JOBS_STORE = 'jobs';
 
@@ -27,7 +28,8 @@ export type UpgradeTransaction = IDBPTransaction<unknown, string[], 'versionchan
 
 export interface Migration {
   version: number;
-  upgrade(db: IDBPDatabase, tx: UpgradeTransaction): Promise<void>;
+  /** `oldVersion`: the database's version before this upgrade began (0 for a new one). */
+  upgrade(db: IDBPDatabase, tx: UpgradeTransaction, oldVersion: number): Promise<void>;
 }
 
 export const MIGRATIONS: readonly Migration[] = [
@@ -59,6 +61,21 @@ export const MIGRATIONS: readonly Migration[] = [
       }
     },
   },
+  {
+    // Record version 3: a cycle recipe may carry the furnace's diffusivity factor. No index changes;
+    // each record is checked and kept as it is.
+    version: 3,
+    async upgrade(_db, tx, oldVersion) {
+      // Records just converted from version 1 are already version 3.
+      if (oldVersion < 2) return;
+      const store = tx.objectStore(JOBS_STORE);
+      for (let cursor = await store.openCursor(); cursor; cursor = await cursor.continue()) {
+        const converted = jobFromV2(cursor.value);
+        // A record that cannot convert stays as it was: reported on read, never dropped.
+        if (converted.ok) await cursor.update(converted.job);
+      }
+    },
+  },
 ];
 
 export const LATEST_DB_VERSION = MIGRATIONS[MIGRATIONS.length - 1]!.version;
@@ -71,6 +88,7 @@ export async function runMigrations(
   targetVersion: number = LATEST_DB_VERSION,
 ): Promise<void> {
   for (const migration of MIGRATIONS) {
-    if (migration.version > oldVersion && migration.version <= targetVersion) await migration.upgrade(db, tx);
+    if (migration.version > oldVersion && migration.version <= targetVersion)
+      await migration.upgrade(db, tx, oldVersion);
   }
 }

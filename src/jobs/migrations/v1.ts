@@ -1,15 +1,15 @@
 /**
- * Record version 1, as the first release stored it, and its conversion to version 2.
+ * Record version 1, as the first release stored it, and its conversion to version 2 (then
+ * checked as version 3 by `jobFromV2`, which changes no field).
  * Version 1 knew only the closed-form calculator, kept the prediction in flat fields,
  * spelled statuses in kebab case, called the initials `initials` and the part `part`,
  * kept the grade as one string and the lab's result as a single depth.
  * Kept for the upgrade of old databases; never written any more.
  */
-import * as v from 'valibot';
 import { findGrade } from '../../physics';
-import { issuesOf } from '../issues';
-import { JobSchema, type Job } from '../schema';
+import type { Job } from '../schema';
 import type { FieldIssue } from '../result';
+import { jobFromV2 } from './v2';
 
 export const V1_STATUSES = ['planned', 'in-furnace', 'done', 'on-hold', 'rejected'] as const;
 export type V1Status = (typeof V1_STATUSES)[number];
@@ -65,7 +65,7 @@ const isRecord = (value: unknown): value is Record<string, unknown> =>
   typeof value === 'object' && value !== null && !Array.isArray(value);
 
 /**
- * One version-1 record as version 2, or the problems that stop it. Every v1 field has a
+ * One version-1 record as the current version, or the problems that stop it. Every v1 field has a
  * place in v2; a record that cannot convert is left as it was by the upgrade (reported on read).
  */
 export function jobFromV1(raw: unknown): { ok: true; job: Job } | { ok: false; issues: FieldIssue[] } {
@@ -103,6 +103,5 @@ export function jobFromV1(raw: unknown): { ok: true; job: Job } | { ok: false; i
     ...(raw.labEcdMm === undefined || raw.labEcdMm === null ? {} : { lab: { ecdMm: raw.labEcdMm } }),
     notes: raw.notes,
   };
-  const parsed = v.safeParse(JobSchema, candidate);
-  return parsed.success ? { ok: true, job: parsed.output } : { ok: false, issues: issuesOf(parsed.issues) };
+  return jobFromV2(candidate);
 }

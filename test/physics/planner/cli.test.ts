@@ -41,10 +41,10 @@ describe('CLI `plan`', () => {
     expect(reachable).toBe(false);
     expect(binding.code).toBe('plan.surfaceCarbonTooHighForDiffusePotential');
     expect(binding.message).toMatch(
-      /^Surface carbon of at least 0\.85 % is above what the diffuse potential 0\.8 % leaves/,
+      /^Surface carbon of at least 0\.85 %C is above what the diffuse potential 0\.8 %C leaves/,
     );
     expect(suggestions.length).toBeGreaterThan(0);
-    for (const s of suggestions) expect(s.message).toMatch(/^Raise the diffuse potential to about \d\.\d+ %\.$/);
+    for (const s of suggestions) expect(s.message).toMatch(/^Raise the diffuse potential to about \d\.\d+ %C\.$/);
   });
 
   it('a bad request exits 1 with the field and an English message', () => {
@@ -56,7 +56,7 @@ describe('CLI `plan`', () => {
       error: {
         code: 'range.minAboveMax',
         field: 'targetEcdMm.max',
-        message: 'The lower limit 1 is above the upper limit 0.75.',
+        message: 'The lower limit 1 mm is above the upper limit 0.75 mm.',
       },
     });
   });

@@ -10,7 +10,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { setUpShop, type ShopPerson } from '../../src/jobs/shopSetup';
+import { setUpShop, type ShopPerson } from '../../src/server/shopSetup';
 
 export interface ShopServer {
   /** e.g. http://127.0.0.1:5984/ */

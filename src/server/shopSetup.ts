@@ -1,10 +1,11 @@
 /**
+ * (Node tooling, outside the app and the log: it talks to the server's admin interface.)
  * Setting up the shop server (Apache CouchDB 3, or pouchdb-server for tests) over its HTTP API:
  * the plant database, who may read and write it (`_security`: members by role), the rules every
  * write must pass (the `validate_doc_update` design document) and the people, each a server user
  * with their roles. Run again at any time: what exists is updated, nothing is deleted.
  */
-import { designDocument, ROLES, type Role } from './designDoc';
+import { designDocument, ROLES, type Role } from '../jobs/designDoc';
 
 export interface ShopPerson {
   name: string;

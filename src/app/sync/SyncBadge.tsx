@@ -1,7 +1,8 @@
 /** The shop server's state in the header, readable at a glance; nothing when no server is set up. */
-import { language, useT } from '../../i18n/useT';
+import { useScreenContext } from '../settings/screenContext';
 // The rules' module alone (plain constants), not the log's index.
 import { REFUSAL_CODES } from '../../jobs/designDoc';
+import { startSync } from './engine';
 import { syncStatus } from './session';
 
 function clockTime(iso: string | undefined, locale: string): string {
@@ -12,14 +13,14 @@ function clockTime(iso: string | undefined, locale: string): string {
 }
 
 export function SyncBadge() {
-  const t = useT();
+  const { t, locale } = useScreenContext();
   const status = syncStatus.value;
   if (status.state === 'off') return null;
   const text =
     status.state === 'waiting'
       ? t('app.sync.status.waiting', { count: status.pending })
       : status.state === 'offline'
-        ? t('app.sync.status.offline', { time: clockTime(status.since, language.value) })
+        ? t('app.sync.status.offline', { time: clockTime(status.since, locale) })
         : status.state === 'refused'
           ? t('app.sync.status.refused', { reason: t(`app.sync.refusals.${refusalKey(status.reason)}`) })
           : t(`app.sync.status.${status.state}`);
@@ -35,7 +36,7 @@ export function refusalKey(reason: string | undefined): string {
   return reason !== undefined && (REFUSAL_CODES as readonly string[]).includes(reason) ? reason : 'unknown';
 }
 
-/** Starts the replication (its code, with PouchDB, loads here). */
+/** Starts the replication (its code, with PouchDB, comes in this chunk). */
 export function startShopSync(): void {
-  void import('./engine').then((engine) => engine.startSync());
+  void startSync();
 }

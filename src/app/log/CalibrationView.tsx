@@ -94,6 +94,8 @@ function FurnaceCalibrationCard({
             high: show.number(fit.value.interval95.high, 2),
           }),
           main: true,
+          // A sentence, long in Spanish and German: it wraps instead of widening the page.
+          text: true,
         },
         { key: 'jobs', label: t('app.calibration.jobs'), value: String(fit.value.jobCount) },
         { key: 'rms', label: t('app.calibration.rms'), value: show.depth(fit.value.rmsResidualMm) },

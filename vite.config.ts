@@ -9,6 +9,12 @@ import { localeChunks } from './src/i18n/build/localeChunks.js';
 /** The release recorded with every logged prediction (src/app/version.ts). */
 const { version } = JSON.parse(readFileSync('package.json', 'utf8')) as { version: string };
 
+function shopProxy() {
+  const target = process.env.CASEFRONT_SHOP_URL;
+  if (!target) return undefined;
+  return { '/db/': { target, changeOrigin: true, rewrite: (path: string) => path.replace(/^\/db\//u, '/') } };
+}
+
 export default defineConfig({
   define: { __APP_VERSION__: JSON.stringify(version) },
   plugins: [
@@ -106,7 +112,10 @@ export default defineConfig({
   },
   // The physics worker (src/app/worker/) is a module worker: ES output, so it can share chunks and stay 'self' under the CSP.
   worker: { format: 'es' },
-  preview: { port: 4173, strictPort: true },
+  // With CASEFRONT_SHOP_URL set (the browser tests, `npm run start:shop`), /db/ on the app's own origin
+  // goes to that CouchDB-compatible server, as the production web server does (README).
+  preview: { port: 4173, strictPort: true, proxy: shopProxy() },
+  server: { proxy: shopProxy() },
   test: {
     include: ['test/**/*.test.ts', 'test/**/*.test.tsx'],
     exclude: ['test/e2e/**', 'node_modules/**'],

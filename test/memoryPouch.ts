@@ -33,6 +33,7 @@ export function withWrites(
     allDocs: (options) => db.allDocs(options),
     changes: ((options: Parameters<LogDatabase['changes']>[0]) => db.changes(options)) as LogDatabase['changes'],
     info: () => db.info(),
+    sync: (remote, options) => db.sync(remote, options),
     close: () => db.close(),
     destroy: () => db.destroy(),
   };

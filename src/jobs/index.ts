@@ -18,6 +18,6 @@ export * from './predictedProfile';
 export * from './plantThreshold';
 export { JOBS_STORE, LATEST_DB_VERSION } from './migrations';
 export type { Alternative } from './documents';
-export type { LogDatabase, PouchFactory } from './pouch';
+export type { Emitter, LogDatabase, PouchFactory } from './pouch';
 export { storageFailure } from './storageErrors';
 export { newJobId } from './ids';

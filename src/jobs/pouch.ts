@@ -75,6 +75,8 @@ export interface LogDatabase {
   changes(options: ChangesOptions & { live: true }): Emitter;
   changes(options?: ChangesOptions): Promise<ChangesResult>;
   info(): Promise<{ doc_count: number; update_seq: number | string }>;
+  /** Live two-way replication with another database (the shop server's). */
+  sync(remote: LogDatabase, options: { live: boolean; retry: boolean; batch_size?: number }): Emitter;
   close(): Promise<void>;
   destroy(): Promise<void>;
 }

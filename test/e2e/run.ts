@@ -7,6 +7,7 @@ import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { existsSync, readdirSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { join } from 'node:path';
+import { startShopServer } from '../server/shopServer';
 import { CHROMIUM_PATH, chromiumAvailable } from './browser';
 
 const required = process.env.CASEFRONT_REQUIRE_BROWSER === '1';
@@ -60,6 +61,10 @@ if (!existsSync(join('dist', 'index.html'))) {
   if (build.status !== 0) process.exit(build.status ?? 1);
 }
 
+// The shop server for the two-device tests: pouchdb-server on 127.0.0.1, set up as the README says.
+// Without the rules document: pouchdb-server 4.2.0 drops replicated updates when it is loaded
+// (test/server/shopServer.ts); the rules are tested on that server's direct writes in the unit tests.
+const shop = await startShopServer({ rules: false });
 const port = await freePort();
 const url = `http://127.0.0.1:${port}/`;
 const server: ChildProcess = spawn(
@@ -67,6 +72,7 @@ const server: ChildProcess = spawn(
   [vite, 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort'],
   {
     stdio: ['ignore', 'ignore', 'inherit'],
+    env: { ...process.env, CASEFRONT_SHOP_URL: shop.url },
   },
 );
 let exitCode: number;
@@ -82,12 +88,23 @@ try {
     ['--import', 'tsx', '--test', '--test-concurrency=1', '--test-reporter=spec', ...files],
     {
       stdio: 'inherit',
-      env: { ...process.env, CASEFRONT_URL: url },
+      env: {
+        ...process.env,
+        CASEFRONT_URL: url,
+        CASEFRONT_SHOP_URL: shop.url,
+        CASEFRONT_SHOP_DB: shop.database,
+        CASEFRONT_SHOP_ADMIN: `${shop.admin.name}:${shop.admin.password}`,
+      },
     },
   );
   exitCode = run.status ?? 1;
+  if (!shop.alive()) {
+    console.error('e2e: the shop server died during the run');
+    exitCode = exitCode || 1;
+  }
 } finally {
   server.kill();
+  await shop.stop();
 }
 console.log(`e2e: finished in ${((Date.now() - started) / 1000).toFixed(1)} s`);
 process.exit(exitCode);

@@ -37,6 +37,19 @@ import { clearDraft, hasDraft, readDraft, writeDraft } from './drafts';
 import { staleSentence } from './refusal';
 import { OpenChoices } from './OpenChoices';
 import { useJobEntry } from './useLog';
+import { hasRole } from '../sync/session';
+import { shopConfigured } from '../sync/state';
+import { SUPERVISOR_STATUSES } from '../../jobs/designDoc';
+
+/**
+ * Whether the signed-in person may move a job from one status to another, as the server's rules
+ * say (shown before they try; on a device without a server every change is allowed).
+ */
+function statusAllowed(from: JobStatus, to: JobStatus): boolean {
+  if (from === to || !shopConfigured() || hasRole('supervisor')) return true;
+  const held = SUPERVISOR_STATUSES as readonly string[];
+  return !held.includes(from) && !held.includes(to);
+}
 
 type Mode = 'view' | 'edit' | 'lab';
 
@@ -141,9 +154,14 @@ function JobPage({ entry, locale }: { entry: JobEntry; locale: string }) {
           name="job-status"
           legend={t('app.log.fields.status')}
           value={job.status}
-          choices={JOB_STATUSES.map((s) => ({ value: s, label: t(`jobs.status.${s}`) }))}
+          choices={JOB_STATUSES.map((s) => ({
+            value: s,
+            label: t(`jobs.status.${s}`),
+            disabled: !statusAllowed(job.status, s),
+          }))}
           onChange={(s) => void setStatus(s as JobStatus)}
         />
+        {shopConfigured() && !hasRole('supervisor') && <p class="note">{t('app.shop.notSupervisor')}</p>}
       </div>
 
       {mode === 'edit' ? (

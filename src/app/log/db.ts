@@ -15,6 +15,7 @@ import {
   type PersistOutcome,
   storageFailure,
 } from '../../jobs';
+import { currentUser } from '../sync/session';
 import { persisted } from '../ui/persist';
 
 let opening: Promise<JobsResult<JobStore>> | undefined;
@@ -44,7 +45,7 @@ export async function jobStore(): Promise<JobsResult<JobStore>> {
   if (current?.ok && !current.value.closed) return current;
   if (typeof indexedDB === 'undefined') return failWith('storage.unavailable');
   opening = browserPouch().then(
-    (pouch) => openJobStore({ pouch }),
+    (pouch) => openJobStore({ pouch, user: currentUser }),
     () => failWith<JobStore>('storage.failed', { name: 'LoadFailed' }),
   );
   const result = await opening;

@@ -9,6 +9,7 @@ import { speedParams } from '../fields/calibrationWords';
 import { UNIT_SYMBOLS } from '../ui/format';
 import { NumberField } from '../ui/NumberField';
 import { patch } from '../ui/persist';
+import { ShopServerCard } from '../sync/ShopServerCard';
 import { Segmented } from '../ui/Segmented';
 import { TextField } from '../ui/TextField';
 import { Deferred } from '../ui/Deferred';
@@ -55,6 +56,7 @@ export default function SettingsScreen() {
   return (
     <div class="screen settings">
       <h1 tabIndex={-1}>{t('app.settings.title')}</h1>
+      <ShopServerCard />
       <section class="card" aria-labelledby="settings-language">
         <h2 id="settings-language">{t('app.settings.languageHeading')}</h2>
         <Segmented

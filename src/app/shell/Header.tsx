@@ -1,6 +1,10 @@
 /** Top bar: the name, whether the app is ready offline, and the safety notes one tap away. */
 import { useT } from '../../i18n/useT';
 import { OfflineStatus } from '../../pwa/OfflineStatus';
+import type { ComponentType } from 'preact';
+import { useEffect, useState } from 'preact/hooks';
+import { withFullLocale } from '../../i18n/useT';
+import { shopConfigured, shopSettings } from '../sync/state';
 import { StrokeIcon } from '../ui/Icon';
 import { hrefFor, route } from './route';
 import { HEADER_SCREEN } from './screens';
@@ -17,6 +21,7 @@ export function Header() {
         <span class="brand-name">{t('app.name')}</span>
       </span>
       <OfflineStatus />
+      <ShopStatus />
       <a
         class="safety-link"
         href={hrefFor(HEADER_SCREEN.id)}
@@ -27,4 +32,21 @@ export function Header() {
       </a>
     </header>
   );
+}
+
+/**
+ * The shop server's status, loaded (code and words) only on a device that has a server set up;
+ * loading it starts the replication, after the first paint.
+ */
+function ShopStatus() {
+  const configured = shopConfigured(shopSettings.value);
+  const [Badge, setBadge] = useState<ComponentType | null>(null);
+  useEffect(() => {
+    if (!configured) return;
+    void withFullLocale(() => import('../sync/SyncBadge'))().then((mod) => {
+      setBadge(() => mod.SyncBadge);
+      mod.startShopSync();
+    });
+  }, [configured]);
+  return configured && Badge ? <Badge /> : null;
 }

@@ -2,6 +2,8 @@
 export interface Choice {
   value: string;
   label: string;
+  /** Shown but not selectable (e.g. a status the signed-in person may not set). */
+  disabled?: boolean;
 }
 
 export interface ChoiceFieldProps {

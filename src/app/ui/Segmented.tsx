@@ -19,11 +19,15 @@ export function Segmented({ name, legend, value, choices, onChange, wrap, hideLe
       <legend class={hideLegend ? 'visually-hidden' : undefined}>{legend}</legend>
       <div class="segmented-options">
         {choices.map((c) => (
-          <label key={c.value} class={c.value === value ? 'segment segment-on' : 'segment'}>
+          <label
+            key={c.value}
+            class={`segment${c.value === value ? ' segment-on' : ''}${c.disabled ? ' segment-disabled' : ''}`}
+          >
             <input
               type="radio"
               name={name}
               value={c.value}
+              disabled={c.disabled}
               checked={c.value === value}
               onChange={() => onChange(c.value)}
             />

@@ -11,7 +11,7 @@ export interface TextFieldProps {
   placeholder?: string | undefined;
   maxLength?: number;
   /** 'date' and 'time' give the phone's own pickers; 'search' a clear button. */
-  type?: 'text' | 'search' | 'date' | 'time';
+  type?: 'text' | 'search' | 'date' | 'time' | 'password';
   hint?: string | undefined;
   error?: string | undefined;
   /** Upper-case keyboards for codes such as initials and furnace names. */

@@ -104,7 +104,12 @@ export function mountUplot<D extends { labels: unknown }>(
 ): ChartHandle<D> {
   let current = data;
   let drawnLook = look;
-  const make = () => new uPlot(options(() => current, el.clientWidth || 320, onPoint), series(current), el);
+  const make = () =>
+    new uPlot(
+      options(() => current, el.clientWidth || 320, onPoint),
+      series(current),
+      el,
+    );
   let plot = make();
   return {
     update(next, nextLook = drawnLook) {

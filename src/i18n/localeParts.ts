@@ -15,7 +15,8 @@ export type LocalePart = (typeof LOCALE_PARTS)[number];
 
 /**
  * Key paths of the first part. A path names a message or a whole subtree; a message's plural
- * forms (`key_one`, `key_other`, …) come with it. test/i18n/localeParts.test.ts checks that every
+ * forms (`key_one`, `key_other`, …) come with it; a path written `!path` is left to the rest even
+ * inside a subtree named here. test/i18n/localeParts.test.ts checks that every
  * key the first screen's code can ask for is here, and that every entry is still asked for.
  */
 export const FIRST_SCREEN_KEYS: readonly string[] = [
@@ -51,9 +52,15 @@ export const FIRST_SCREEN_KEYS: readonly string[] = [
   'app.log.save.button',
   'app.log.save.openJob',
   'app.log.note.button',
-  // Any physics error or caution can reach the first screen's fields.
+  // Any physics error or caution can reach the first screen's fields, but those of the planner and
+  // the lab's readers (which the first screen never loads; the test checks none of their codes
+  // is written there).
   'errors',
   'warnings',
+  '!errors.plantThreshold',
+  '!errors.traverse',
+  '!warnings.plan',
+  '!warnings.traverse',
 ];
 
 /** i18next's plural (and ordinal plural) suffixes. */
@@ -61,12 +68,12 @@ const PLURAL_SUFFIX = /^(?:_ordinal)?_(?:zero|one|two|few|many|other)$/u;
 
 /** Whether the message at `path` belongs to the first part named by `keys`. */
 export function isFirstScreenKey(path: string, keys: readonly string[] = FIRST_SCREEN_KEYS): boolean {
-  return keys.some(
-    (key) =>
-      path === key ||
-      path.startsWith(`${key}.`) ||
-      (path.startsWith(`${key}_`) && PLURAL_SUFFIX.test(path.slice(key.length))),
-  );
+  const names = (key: string) =>
+    path === key ||
+    path.startsWith(`${key}.`) ||
+    (path.startsWith(`${key}_`) && PLURAL_SUFFIX.test(path.slice(key.length)));
+  const left = keys.filter((key) => key.startsWith('!')).map((key) => key.slice(1));
+  return keys.some((key) => !key.startsWith('!') && names(key)) && !left.some(names);
 }
 
 const isTree = (value: unknown): value is Messages =>

@@ -8,11 +8,21 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { localeChunks } from '../../src/i18n/build/localeChunks';
 import { LANGUAGES, RESOURCES } from '../../src/i18n/i18n';
-import { FIRST_SCREEN_KEYS, pickLocalePart, type Messages } from '../../src/i18n/localeParts';
+import { readdirSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { FIRST_SCREEN_KEYS, isFirstScreenKey, pickLocalePart, type Messages } from '../../src/i18n/localeParts';
 import { parseSource, staticImportGraph } from '../importGraph';
+import { LEFT_TO_REST_READERS } from '../size/lazyOnly';
 import { leafKeys, messagesOf, translationKeys, type KeyUse } from './translationKeys';
 
 const ENTRY = 'src/app/main.tsx';
+
+const sourceFiles = (dir: string): string[] =>
+  readdirSync(dir, { withFileTypes: true }).flatMap((entry) => {
+    const path = join(dir, entry.name);
+    if (entry.isDirectory()) return sourceFiles(path);
+    return /\.tsx?$/u.test(entry.name) ? [path] : [];
+  });
 
 /** The leaves of a tree with their messages, for comparing trees whatever their key order. */
 const entries = (tree: Messages) =>
@@ -53,6 +63,9 @@ describe('splitting a locale file in two parts', () => {
       a: { b: { c: '1', d: '2' }, n_one: '4', n_other: '5' },
     });
     expect(pickLocalePart(messages, 'rest', ['a.b', 'a.n'])).toEqual({ a: { bc: '3', nx: '6' }, z: '7' });
+    expect(pickLocalePart(messages, 'first', ['a', '!a.b', '!a.n'])).toEqual({ a: { bc: '3', nx: '6' } });
+    expect(isFirstScreenKey('a.b.c', ['a', '!a.b'])).toBe(false);
+    expect(isFirstScreenKey('a.bc', ['a', '!a.b'])).toBe(true);
   });
 
   it('holds for any tree and any list of paths (property)', () => {
@@ -123,12 +136,28 @@ describe('the first part holds what the first screen asks for', () => {
     expect(scanned.flatMap((s) => s.unreadable)).toEqual([]);
   });
 
+  /** Paths left to the rest inside a first-part subtree: codes only lazily loaded readers write. */
+  const leftToRest = FIRST_SCREEN_KEYS.filter((key) => key.startsWith('!')).map((key) => key.slice(1));
+
+  it('codes whose words are left to the rest are written only by readers the first screen does not load', () => {
+    const codes = leftToRest.map((path) => path.slice(path.indexOf('.') + 1));
+    const literal = new RegExp(`['"\`](?:${codes.join('|')})\\.`, 'u');
+    // result.ts lists every code (for its type) and paramUnits.ts gives their params' units: neither writes one.
+    const writers = sourceFiles('src')
+      .filter((path) => !/physics\/(result|paramUnits)\.ts$/u.test(path))
+      .filter((path) => literal.test(readFileSync(path, 'utf8')));
+    expect(writers.length).toBeGreaterThan(2);
+    expect(writers.filter((path) => !LEFT_TO_REST_READERS.some((reader) => reader.test(path)))).toEqual([]);
+  });
+
   it.each(LANGUAGES)(
     '%s: every key (and every key a template can build) asked for there is in the first part',
     (lng) => {
       const first = new Set(leafKeys(pickLocalePart(RESOURCES[lng], 'first')));
       const problems = uses.flatMap((use) => {
-        const messages = messagesOf(use, english);
+        const messages = messagesOf(use, english).filter(
+          (m) => !leftToRest.some((path) => m.startsWith(`${path}.`) && !use.key.startsWith(path)),
+        );
         if (messages.length === 0) return [`${use.where}: ${use.key} names no message`];
         const missing = messages.filter((m) => !first.has(m));
         return missing.length > 0
@@ -143,7 +172,7 @@ describe('the first part holds what the first screen asks for', () => {
 
   it('every entry of FIRST_SCREEN_KEYS names messages that code asks for (the first part stays small)', () => {
     const asked = new Set(uses.flatMap((use) => messagesOf(use, english)));
-    const stale = FIRST_SCREEN_KEYS.filter((key) => {
+    const stale = FIRST_SCREEN_KEYS.filter((key) => !key.startsWith('!')).filter((key) => {
       const named = messagesOf({ key, kind: 'key' }, english);
       return named.length === 0 || !named.some((m) => asked.has(m));
     });

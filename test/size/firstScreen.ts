@@ -5,12 +5,13 @@
  * (`locale-first-<lang>-*.js`), since the first paint waits for that part of one locale and
  * not for the rest (`locale-rest-<lang>-*.js`, listed but not counted). Fails over the budget,
  * when a locale chunk is a static import, or when code that only the job log needs (its database,
- * validation and CSV libraries) has slipped into the first screen, read from the chunks' source
+ * validation and CSV libraries) or the planner's and lab's readers (`lazyOnly.ts`) has slipped into the first screen, read from the chunks' source
  * maps. Run after `vite build`.
  */
 import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
+import { LAZY_ONLY } from './lazyOnly';
 
 /** Budget for the first screen's JavaScript, gzip, kB (1 kB = 1000 bytes). */
 export const FIRST_SCREEN_BUDGET_KB = 60;
@@ -59,14 +60,6 @@ if (staticLocales.length > 0) {
 }
 const largestFirst = firstParts[0]!;
 
-/** Sources that belong in lazily loaded chunks only. */
-const LAZY_ONLY = [
-  /node_modules\/idb\//,
-  /node_modules\/valibot\//,
-  /node_modules\/papaparse\//,
-  /node_modules\/pouchdb/,
-  /src\/jobs\/(store|schema|migrations|logIndex|fieldMerge|legacyLog)/,
-];
 const misplaced = staticFiles.flatMap((file) => {
   const mapPath = join(dist, `${file}.map`);
   // Only bundler glue comes without a map; anything larger must be checkable.

@@ -283,7 +283,7 @@ describe('job log', () => {
     const message = await importFile(page, JSON.stringify(broken));
     assert.match(
       message,
-      /^Nothing was imported: the file has a problem\. jobs\[3\]\.operator: not in the expected format\. Initials are 1 to 4 letters, e\.g\. MK\.$/u,
+      /^Nothing was imported: the file has a problem\. jobs\[3\]\.operator: not in the expected format\. Write initials of 1 to 4 letters \(MK\) or a badge number of up to 8 digits\.$/u,
     );
     assert.match(await importFile(page, 'not json at all'), /not JSON/u);
     assert.deepEqual(await storedRecords(page), before);

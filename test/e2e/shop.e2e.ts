@@ -5,7 +5,8 @@
  * shown before trying that holding a load is the supervisor's; the supervisor's hold comes back.
  * Both phones offline, one with its clock 2 h fast, change one job: different fields merge by
  * themselves, the same field keeps both values on the job until a person picks, on both phones.
- * A new phone's first replication of a 10 000-job plant log, with its progress in the header.
+ * A new phone's first replication of a 10 000-job plant log, with its progress in the header, and
+ * another's cut off midway: every job arrives exactly once.
  */
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
@@ -70,6 +71,20 @@ async function editJob(page: Page, id: string, fields: Record<string, string>): 
   await page.click('button:has-text("Save changes")');
   await page.waitForSelector('.log-saved:has-text("Changes saved.")');
 }
+
+/** Documents in the phone's log database (each job once, whatever its revisions). */
+const countDocs = (page: Page) =>
+  page.evaluate(
+    () =>
+      new Promise<number>((resolve, reject) => {
+        const open = indexedDB.open('_pouch_casefront-log');
+        open.onerror = () => reject(new Error('no log database'));
+        open.onsuccess = () => {
+          const count = open.result.transaction('document-store').objectStore('document-store').count();
+          count.onsuccess = () => resolve(count.result);
+        };
+      }),
+  );
 
 describe('one shop log on two devices', () => {
   it('wrong password refused in words; an operator’s load is on the supervisor’s phone within 5 s; holds are the supervisor’s', async () => {
@@ -140,7 +155,7 @@ describe('one shop log on two devices', () => {
     await supervisor.context.setOffline(true);
     await editJob(operator.page, id, { furnace: 'F3', notes: 'Basket 2 on the furnace tablet.' });
     await editJob(supervisor.page, id, { 'work-order': 'WO-SHOP-2B', notes: 'Checked on the supervisor phone.' });
-    await operator.page.waitForSelector('header [data-sync-state="waiting"], header [data-sync-state="offline"]');
+    for (const phone of [operator, supervisor]) await phone.page.waitForSelector('header [data-sync-state="offline"]');
 
     const backAt = Date.now();
     await operator.context.setOffline(false);
@@ -204,22 +219,32 @@ describe('one shop log on two devices', () => {
     assert.match(shown, /^\d[\d,]* jobs? received from the shop server…$/u);
     await phone.page.waitForSelector('header [data-sync-state="upToDate"]', { timeout: 120_000 });
     const seconds = (Date.now() - startedAt) / 1000;
-    const stored = await phone.page.evaluate(
-      () =>
-        new Promise<number>((resolve, reject) => {
-          const open = indexedDB.open('_pouch_casefront-log');
-          open.onerror = () => reject(new Error('no log database'));
-          open.onsuccess = () => {
-            const count = open.result.transaction('document-store').objectStore('document-store').count();
-            count.onsuccess = () => resolve(count.result);
-          };
-        }),
-    );
+    const stored = await countDocs(phone.page);
     console.log(
       `syncInitial10kS: ${seconds.toFixed(1)} s for ${stored} documents (target ≤ 30 s); progress read "${shown}"`,
     );
     assert.equal(stored, 10_000);
     assert.ok(seconds <= 30, `first replication took ${seconds.toFixed(1)} s`);
     await phone.context.close();
+
+    // Another phone loses the network in the middle of its first replication: once back, it holds
+    // every job exactly once.
+    const cut = await device(database);
+    const midway = cut.page.waitForSelector('header [data-sync-state="receiving"]', { timeout: 60_000 });
+    assert.match(await signIn(cut.page, 'sv', password('sv')), /^Signed in as sv\./u);
+    await midway;
+    await cut.context.setOffline(true);
+    const before = await countDocs(cut.page);
+    await cut.page.waitForTimeout(3000);
+    const during = await cut.page.getAttribute('header [data-sync-state]', 'data-sync-state');
+    assert.equal(during, 'offline');
+    await cut.context.setOffline(false);
+    await cut.page.waitForSelector('header [data-sync-state="upToDate"]', { timeout: 120_000 });
+    console.log(
+      `network cut for 3 s after ${before} of 10000 documents (status then: ${during}): ${await countDocs(cut.page)} once back`,
+    );
+    assert.ok(before < 10_000);
+    assert.equal(await countDocs(cut.page), 10_000);
+    await cut.context.close();
   });
 });

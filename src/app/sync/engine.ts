@@ -25,12 +25,17 @@ let listening = false;
 const MAX_RETRY_MS = 30_000;
 const backOff = (delay: number) => Math.min(MAX_RETRY_MS, Math.max(1000, delay * 2));
 let pushedSeq: number | string = 0;
+/** How far this device has read the server's changes, and from which database. */
+let pulled: { from: string; seq: number | string } = { from: '', seq: 0 };
 
 /** The server's address for a path under it (`_session`, the database). */
 export function serverUrl(settings: ShopSettings, path: string): string {
   const base = settings.address.endsWith('/') ? settings.address : `${settings.address}/`;
   return new URL(`${base}${path}`, location.href).href;
 }
+
+/** States only the server's answer or the network's return may end: a write or an arrival keeps them. */
+const KEPT_STATES: readonly SyncStatus['state'][] = ['refused', 'offline'];
 
 function setStatus(changes: Partial<SyncStatus>): void {
   syncStatus.value = { ...syncStatus.value, ...changes };
@@ -126,7 +131,9 @@ export async function startSync(): Promise<void> {
   } else {
     signedIn.value = { name: session.userCtx.name, roles: session.userCtx.roles ?? [] };
   }
-  const remote = new Pouch(serverUrl(settings, encodeURIComponent(settings.database.trim())), {
+  const remoteUrl = serverUrl(settings, encodeURIComponent(settings.database.trim()));
+  if (pulled.from !== remoteUrl) pulled = { from: remoteUrl, seq: 0 };
+  const remote = new Pouch(remoteUrl, {
     skip_setup: true,
     fetch: (url: string, options: RequestInit) => Pouch.fetch(url, { ...options, credentials: 'include' }),
   });
@@ -135,6 +142,11 @@ export async function startSync(): Promise<void> {
     // The network is back: start again at once instead of waiting out the retry delay.
     window.addEventListener('online', () => {
       if (running) void startSync();
+    });
+    // The device knows before the replication does; and while it is off, no pause means "all sent".
+    window.addEventListener('offline', () => {
+      if (running && syncStatus.value.state !== 'offline')
+        setStatus({ state: 'offline', since: new Date().toISOString() });
     });
   }
   if (!watching) {
@@ -155,17 +167,19 @@ export async function startSync(): Promise<void> {
         change: { last_seq?: number | string; docs_written?: number };
       };
       if (direction === 'push' && change.last_seq !== undefined) pushedSeq = change.last_seq;
+      if (direction === 'pull' && change.last_seq !== undefined) pulled = { from: remoteUrl, seq: change.last_seq };
       if (direction === 'pull') {
         const received = syncStatus.value.received + (change.docs_written ?? 0);
         // A first replication of a big log takes a while: its progress, until the server has nothing more.
-        setStatus(syncStatus.value.state === 'refused' ? { received } : { received, state: 'receiving' });
+        // (A batch fetched before the network went away may land after: "offline" stays.)
+        setStatus(KEPT_STATES.includes(syncStatus.value.state) ? { received } : { received, state: 'receiving' });
         // The views read the log again; the store picks up what arrived.
         logChanges.value++;
       }
       void countPending(db).then((pending) => {
-        if (syncStatus.value.state !== 'receiving' || direction === 'push')
-          setStatus({ pending, state: pending > 0 ? 'waiting' : syncStatus.value.state });
-        else setStatus({ pending });
+        const state = syncStatus.value.state;
+        if (KEPT_STATES.includes(state) || (state === 'receiving' && direction === 'pull')) setStatus({ pending });
+        else setStatus({ pending, state: pending > 0 ? 'waiting' : state });
       });
     })
     .on('paused', (error) => {
@@ -179,14 +193,26 @@ export async function startSync(): Promise<void> {
         if (syncStatus.value.state !== 'offline') setStatus({ state: 'offline', since: new Date().toISOString() });
         return;
       }
-      void db.info().then(async (info) => {
-        if (syncStatus.value.state !== 'refused') pushedSeq = info.update_seq;
+      // A pause is "all sent" only while the network is there (the device may have gone off meanwhile).
+      const settled = () => navigator.onLine && isCurrent() && !KEPT_STATES.includes(syncStatus.value.state);
+      if (!settled()) return;
+      void (async () => {
+        // A replication started again pauses before it has read on: up to date only when the server has nothing newer.
+        const behind = await remote.changes({ since: pulled.seq, limit: 1 }).then(
+          (answer) => answer.results.length > 0,
+          () => false,
+        );
+        if (behind || !settled()) return;
+        const info = await db.info();
+        if (!settled()) return;
+        pushedSeq = info.update_seq;
         const pending = await countPending(db);
-        if (syncStatus.value.state !== 'refused') setStatus({ state: pending > 0 ? 'waiting' : 'upToDate', pending });
-      });
+        if (settled()) setStatus({ state: pending > 0 ? 'waiting' : 'upToDate', pending });
+      })();
     })
     .on('active', () => {
-      if (isCurrent() && syncStatus.value.state === 'offline') setStatus({ state: 'connecting' });
+      // A retry while the device has no network is not a connection.
+      if (isCurrent() && navigator.onLine && syncStatus.value.state === 'offline') setStatus({ state: 'connecting' });
     })
     .on('denied', (error) => {
       if (!isCurrent()) return;
@@ -209,6 +235,7 @@ export async function noteLocalWrite(): Promise<void> {
   if (!store.ok) return;
   const pending = await countPending(store.value.db);
   // While the first replication pulls, its own arrivals look like local changes: the progress stays.
-  if (pending > 0 && !['refused', 'receiving'].includes(syncStatus.value.state))
-    setStatus({ state: 'waiting', pending });
+  const state = syncStatus.value.state;
+  if (KEPT_STATES.includes(state) || state === 'receiving') setStatus({ pending });
+  else if (pending > 0) setStatus({ state: 'waiting', pending });
 }

@@ -3,6 +3,8 @@
  * started, reached through the app's own origin under /db/): signing in with a wrong password is
  * refused in words; an operator's load reaches the supervisor's phone within 5 s; the operator is
  * shown before trying that holding a load is the supervisor's; the supervisor's hold comes back.
+ * Both phones offline, one with its clock 2 h fast, change one job: different fields merge by
+ * themselves, the same field keeps both values on the job until a person picks, on both phones.
  */
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
@@ -43,6 +45,29 @@ async function signIn(page: Page, name: string, secret: string): Promise<string>
   return (await answer.textContent()) ?? '';
 }
 
+/** Saves the depth screen's load to the log; returns its job id. */
+async function saveLoad(page: Page, workOrder: string): Promise<string> {
+  await page.goto(`${BASE_URL}#/depth`);
+  await page.click('#log-save button');
+  await page.fill('#log-save-work-order', workOrder);
+  await page.fill('#log-save-part', 'KR-2231');
+  await page.fill('#log-save-furnace', 'F1');
+  await page.fill('#log-save-operator', 'MK');
+  await page.click('form.log-form button[type=submit]');
+  const link = page.locator('.log-saved a');
+  await link.waitFor();
+  return ((await link.getAttribute('href')) ?? '').split('/').pop()!;
+}
+
+/** Opens the job's page, types into its edit form and saves. */
+async function editJob(page: Page, id: string, fields: Record<string, string>): Promise<void> {
+  await page.goto(`${BASE_URL}#/log/job/${id}`);
+  await page.click('button:has-text("Edit")');
+  for (const [field, value] of Object.entries(fields)) await page.fill(`#job-edit-${field}`, value);
+  await page.click('button:has-text("Save changes")');
+  await page.waitForSelector('.log-saved:has-text("Changes saved.")');
+}
+
 describe('one shop log on two devices', () => {
   it('wrong password refused in words; an operator’s load is on the supervisor’s phone within 5 s; holds are the supervisor’s', async () => {
     const operator = await device();
@@ -60,17 +85,8 @@ describe('one shop log on two devices', () => {
 
     // The supervisor watches the running shift's list.
     await openScreen(supervisor.page, 'log');
-    await operator.page.goto(`${BASE_URL}#/depth`);
-    await operator.page.click('#log-save button');
-    await operator.page.fill('#log-save-work-order', 'WO-SHOP-1');
-    await operator.page.fill('#log-save-part', 'KR-2231');
-    await operator.page.fill('#log-save-furnace', 'F1');
-    await operator.page.fill('#log-save-operator', 'MK');
-    await operator.page.click('form.log-form button[type=submit]');
-    const link = operator.page.locator('.log-saved a');
-    await link.waitFor();
+    const id = await saveLoad(operator.page, 'WO-SHOP-1');
     const savedAt = Date.now();
-    const id = ((await link.getAttribute('href')) ?? '').split('/').pop()!;
     await supervisor.page.waitForSelector(`a.job-card[data-job="${id}"]`, { timeout: 5000 });
     const seenMs = Date.now() - savedAt;
     console.log(`supervisor sees the operator's load after ${seenMs} ms (target ≤ 5000 ms)`);
@@ -104,5 +120,51 @@ describe('one shop log on two devices', () => {
       );
       await phone.context.close();
     }
+  });
+
+  it('both phones offline (one clock 2 h fast) change one job: other fields merge, the same field is kept both ways until a person picks', async () => {
+    const operator = await device();
+    const supervisor = await device();
+    // The supervisor's phone runs 2 h fast: nothing below may depend on whose clock is later.
+    await supervisor.page.clock.setSystemTime(Date.now() + 2 * 3600_000);
+    assert.match(await signIn(operator.page, 'mk', password('mk')), /^Signed in as mk\./u);
+    assert.match(await signIn(supervisor.page, 'sv', password('sv')), /^Signed in as sv\./u);
+    const id = await saveLoad(operator.page, 'WO-SHOP-2');
+    await supervisor.page.goto(`${BASE_URL}#/log/job/${id}`);
+    await supervisor.page.waitForSelector('text=Job WO-SHOP-2', { timeout: 10_000 });
+
+    await operator.context.setOffline(true);
+    await supervisor.context.setOffline(true);
+    await editJob(operator.page, id, { furnace: 'F3', notes: 'Basket 2 on the furnace tablet.' });
+    await editJob(supervisor.page, id, { 'work-order': 'WO-SHOP-2B', notes: 'Checked on the supervisor phone.' });
+    await operator.page.waitForSelector('header [data-sync-state="waiting"], header [data-sync-state="offline"]');
+
+    const backAt = Date.now();
+    await operator.context.setOffline(false);
+    await supervisor.context.setOffline(false);
+    for (const phone of [operator, supervisor]) {
+      const { page } = phone;
+      // Both phones end with both other-field changes and both notes offered for a choice.
+      await page.waitForSelector('.open-choices[aria-labelledby] [data-field="notes"]', { timeout: 30_000 });
+      await page.waitForSelector('text=Job WO-SHOP-2B', { timeout: 30_000 });
+      const main = (await page.textContent('main')) ?? '';
+      assert.match(main, /F3/u);
+      const choice = (await page.textContent('.open-choice[data-field="notes"]')) ?? '';
+      assert.match(choice, /Basket 2 on the furnace tablet\./u);
+      assert.match(choice, /Checked on the supervisor phone\./u);
+    }
+    console.log(`both phones merged after the network came back: ${Date.now() - backAt} ms`);
+
+    // The supervisor keeps the operator's notes; the choice goes away on both phones.
+    await supervisor.page
+      .locator('.open-choice[data-field="notes"] li', { hasText: 'Basket 2 on the furnace tablet.' })
+      .locator('button')
+      .click();
+    for (const phone of [supervisor, operator]) {
+      await phone.page.waitForSelector('.open-choices', { state: 'detached', timeout: 15_000 });
+      assert.match((await phone.page.textContent('main')) ?? '', /Basket 2 on the furnace tablet\./u);
+      assert.doesNotMatch((await phone.page.textContent('main')) ?? '', /Checked on the supervisor phone\./u);
+    }
+    for (const phone of [operator, supervisor]) await phone.context.close();
   });
 });

@@ -19,6 +19,11 @@ const Pouch = PouchDB as unknown as PouchStatic;
 
 let running: Emitter | undefined;
 let watching = false;
+let listening = false;
+
+/** Waits between retries: PouchDB's doubling, but never more than 30 s (a shop floor's network comes and goes). */
+const MAX_RETRY_MS = 30_000;
+const backOff = (delay: number) => Math.min(MAX_RETRY_MS, Math.max(1000, delay * 2));
 let pushedSeq: number | string = 0;
 
 /** The server's address for a path under it (`_session`, the database). */
@@ -125,6 +130,13 @@ export async function startSync(): Promise<void> {
     skip_setup: true,
     fetch: (url: string, options: RequestInit) => Pouch.fetch(url, { ...options, credentials: 'include' }),
   });
+  if (!listening) {
+    listening = true;
+    // The network is back: start again at once instead of waiting out the retry delay.
+    window.addEventListener('online', () => {
+      if (running) void startSync();
+    });
+  }
   if (!watching) {
     watching = true;
     // Every write here (or arrival) may change what waits for the server.
@@ -132,7 +144,7 @@ export async function startSync(): Promise<void> {
       if (logChanges.value >= 0) void noteLocalWrite();
     });
   }
-  const handle = db.sync(remote, { live: true, retry: true, batch_size: 250 });
+  const handle = db.sync(remote, { live: true, retry: true, batch_size: 250, back_off_function: backOff });
   running = handle;
   const isCurrent = () => running === handle;
   handle

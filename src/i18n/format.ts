@@ -154,6 +154,19 @@ export function formatNumber(
   return text.replace(/^-(?=0(?:\D0*)?$)/, '').replace(/^-/, '\u2212'); // no "−0", true minus sign
 }
 
+/**
+ * A result in `unit` as its shown figure reads, as a number: 0.815 mm is shown "0.82 mm", so 0.82.
+ * Verdicts on shown figures (a lab depth inside or outside a range) compare these, so a verdict never
+ * contradicts the figures beside it; the same rounding as formatQuantity, whatever the decimal mark.
+ */
+export function valueAsShown(value: number, unit: string): number {
+  if (!Number.isFinite(value)) return Number.NaN;
+  const digits = resultDigits(unit);
+  return Math.abs(value) >= LARGEST_PLAIN
+    ? Number(value.toExponential(2))
+    : Number(formatFixed(value, { group: '', decimal: '.' }, digits, false));
+}
+
 /** A number with its unit symbol, e.g. "0.87 mm"; NO_VALUE (without unit) when not finite. */
 export function formatQuantity(
   value: number,

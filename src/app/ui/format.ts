@@ -14,4 +14,5 @@ export {
   resultDigits,
   UNIT_SYMBOLS,
   unitSymbol,
+  valueAsShown,
 } from '../../i18n/format';

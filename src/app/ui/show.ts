@@ -10,7 +10,7 @@ import {
   formatRange,
   formatScientific,
   NO_VALUE,
-  resultDigits,
+  valueAsShown,
 } from './format';
 import { messageFigures, type Figures } from '../../i18n/wording';
 import type { DisplayUnits } from './units';
@@ -53,7 +53,7 @@ export function makeShow(units: DisplayUnits, locale: string): Show {
   return {
     depth: (mm) => formatQuantity(depth(mm), units.depth, locale),
     depthRange: (a, b) => formatRange(depth(a), depth(b), units.depth, locale),
-    depthAsShown: (mm) => Number(depth(mm).toFixed(resultDigits(units.depth))),
+    depthAsShown: (mm) => valueAsShown(depth(mm), units.depth),
     depthChange: (mm) => {
       const text = formatQuantity(depth(mm), units.depth, locale);
       return text === NO_VALUE || mm < 0 || text.startsWith('\u2212') ? text : `+${text}`;

@@ -100,6 +100,56 @@ function starExports(path: string, text?: string): string[] {
     .map((s) => `${path}:${source.getLineAndCharacterOfPosition(s.getStart()).line + 1}: ${s.getText()}`);
 }
 
+/**
+ * Import circles among the given modules (every import but `import()`, type imports included: a circle of
+ * types is still two modules that cannot be read apart). Each circle is listed once, as the modules in it.
+ */
+function importCircles(graph: ReadonlyMap<string, readonly string[]>): string[][] {
+  // Tarjan's strongly connected components; a component of more than one module (or a self-import) is a circle.
+  let counter = 0;
+  const order = new Map<string, number>();
+  const low = new Map<string, number>();
+  const stack: string[] = [];
+  const onStack = new Set<string>();
+  const circles: string[][] = [];
+  const visit = (path: string) => {
+    order.set(path, counter);
+    low.set(path, counter++);
+    stack.push(path);
+    onStack.add(path);
+    for (const next of graph.get(path) ?? []) {
+      if (!order.has(next)) {
+        visit(next);
+        low.set(path, Math.min(low.get(path)!, low.get(next)!));
+      } else if (onStack.has(next)) low.set(path, Math.min(low.get(path)!, order.get(next)!));
+    }
+    if (low.get(path) !== order.get(path)) return;
+    const component: string[] = [];
+    let member: string;
+    do {
+      member = stack.pop()!;
+      onStack.delete(member);
+      component.push(member);
+    } while (member !== path);
+    if (component.length > 1 || graph.get(path)?.includes(path)) circles.push(component.sort());
+  };
+  for (const path of graph.keys()) if (!order.has(path)) visit(path);
+  return circles;
+}
+
+/** Who imports whom (not counting `import()`), for the given sources (`texts` stands in for files, in the samples). */
+function importGraph(paths: readonly string[], texts: Record<string, string> = {}): Map<string, string[]> {
+  return new Map(
+    paths.map((path) => [
+      path,
+      importsOf(parseSource(path, texts[path]))
+        .filter((ref) => ref.kind !== 'dynamic' && ref.specifier.startsWith('.'))
+        .map((ref) => (texts[path] ? repoPath(`${path}/../${ref.specifier}.ts`) : resolveImport(path, ref.specifier)))
+        .filter((target): target is string => target !== undefined),
+    ]),
+  );
+}
+
 const DEMO_LOG = 'src/app/log/demo/demoLog.ts';
 
 const importKind = (d: Dependency) =>
@@ -170,6 +220,16 @@ describe('architecture: the direction of dependencies', () => {
       ).map((line) => line.split(': ')[1]),
     ).toEqual(["export * from './c';"]);
     expect(
+      importCircles(
+        importGraph(['src/a.ts', 'src/b.ts', 'src/c.ts', 'src/d.ts'], {
+          'src/a.ts': "import { b } from './b';",
+          'src/b.ts': "import type { C } from './c';",
+          'src/c.ts': "import { a } from './a'; const d = await import('./d');",
+          'src/d.ts': "import { c } from './c';",
+        }),
+      ),
+    ).toEqual([['src/a.ts', 'src/b.ts', 'src/c.ts']]);
+    expect(
       browserGlobals(
         'src/physics/x.ts',
         'const a = window.innerWidth; const b = { document: 1 }; const c = x.localStorage; function f(navigator: string) { return indexedDB; }',
@@ -204,6 +264,12 @@ describe('architecture: the direction of dependencies', () => {
     const ui = files('src/app/ui');
     expect(ui.length).toBeGreaterThan(10);
     expect(ui.flatMap((path) => uiImportProblems(dependencies(path)))).toEqual([]);
+  });
+
+  it('no import circles anywhere in the source (type imports count; import() does not)', () => {
+    const all = files('src');
+    expect(all.length).toBeGreaterThan(100);
+    expect(importCircles(importGraph(all))).toEqual([]);
   });
 
   it('the demo log loads only through the explicit action: one import(), from the log files view', () => {

@@ -32,6 +32,7 @@ export function FurnaceField({
     calibrationWords(calibrationState(list, furnace, model), t, show)?.sentence ?? t('app.calibration.chooseHint');
   return (
     <ChoiceField
+      wrap
       id={id}
       label={t('app.calibration.furnace')}
       value={furnace}

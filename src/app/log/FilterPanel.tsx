@@ -60,6 +60,7 @@ export function FilterPanel({ furnaces, parts }: { furnaces: readonly string[]; 
           />
           <div class="field-grid">
             <ChoiceField
+              wrap
               id="log-furnace"
               label={t('app.log.fields.furnace')}
               value={form.furnace}
@@ -67,6 +68,7 @@ export function FilterPanel({ furnaces, parts }: { furnaces: readonly string[]; 
               onChange={(furnace) => set({ furnace })}
             />
             <ChoiceField
+              wrap
               id="log-part"
               label={t('app.log.fields.partNumber')}
               value={form.partNumber}

@@ -1,7 +1,7 @@
 /**
  * Lab against prediction, job by job: a table that fits a 390 px phone in every language. Each job
- * is a row group: its part (a link) and a second line across the width, then its three figures
- * under the three column headings, so no column is pushed out of sight.
+ * is a row group: its part (a link) and a second line across the width, then its figures under
+ * the column headings, so no column is pushed out of sight.
  */
 import type { ComponentChildren } from 'preact';
 import { hrefFor } from '../shell/route';
@@ -10,8 +10,8 @@ export interface PairRow {
   id: string;
   title: string;
   subtitle?: string | undefined;
-  /** The three figures, in the order of `columns`. */
-  cells: readonly [ComponentChildren, ComponentChildren, ComponentChildren];
+  /** The figures, one per column, in the order of `columns`. */
+  cells: readonly ComponentChildren[];
 }
 
 export function PairsTable({
@@ -20,7 +20,7 @@ export function PairsTable({
   rows,
 }: {
   caption: string;
-  columns: readonly [string, string, string];
+  columns: readonly string[];
   rows: readonly PairRow[];
 }) {
   return (
@@ -38,7 +38,7 @@ export function PairsTable({
       {rows.map((row) => (
         <tbody key={row.id}>
           <tr class="pair-head">
-            <th scope="rowgroup" colSpan={3}>
+            <th scope="rowgroup" colSpan={columns.length}>
               <a href={hrefFor('log', 'job', row.id)} data-literal>
                 {row.title}
               </a>

@@ -14,6 +14,7 @@ import { plantThresholds, setThresholdApplied, storeThreshold, type StoredThresh
 import { useScreenContext, type ScreenContext } from '../settings/screenContext';
 import { hrefFor } from '../shell/route';
 import { ErrorNote } from '../ui/Notices';
+import { PairsTable } from './PairsTable';
 import { ResultList, type ResultRow } from '../ui/ResultList';
 import { CheckField } from '../ui/TextField';
 import { latestRun } from '../worker/client';
@@ -181,33 +182,18 @@ function ThresholdResiduals({
   return (
     <details class="disclosure">
       <summary>{t('app.calibration.residualsHeading', { count: fit.residuals.length })}</summary>
-      <div class="table-wrap">
-        <table class="numbers pairs">
-          <caption>{t('app.plantThreshold.residualsCaption')}</caption>
-          <thead>
-            <tr>
-              <th scope="col">{t('app.log.summary.colJob')}</th>
-              <th scope="col">{t('app.plantThreshold.colEcd')}</th>
-              <th scope="col">{t('app.plantThreshold.colCaseEnd')}</th>
-            </tr>
-          </thead>
-          <tbody>
-            {fit.residuals.map((r) => (
-              <tr key={r.id}>
-                <th scope="row">
-                  <a href={hrefFor('log', 'job', r.id)}>{byId.get(r.id)?.partNumber ?? r.id.slice(0, 8)}</a>
-                </th>
-                <td>
-                  {show.depth(r.measuredEcdMm)} / {show.depth(r.predictedEcdMm)}
-                </td>
-                <td>
-                  {show.depth(r.measuredCaseEndMm)} / {show.depth(r.predictedCaseEndMm)}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <PairsTable
+        caption={t('app.plantThreshold.residualsCaption')}
+        columns={[t('app.plantThreshold.colEcd'), t('app.plantThreshold.colCaseEnd')]}
+        rows={fit.residuals.map((r) => ({
+          id: r.id,
+          title: byId.get(r.id)?.partNumber ?? r.id.slice(0, 8),
+          cells: [
+            `${show.depth(r.measuredEcdMm)} / ${show.depth(r.predictedEcdMm)}`,
+            `${show.depth(r.measuredCaseEndMm)} / ${show.depth(r.predictedCaseEndMm)}`,
+          ],
+        }))}
+      />
       <p class="note">{t('app.plantThreshold.residualsNote')}</p>
     </details>
   );

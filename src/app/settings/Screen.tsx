@@ -56,7 +56,6 @@ export default function SettingsScreen() {
   return (
     <div class="screen settings">
       <h1 tabIndex={-1}>{t('app.settings.title')}</h1>
-      <ShopServerCard />
       <section class="card" aria-labelledby="settings-language">
         <h2 id="settings-language">{t('app.settings.languageHeading')}</h2>
         <Segmented
@@ -87,6 +86,16 @@ export default function SettingsScreen() {
           />
         ))}
         <p class="note">{t('app.settings.overrideHint')}</p>
+      </section>
+      <section class="card" aria-labelledby="settings-theme">
+        <h2 id="settings-theme">{t('app.settings.themeHeading')}</h2>
+        <Segmented
+          name="settings-theme"
+          legend={t('app.settings.theme')}
+          value={s.theme}
+          choices={THEMES.map((th) => ({ value: th, label: t(`app.settings.themes.${th}`) }))}
+          onChange={(v) => patch(settings, { theme: v })}
+        />
       </section>
       {/* Lower sections in later tasks, so opening the screen is several short tasks. */}
       <Deferred>
@@ -212,16 +221,10 @@ export default function SettingsScreen() {
           )}
           <p class="note">{t('app.settings.shiftsHint')}</p>
         </section>
-        <section class="card" aria-labelledby="settings-theme">
-          <h2 id="settings-theme">{t('app.settings.themeHeading')}</h2>
-          <Segmented
-            name="settings-theme"
-            legend={t('app.settings.theme')}
-            value={s.theme}
-            choices={THEMES.map((th) => ({ value: th, label: t(`app.settings.themes.${th}`) }))}
-            onChange={(v) => patch(settings, { theme: v })}
-          />
-        </section>
+      </Deferred>
+      {/* Set up once per device by whoever installs it; an operator comes here for language, units and theme. */}
+      <Deferred>
+        <ShopServerCard />
       </Deferred>
     </div>
   );

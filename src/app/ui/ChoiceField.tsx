@@ -14,13 +14,23 @@ export interface ChoiceFieldProps {
   onChange: (value: string) => void;
   hint?: string | undefined;
   compact?: boolean;
+  /**
+   * Choices that are a person's or a file's own words (a furnace, a column heading), longer than a
+   * menu shows on a phone: the chosen one is drawn in lines of its own over the menu, which a tap still opens.
+   */
+  wrap?: boolean;
 }
 
-export function ChoiceField({ id, label, value, choices, onChange, hint, compact }: ChoiceFieldProps) {
+export function ChoiceField({ id, label, value, choices, onChange, hint, compact, wrap }: ChoiceFieldProps) {
   return (
     <div class={compact ? 'field field-compact' : 'field'}>
       <label for={id}>{label}</label>
-      <div class="field-box">
+      <div class={wrap ? 'field-box choice-wrap' : 'field-box'}>
+        {wrap && (
+          <span class="choice-shown" aria-hidden="true">
+            {choices.find((c) => c.value === value)?.label}
+          </span>
+        )}
         <select
           id={id}
           value={value}

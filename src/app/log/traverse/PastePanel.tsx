@@ -111,9 +111,11 @@ export function PastePanel({
       {preview && (
         <div class="paste-preview" aria-live="polite">
           <h5>{t('app.log.traverse.paste.preview', { count: preview.points.length })}</h5>
+          {/* One under the other: the file's own headings can be long. */}
           {preview.columns.length > 2 && (
-            <div class="field-grid">
+            <div class="paste-columns">
               <ChoiceField
+                wrap
                 id="lab-paste-depth-column"
                 label={t('app.log.traverse.paste.depthColumn')}
                 value={String(preview.depthColumn)}
@@ -121,6 +123,7 @@ export function PastePanel({
                 onChange={(v) => setChoices({ ...choices, depthColumn: Number(v) })}
               />
               <ChoiceField
+                wrap
                 id="lab-paste-hardness-column"
                 label={t('app.log.traverse.paste.hardnessColumn')}
                 value={String(preview.hardnessColumn)}

@@ -41,7 +41,7 @@ const step = (key: number, durationH: string, startC: string, endC: string, cp: 
   beta: field(''),
 });
 
-/** A boost and diffuse cycle for pinion KR-2231 (SAE 8620) of the demo scenario, then a drop to 845 °C. */
+/** A first form to edit: a textbook boost and diffuse on SAE 8620 at 925 °C, then a drop to 845 °C to harden (no shop's recipe). */
 export const DEFAULT_CYCLE_FORM: CycleForm = {
   steps: [
     step(1, '3.5', '925', '925', '1.1'),

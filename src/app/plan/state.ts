@@ -36,7 +36,7 @@ const potentialStep = (tempC: string, cp: string): PotentialStepForm => ({
   beta: field(''),
 });
 
-/** Pinion KR-2231 of the demo scenario (SAE 8620, ECD 0.75–1.00 mm at 550 HV, surface 0.75–0.90 %C). */
+/** A first request to plan: SAE 8620 for a typical 0.75–1.00 mm ECD at 550 HV and 0.75–0.90 %C surface (no shop's drawing). */
 export const DEFAULT_PLAN_FORM: PlanForm = {
   steel: defaultSteel('sae-8620'),
   model: '',

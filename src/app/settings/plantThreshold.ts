@@ -25,6 +25,21 @@ export interface StoredThreshold {
   apply: boolean;
 }
 
+const STORED_FIELDS = [
+  'furnace',
+  'grade',
+  'thresholdPct',
+  'low',
+  'high',
+  'factor',
+  'factorLow',
+  'factorHigh',
+  'loadCount',
+  'fittedAt',
+  'model',
+  'apply',
+] as const satisfies readonly (keyof StoredThreshold)[];
+
 const finiteIn = (x: unknown, min: number, max: number): x is number =>
   typeof x === 'number' && Number.isFinite(x) && x >= min && x <= max;
 const text = (x: unknown, max: number): x is string => typeof x === 'string' && x.trim() !== '' && x.length <= max;
@@ -59,34 +74,8 @@ export function readThresholds(stored: unknown): StoredThreshold[] {
   const byKey = new Map<string, StoredThreshold>();
   for (const entry of stored) {
     if (!isThreshold(entry)) continue;
-    const {
-      furnace,
-      grade,
-      thresholdPct,
-      low,
-      high,
-      factor,
-      factorLow,
-      factorHigh,
-      loadCount,
-      fittedAt,
-      model,
-      apply,
-    } = entry;
-    byKey.set(keyOf(entry), {
-      furnace,
-      grade,
-      thresholdPct,
-      low,
-      high,
-      factor,
-      factorLow,
-      factorHigh,
-      loadCount,
-      fittedAt,
-      model,
-      apply,
-    });
+    // Only the known fields are kept: anything else stored beside them is dropped.
+    byKey.set(keyOf(entry), Object.fromEntries(STORED_FIELDS.map((k) => [k, entry[k]])) as unknown as StoredThreshold);
   }
   return [...byKey.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([, v]) => v);
 }

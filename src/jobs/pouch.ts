@@ -76,7 +76,10 @@ export interface LogDatabase {
   changes(options?: ChangesOptions): Promise<ChangesResult>;
   info(): Promise<{ doc_count: number; update_seq: number | string }>;
   /** Live two-way replication with another database (the shop server's). */
-  sync(remote: LogDatabase, options: { live: boolean; retry: boolean; batch_size?: number }): Emitter;
+  sync(
+    remote: LogDatabase,
+    options: { live: boolean; retry: boolean; batch_size?: number; back_off_function?: (delay: number) => number },
+  ): Emitter;
   close(): Promise<void>;
   destroy(): Promise<void>;
 }

@@ -19,6 +19,11 @@ const Pouch = PouchDB as unknown as PouchStatic;
 
 let running: Emitter | undefined;
 let watching = false;
+let listening = false;
+
+/** Waits between retries: PouchDB's doubling, but never more than 30 s (a shop floor's network comes and goes). */
+const MAX_RETRY_MS = 30_000;
+const backOff = (delay: number) => Math.min(MAX_RETRY_MS, Math.max(1000, delay * 2));
 let pushedSeq: number | string = 0;
 
 /** The server's address for a path under it (`_session`, the database). */
@@ -125,6 +130,13 @@ export async function startSync(): Promise<void> {
     skip_setup: true,
     fetch: (url: string, options: RequestInit) => Pouch.fetch(url, { ...options, credentials: 'include' }),
   });
+  if (!listening) {
+    listening = true;
+    // The network is back: start again at once instead of waiting out the retry delay.
+    window.addEventListener('online', () => {
+      if (running) void startSync();
+    });
+  }
   if (!watching) {
     watching = true;
     // Every write here (or arrival) may change what waits for the server.
@@ -132,7 +144,7 @@ export async function startSync(): Promise<void> {
       if (logChanges.value >= 0) void noteLocalWrite();
     });
   }
-  const handle = db.sync(remote, { live: true, retry: true, batch_size: 250 });
+  const handle = db.sync(remote, { live: true, retry: true, batch_size: 1000, back_off_function: backOff });
   running = handle;
   const isCurrent = () => running === handle;
   handle
@@ -144,13 +156,17 @@ export async function startSync(): Promise<void> {
       };
       if (direction === 'push' && change.last_seq !== undefined) pushedSeq = change.last_seq;
       if (direction === 'pull') {
-        setStatus({ received: syncStatus.value.received + (change.docs_written ?? 0) });
+        const received = syncStatus.value.received + (change.docs_written ?? 0);
+        // A first replication of a big log takes a while: its progress, until the server has nothing more.
+        setStatus(syncStatus.value.state === 'refused' ? { received } : { received, state: 'receiving' });
         // The views read the log again; the store picks up what arrived.
         logChanges.value++;
       }
-      void countPending(db).then((pending) =>
-        setStatus({ pending, state: pending > 0 ? 'waiting' : syncStatus.value.state }),
-      );
+      void countPending(db).then((pending) => {
+        if (syncStatus.value.state !== 'receiving' || direction === 'push')
+          setStatus({ pending, state: pending > 0 ? 'waiting' : syncStatus.value.state });
+        else setStatus({ pending });
+      });
     })
     .on('paused', (error) => {
       if (!isCurrent()) return;
@@ -192,5 +208,7 @@ export async function noteLocalWrite(): Promise<void> {
   const store = await jobStore();
   if (!store.ok) return;
   const pending = await countPending(store.value.db);
-  if (pending > 0 && syncStatus.value.state !== 'refused') setStatus({ state: 'waiting', pending });
+  // While the first replication pulls, its own arrivals look like local changes: the progress stays.
+  if (pending > 0 && !['refused', 'receiving'].includes(syncStatus.value.state))
+    setStatus({ state: 'waiting', pending });
 }

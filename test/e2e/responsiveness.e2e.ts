@@ -36,10 +36,6 @@ describe('responsiveness, short: the throttled figures printed', () => {
     for (const phase of PHASES) {
       const tasks = figures.traced!.filter((t) => t.phase === phase);
       assert.ok(tasks.length > 0, `${phase}: main-thread tasks in the trace`);
-      assert.ok(
-        tasks.every((t) => t.cpuMs <= t.wallMs + 1),
-        `${phase}: a task's CPU time is within its wall time`,
-      );
     }
     // The heavy physics ran in the module worker: it was started, and it worked while the likely range,
     // the planner and the calibration were worked out (120 simulator runs cannot take under 5 ms).

@@ -222,7 +222,9 @@ const STATES: State[] = [
   {
     name: 'log-job-choices',
     route: `log/job/${CONFLICTED_JOB_ID}`,
-    act: async (page) => void (await page.waitForSelector('.open-choices')),
+    act: async (page) => {
+      await page.waitForSelector('.open-choices');
+    },
   },
   { name: 'log-filter', route: 'log', act: clickFirst('.log-filter summary') },
   { name: 'log-summary', route: 'log/summary' },

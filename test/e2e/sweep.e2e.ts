@@ -16,7 +16,14 @@ import { movedTo, backupText, demoLog, importFile } from './logData';
 import { BASE_URL, closeBrowser, launch, PHONE, phoneContext } from './browser';
 import { sweepPage, type SweepReport } from './sweepCheck';
 import { JOB_STATUSES, type Job } from '../../src/jobs/schema';
-import { APPLIED_THRESHOLD, LONG_FURNACE, TRAVERSED_JOB_ID, traversedJobs } from './sweepData';
+import {
+  APPLIED_THRESHOLD,
+  CONFLICTED_JOB_ID,
+  LONG_FURNACE,
+  otherDeviceCopy,
+  TRAVERSED_JOB_ID,
+  traversedJobs,
+} from './sweepData';
 
 let browser: Browser;
 before(async () => {
@@ -211,6 +218,14 @@ const STATES: State[] = [
     // Readings in HV taken for HRC: refused with what they likely are.
     act: labForm(clickFirst('label.segment:has(input[name="lab-traverse-unit"][value="HRC"])')),
   },
+  // The same load changed on another device: the values to pick from.
+  {
+    name: 'log-job-choices',
+    route: `log/job/${CONFLICTED_JOB_ID}`,
+    act: async (page) => {
+      await page.waitForSelector('.open-choices');
+    },
+  },
   { name: 'log-filter', route: 'log', act: clickFirst('.log-filter summary') },
   { name: 'log-summary', route: 'log/summary' },
   { name: 'log-calibration', route: 'log/calibration' },
@@ -281,8 +296,11 @@ describe('the sweep', () => {
       const page = await context.newPage();
       await page.goto(BASE_URL);
       await page.waitForSelector('main h1');
-      const report = await importFile(page, backupText([...longLog(), ...traversedJobs()]));
+      const traversed = traversedJobs();
+      const report = await importFile(page, backupText([...longLog(), ...traversed]));
       assert.match(report, /\d/u, 'the long log was imported');
+      const other = otherDeviceCopy(traversed.find((job) => job.id === CONFLICTED_JOB_ID)!);
+      assert.match(await importFile(page, backupText([other])), /\d/u, 'the other device’s file was read');
       const problems: string[] = [];
       const timing = process.env.CASEFRONT_SWEEP_TIMING === '1';
       for (const state of states) {

@@ -86,6 +86,23 @@ export function traversedJobs(now = Date.now()): Job[] {
   return [...loads, ...few];
 }
 
+/** The load whose copy from another device differs (see `otherDeviceCopy`). */
+export const CONFLICTED_JOB_ID = '5a3e0c1d-7b2f-4e6a-9c8d-000000000001';
+
+/**
+ * The same load as written on another device, read from its file (no change history): every field
+ * that differs is kept both ways on the job until a person picks one.
+ */
+export function otherDeviceCopy(job: Job): Job {
+  return {
+    ...job,
+    operator: '40711234',
+    status: 'onHold',
+    notes: 'Auf dem Bürorechner nachgetragen: Härteprüfung an Probe 2 wiederholt, Kern bei 2,4 mm gemessen.',
+    lab: { ecdMm: 0.79, surfaceHardness: { value: 58.5, unit: 'HRC' }, by: 'Labor Halle 3 Frühschicht' },
+  };
+}
+
 /** A learnt threshold for SAE 8620 in the long-named furnace, turned on: the cycle and planner say it is applied. */
 export const APPLIED_THRESHOLD: StoredThreshold = {
   furnace: LONG_FURNACE,

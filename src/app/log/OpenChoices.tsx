@@ -38,6 +38,10 @@ function valueText(field: string, alt: Alternative, index: number, ctx: Wording)
   return t('app.log.detail.versionN', { n: index + 1 });
 }
 
+/** A value as a person typed it (notes, a part number), shown as written, not as the app words figures. */
+const typedText = (field: string, alt: Alternative) =>
+  typeof alt.value === 'string' && alt.value !== '' && !['status', 'shift', 'shiftDate'].includes(field);
+
 export function OpenChoices({ entry, onSaved }: { entry: JobEntry; onSaved: (message: string) => void }) {
   const ctx = useScreenContext();
   const { t } = ctx;
@@ -62,7 +66,9 @@ export function OpenChoices({ entry, onSaved }: { entry: JobEntry; onSaved: (mes
           <ul>
             {(entry.open[field] ?? []).map((alt, i) => (
               <li key={alt.version}>
-                <span class="open-choice-value">{valueText(field, alt, i, ctx)}</span>
+                <span class="open-choice-value" data-literal={typedText(field, alt) || undefined}>
+                  {valueText(field, alt, i, ctx)}
+                </span>
                 {alt.by && <span class="note"> {t('app.log.detail.byUser', { name: alt.by })}</span>}
                 <button type="button" class="button" onClick={() => void keep(field, alt)}>
                   {t('app.log.detail.keepValue')}

@@ -5,12 +5,15 @@
  * shown before trying that holding a load is the supervisor's; the supervisor's hold comes back.
  * Both phones offline, one with its clock 2 h fast, change one job: different fields merge by
  * themselves, the same field keeps both values on the job until a person picks, on both phones.
+ * A new phone's first replication of a 10 000-job plant log, with its progress in the header.
  */
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { BASE_URL, closeBrowser, launch, openScreen, phoneContext, type Recorder } from './browser';
+import { docOfJob } from '../../src/jobs/documents';
 import { TEST_PEOPLE } from '../server/shopServer';
+import { demoLog } from './logData';
 
 const DATABASE = process.env.CASEFRONT_SHOP_DB ?? 'plant-1';
 
@@ -23,14 +26,14 @@ after(() => closeBrowser(browser));
 const password = (name: string) => TEST_PEOPLE.find((p) => p.name === name)!.password;
 
 /** A phone with the shop server set up in its settings (as a person types it once). */
-async function device(): Promise<{ context: BrowserContext; page: Page; recorder: Recorder }> {
+async function device(database = DATABASE): Promise<{ context: BrowserContext; page: Page; recorder: Recorder }> {
   const { context, recorder } = await phoneContext(browser);
   await context.addInitScript((database) => {
     if (location.protocol !== 'http:') return; // the blank first page has no storage
     if (!localStorage.getItem('casefront.shop')) {
       localStorage.setItem('casefront.shop', JSON.stringify({ address: '/db/', database }));
     }
-  }, DATABASE);
+  }, database);
   const page = await context.newPage();
   return { context, page, recorder };
 }
@@ -166,5 +169,57 @@ describe('one shop log on two devices', () => {
       assert.doesNotMatch((await phone.page.textContent('main')) ?? '', /Checked on the supervisor phone\./u);
     }
     for (const phone of [operator, supervisor]) await phone.context.close();
+  });
+
+  it('a new phone receives a 10 000-job plant log with its progress shown (syncInitial10kS)', async () => {
+    // A plant database of its own, filled over the server's API as replication from another device would.
+    const server = process.env.CASEFRONT_SHOP_URL!;
+    const [adminName, adminPassword] = (process.env.CASEFRONT_SHOP_ADMIN ?? ':').split(':');
+    const auth = { Authorization: `Basic ${Buffer.from(`${adminName}:${adminPassword}`).toString('base64')}` };
+    const json = { ...auth, 'Content-Type': 'application/json' };
+    const database = 'plant-scale';
+    assert.ok((await fetch(`${server}${database}`, { method: 'PUT', headers: auth })).ok);
+    const security = { admins: { names: [], roles: [] }, members: { names: [], roles: ['supervisor'] } };
+    await fetch(`${server}${database}/_security`, { method: 'PUT', headers: json, body: JSON.stringify(security) });
+    const jobs = demoLog(10_000, 3);
+    for (let i = 0; i < jobs.length; i += 1000) {
+      const docs = jobs.slice(i, i + 1000).map((job) => docOfJob(job, 'mk'));
+      const answer = await fetch(`${server}${database}/_bulk_docs`, {
+        method: 'POST',
+        headers: json,
+        body: JSON.stringify({ docs }),
+      });
+      assert.equal(answer.status, 201);
+    }
+
+    const phone = await device(database);
+    const startedAt = Date.now();
+    const progress = phone.page.waitForFunction(
+      () => document.querySelector('header [data-sync-state="receiving"]')?.textContent,
+      undefined,
+      { timeout: 60_000 },
+    );
+    assert.match(await signIn(phone.page, 'sv', password('sv')), /^Signed in as sv\./u);
+    const shown = String(await (await progress).jsonValue());
+    assert.match(shown, /^\d[\d,]* jobs? received from the shop server…$/u);
+    await phone.page.waitForSelector('header [data-sync-state="upToDate"]', { timeout: 120_000 });
+    const seconds = (Date.now() - startedAt) / 1000;
+    const stored = await phone.page.evaluate(
+      () =>
+        new Promise<number>((resolve, reject) => {
+          const open = indexedDB.open('_pouch_casefront-log');
+          open.onerror = () => reject(new Error('no log database'));
+          open.onsuccess = () => {
+            const count = open.result.transaction('document-store').objectStore('document-store').count();
+            count.onsuccess = () => resolve(count.result);
+          };
+        }),
+    );
+    console.log(
+      `syncInitial10kS: ${seconds.toFixed(1)} s for ${stored} documents (target ≤ 30 s); progress read "${shown}"`,
+    );
+    assert.equal(stored, 10_000);
+    assert.ok(seconds <= 30, `first replication took ${seconds.toFixed(1)} s`);
+    await phone.context.close();
   });
 });

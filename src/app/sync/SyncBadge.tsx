@@ -1,4 +1,5 @@
 /** The shop server's state in the header, readable at a glance; nothing when no server is set up. */
+import { formatMessageNumber } from '../../i18n/format';
 import { useScreenContext } from '../settings/screenContext';
 // The rules' module alone (plain constants), not the log's index.
 import { REFUSAL_CODES } from '../../jobs/designDoc';
@@ -19,11 +20,13 @@ export function SyncBadge() {
   const text =
     status.state === 'waiting'
       ? t('app.sync.status.waiting', { count: status.pending })
-      : status.state === 'offline'
-        ? t('app.sync.status.offline', { time: clockTime(status.since, locale) })
-        : status.state === 'refused'
-          ? t('app.sync.status.refused', { reason: t(`app.sync.refusals.${refusalKey(status.reason)}`) })
-          : t(`app.sync.status.${status.state}`);
+      : status.state === 'receiving'
+        ? t('app.sync.status.receiving', { count: status.received, jobs: formatMessageNumber(status.received, locale) })
+        : status.state === 'offline'
+          ? t('app.sync.status.offline', { time: clockTime(status.since, locale) })
+          : status.state === 'refused'
+            ? t('app.sync.status.refused', { reason: t(`app.sync.refusals.${refusalKey(status.reason)}`) })
+            : t(`app.sync.status.${status.state}`);
   return (
     <span class={`offline-status sync-status sync-status-${status.state}`} role="status" data-sync-state={status.state}>
       {text}

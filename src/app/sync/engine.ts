@@ -144,7 +144,7 @@ export async function startSync(): Promise<void> {
       if (logChanges.value >= 0) void noteLocalWrite();
     });
   }
-  const handle = db.sync(remote, { live: true, retry: true, batch_size: 250, back_off_function: backOff });
+  const handle = db.sync(remote, { live: true, retry: true, batch_size: 1000, back_off_function: backOff });
   running = handle;
   const isCurrent = () => running === handle;
   handle
@@ -156,13 +156,17 @@ export async function startSync(): Promise<void> {
       };
       if (direction === 'push' && change.last_seq !== undefined) pushedSeq = change.last_seq;
       if (direction === 'pull') {
-        setStatus({ received: syncStatus.value.received + (change.docs_written ?? 0) });
+        const received = syncStatus.value.received + (change.docs_written ?? 0);
+        // A first replication of a big log takes a while: its progress, until the server has nothing more.
+        setStatus(syncStatus.value.state === 'refused' ? { received } : { received, state: 'receiving' });
         // The views read the log again; the store picks up what arrived.
         logChanges.value++;
       }
-      void countPending(db).then((pending) =>
-        setStatus({ pending, state: pending > 0 ? 'waiting' : syncStatus.value.state }),
-      );
+      void countPending(db).then((pending) => {
+        if (syncStatus.value.state !== 'receiving' || direction === 'push')
+          setStatus({ pending, state: pending > 0 ? 'waiting' : syncStatus.value.state });
+        else setStatus({ pending });
+      });
     })
     .on('paused', (error) => {
       if (!isCurrent()) return;
@@ -204,5 +208,7 @@ export async function noteLocalWrite(): Promise<void> {
   const store = await jobStore();
   if (!store.ok) return;
   const pending = await countPending(store.value.db);
-  if (pending > 0 && syncStatus.value.state !== 'refused') setStatus({ state: 'waiting', pending });
+  // While the first replication pulls, its own arrivals look like local changes: the progress stays.
+  if (pending > 0 && !['refused', 'receiving'].includes(syncStatus.value.state))
+    setStatus({ state: 'waiting', pending });
 }

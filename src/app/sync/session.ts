@@ -16,7 +16,8 @@ export const signedIn = persisted<SignedIn>('shop.session', { name: '', roles: [
     : { name: '', roles: [] };
 });
 
-export type SyncState = 'off' | 'signedOut' | 'connecting' | 'upToDate' | 'waiting' | 'offline' | 'refused';
+export type SyncState =
+  'off' | 'signedOut' | 'connecting' | 'receiving' | 'upToDate' | 'waiting' | 'offline' | 'refused';
 
 export interface SyncStatus {
   state: SyncState;
